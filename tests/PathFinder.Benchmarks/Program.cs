@@ -1,0 +1,6 @@
+namespace PathFinder.Benchmarks;
+
+internal static class Program
+{
+    private static int Main(string[] args) => 0;
+}
