@@ -1,0 +1,11 @@
+namespace PathFinder.Diagnostics;
+
+/// <summary>How serious a diagnostic is.</summary>
+public enum Severity
+{
+    /// <summary>Worth knowing; the analysis proceeds unchanged.</summary>
+    Warning,
+
+    /// <summary>The affected record cannot be used; the data set does not pass validation.</summary>
+    Error,
+}
