@@ -1,0 +1,86 @@
+using System.CommandLine;
+using System.Globalization;
+using PathFinder.Cli.Output;
+using PathFinder.Data;
+using PathFinder.Diagnostics;
+using PathFinder.Quantities;
+
+namespace PathFinder.Cli.Commands;
+
+/// <summary><c>pathfinder validate &lt;network&gt;</c>: reads the data, checks every row, prints a summary and every problem.</summary>
+public sealed class ValidateCommand
+{
+    private readonly Argument<string> _network = new("network") { Description = "A CSV file or a folder of CSV files." };
+    private readonly Option<bool> _json = new("--json") { Description = "Write the summary and diagnostics as JSON." };
+
+    /// <summary>Builds the command bound to <paramref name="context"/>.</summary>
+    public Command Build(CommandContext context)
+    {
+        var command = new Command("validate", "Check every equation (element and charge balance), unit, number and uncertainty; list every problem with file:line:column.")
+        {
+            _network,
+            _json,
+        };
+        command.SetAction(parse => Run(parse.GetValue(_network)!, parse.GetValue(_json), context));
+        return command;
+    }
+
+    /// <summary>Runs the validation and returns the exit code: 0 valid (warnings allowed), 2 errors found.</summary>
+    public static int Run(string path, bool json, CommandContext context)
+    {
+        ArgumentNullException.ThrowIfNull(context);
+        NetworkReadResult result = NetworkReader.Read(path);
+        NetworkSummary summary = NetworkSummary.Of(result.Network);
+        int exitCode = result.HasErrors ? ExitCodes.InvalidInput : ExitCodes.Success;
+        if (json)
+        {
+            Json.Write(context.Out, new
+            {
+                network = path,
+                valid = !result.HasErrors,
+                files = result.Files,
+                speciesFile = result.SpeciesFile,
+                summary = new
+                {
+                    measurements = summary.MeasurementCount,
+                    species = summary.SpeciesCount,
+                    sources = summary.MeasurementsBySource.Select(pair => new { name = pair.Key, measurements = pair.Value }),
+                    properties = summary.MeasurementsByProperty.Select(pair => new { property = pair.Key.Code(), measurements = pair.Value }),
+                    elements = summary.Elements,
+                    referenceStates = summary.ReferenceStatesUsed.Select(species => species.Name),
+                },
+                errors = result.Errors.Count(),
+                warnings = result.Warnings.Count(),
+                diagnostics = result.Diagnostics.Select(Json.Of),
+            });
+            return exitCode;
+        }
+
+        TextWriter output = context.Out;
+        output.WriteLine($"Network {path}: {summary.MeasurementCount} usable measurement(s) in {result.Files.Count} file(s)");
+        if (result.SpeciesFile is not null)
+        {
+            output.WriteLine($"  species file   {result.SpeciesFile}");
+        }
+
+        output.WriteLine($"  species        {summary.SpeciesCount}");
+        output.WriteLine($"  sources        {summary.MeasurementsBySource.Count}: {string.Join(", ", summary.MeasurementsBySource.Select(pair => $"{pair.Key} ({pair.Value})"))}");
+        output.WriteLine($"  properties     {string.Join(", ", summary.MeasurementsByProperty.Select(pair => $"{pair.Key.Code()} ({pair.Value})"))}");
+        output.WriteLine($"  elements       {string.Join(", ", summary.Elements)}");
+        output.WriteLine($"  reference      {string.Join(", ", summary.ReferenceStatesUsed.Select(species => species.Name))}");
+        int errors = result.Errors.Count();
+        int warnings = result.Warnings.Count();
+        output.WriteLine();
+        output.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{errors} error(s), {warnings} warning(s)"));
+        foreach (Diagnostic diagnostic in result.Diagnostics)
+        {
+            output.WriteLine($"  {diagnostic}");
+        }
+
+        output.WriteLine();
+        output.WriteLine(result.HasErrors
+            ? "Result: INVALID. Rows with errors are left out of every analysis until fixed (exit code 2)."
+            : warnings > 0 ? "Result: valid, with warnings." : "Result: valid.");
+        return exitCode;
+    }
+}

@@ -1,0 +1,195 @@
+using System.Text;
+using Fractions;
+
+namespace PathFinder.Chemistry;
+
+/// <summary>A chemical equation as a set of signed terms (products positive, reactants negative), netted and exact.</summary>
+/// <remarks>
+/// Equations form a vector space over the rationals, which is what Hess's law uses: flipping an equation
+/// negates it, scaling multiplies every coefficient, and summing adds terms, cancelling intermediates.
+/// A species that appears on both sides is netted when the equation is built.
+/// </remarks>
+public sealed class ChemicalEquation
+{
+    private readonly EquationTerm[] _terms;
+
+    private ChemicalEquation(EquationTerm[] terms, bool isFormation)
+    {
+        _terms = terms;
+        IsFormation = isFormation;
+    }
+
+    /// <summary>The netted terms, reactants first, each side in order of first appearance.</summary>
+    public IReadOnlyList<EquationTerm> Terms => _terms;
+
+    /// <summary>Whether this equation was written in the formation shorthand (a single species).</summary>
+    public bool IsFormation { get; }
+
+    /// <summary>The species formed, when <see cref="IsFormation"/> is true.</summary>
+    public Species? FormedSpecies => IsFormation ? _terms.First(term => term.Coefficient > Fraction.Zero && !ReferenceStates.HasZeroFormationProperties(term.Species)).Species : null;
+
+    /// <summary>Whether no species remains after netting.</summary>
+    public bool IsEmpty => _terms.Length == 0;
+
+    /// <summary>Builds an equation from signed terms, netting repeated species and dropping zero coefficients.</summary>
+    public static ChemicalEquation FromTerms(IEnumerable<EquationTerm> terms) => FromTerms(terms, isFormation: false);
+
+    /// <summary>The formation reaction of <paramref name="species"/> from its elements in their reference states.</summary>
+    public static ChemicalEquation Formation(Species species)
+    {
+        ArgumentNullException.ThrowIfNull(species);
+        return FromTerms(ReferenceStates.FormationTerms(species), isFormation: true);
+    }
+
+    /// <summary>Reads an equation (throws on bad input; use <see cref="EquationParser"/> for located failures).</summary>
+    public static ChemicalEquation Parse(string text) => EquationParser.Parse(text).Value;
+
+    /// <summary>The signed coefficient of <paramref name="species"/>, zero when absent.</summary>
+    public Fraction CoefficientOf(Species species)
+    {
+        foreach (EquationTerm term in _terms)
+        {
+            if (term.Species.Equals(species))
+            {
+                return term.Coefficient;
+            }
+        }
+
+        return Fraction.Zero;
+    }
+
+    /// <summary>This equation multiplied by <paramref name="factor"/> (a negative factor flips it).</summary>
+    public ChemicalEquation Scale(Fraction factor) =>
+        FromTerms(_terms.Select(term => term with { Coefficient = term.Coefficient * factor }));
+
+    /// <summary>The sum of two equations; intermediates cancel.</summary>
+    public ChemicalEquation Add(ChemicalEquation other)
+    {
+        ArgumentNullException.ThrowIfNull(other);
+        return FromTerms(_terms.Concat(other._terms));
+    }
+
+    /// <summary>The change in moles of gas, Σ ν over gaseous species (used for ΔH = ΔU + Δn(gas)·R·T).</summary>
+    public Fraction GasMoleChange()
+    {
+        Fraction total = Fraction.Zero;
+        foreach (EquationTerm term in _terms)
+        {
+            if (term.Species.IsGas && !term.Species.Formula.IsElectron)
+            {
+                total += term.Coefficient;
+            }
+        }
+
+        return total;
+    }
+
+    /// <summary>Checks element and charge balance; returns one message per imbalance, empty when balanced.</summary>
+    /// <remarks>Messages spell the imbalance out: "left has 4 H, right has 2 H".</remarks>
+    public IReadOnlyList<string> FindImbalances()
+    {
+        var left = new SortedDictionary<string, Fraction>(StringComparer.Ordinal);
+        var right = new SortedDictionary<string, Fraction>(StringComparer.Ordinal);
+        Fraction leftCharge = Fraction.Zero;
+        Fraction rightCharge = Fraction.Zero;
+        foreach (EquationTerm term in _terms)
+        {
+            bool product = term.Coefficient > Fraction.Zero;
+            Fraction amount = product ? term.Coefficient : -term.Coefficient;
+            SortedDictionary<string, Fraction> side = product ? right : left;
+            foreach (KeyValuePair<string, Fraction> pair in term.Species.Formula.Composition)
+            {
+                side[pair.Key] = side.GetValueOrDefault(pair.Key, Fraction.Zero) + (amount * pair.Value);
+            }
+
+            if (product)
+            {
+                rightCharge += amount * term.Species.Formula.Charge;
+            }
+            else
+            {
+                leftCharge += amount * term.Species.Formula.Charge;
+            }
+        }
+
+        var problems = new List<string>();
+        foreach (string element in left.Keys.Union(right.Keys).OrderBy(symbol => symbol, StringComparer.Ordinal))
+        {
+            Fraction l = left.GetValueOrDefault(element, Fraction.Zero);
+            Fraction r = right.GetValueOrDefault(element, Fraction.Zero);
+            if (l != r)
+            {
+                problems.Add($"left has {RationalText.Format(l)} {element}, right has {RationalText.Format(r)} {element}");
+            }
+        }
+
+        if (leftCharge != rightCharge)
+        {
+            problems.Add($"left has charge {SignedCharge(leftCharge)}, right has charge {SignedCharge(rightCharge)}");
+        }
+
+        return problems;
+    }
+
+    /// <summary>Formats as <c>CH4(g) + 2 O2(g) -> CO2(g) + 2 H2O(l)</c>.</summary>
+    public override string ToString()
+    {
+        var text = new StringBuilder();
+        AppendSide(text, _terms.Where(term => term.Coefficient < Fraction.Zero), negate: true);
+        text.Append(" -> ");
+        AppendSide(text, _terms.Where(term => term.Coefficient > Fraction.Zero), negate: false);
+        return text.ToString();
+    }
+
+    private static string SignedCharge(Fraction charge) =>
+        charge > Fraction.Zero ? "+" + RationalText.Format(charge) : RationalText.Format(charge);
+
+    private static void AppendSide(StringBuilder text, IEnumerable<EquationTerm> terms, bool negate)
+    {
+        bool first = true;
+        foreach (EquationTerm term in terms)
+        {
+            if (!first)
+            {
+                text.Append(" + ");
+            }
+
+            Fraction amount = negate ? -term.Coefficient : term.Coefficient;
+            if (amount != Fraction.One)
+            {
+                text.Append(RationalText.Format(amount)).Append(' ');
+            }
+
+            text.Append(term.Species.Name);
+            first = false;
+        }
+
+        if (first)
+        {
+            text.Append('0');
+        }
+    }
+
+    private static ChemicalEquation FromTerms(IEnumerable<EquationTerm> terms, bool isFormation)
+    {
+        var order = new List<Species>();
+        var sums = new Dictionary<Species, Fraction>();
+        foreach (EquationTerm term in terms)
+        {
+            if (!sums.TryGetValue(term.Species, out Fraction sum))
+            {
+                order.Add(term.Species);
+                sum = Fraction.Zero;
+            }
+
+            sums[term.Species] = (sum + term.Coefficient).Reduce();
+        }
+
+        EquationTerm[] netted = order
+            .Where(species => !sums[species].IsZero)
+            .Select(species => new EquationTerm(species, sums[species]))
+            .OrderBy(term => term.Coefficient > Fraction.Zero ? 1 : 0)
+            .ToArray();
+        return new ChemicalEquation(netted, isFormation);
+    }
+}

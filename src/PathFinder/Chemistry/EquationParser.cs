@@ -1,0 +1,239 @@
+using Fractions;
+using PathFinder.Diagnostics;
+
+namespace PathFinder.Chemistry;
+
+/// <summary>Reads equations such as <c>CH4(g) + 2 O2(g) -> CO2(g) + 2 H2O(l)</c>, or a single species for its formation.</summary>
+/// <remarks>
+/// <para>Arrows: <c>-&gt;</c>, <c>→</c>, <c>=</c> or <c>&lt;=&gt;</c>. Terms are separated by a <c>+</c> with spaces around it
+/// (a <c>+</c> touching a formula is a charge: <c>Na+(aq) + Cl-(aq)</c>). Coefficients are integers, decimals or
+/// fractions (<c>1/2</c>, <c>3/2</c>, <c>0.5</c>), written before the species, with or without a space, and are
+/// kept exact.</para>
+/// <para>Formation shorthand: a single species and no arrow means its formation from the elements in their
+/// reference states (<see cref="ReferenceStates"/>).</para>
+/// </remarks>
+public static class EquationParser
+{
+    private static readonly string[] Arrows = ["<=>", "->", "→", "="];
+
+    /// <summary>Reads an equation, resolving species with <see cref="SpeciesParser"/>. Never throws for bad input.</summary>
+    public static ParseResult<ChemicalEquation> Parse(string text) => Parse(text, SpeciesParser.Parse);
+
+    /// <summary>Reads an equation, resolving each species token with <paramref name="resolveSpecies"/> (for declared keys).</summary>
+    public static ParseResult<ChemicalEquation> Parse(string text, Func<string, ParseResult<Species>> resolveSpecies)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        ArgumentNullException.ThrowIfNull(resolveSpecies);
+        if (string.IsNullOrWhiteSpace(text))
+        {
+            return ParseResult<ChemicalEquation>.Fail(0, "missing-arrow", "the equation is empty", "write reactants -> products, or a single species for its formation");
+        }
+
+        (int arrowAt, int arrowLength) = FindArrow(text, out ParseFailure? arrowFailure);
+        if (arrowFailure is not null)
+        {
+            return ParseResult<ChemicalEquation>.Fail(arrowFailure);
+        }
+
+        if (arrowAt < 0)
+        {
+            ParseResult<List<EquationTerm>> single = ReadSide(text, 0, text.Length, resolveSpecies, sign: 1);
+            if (!single.TryGetValue(out List<EquationTerm>? terms))
+            {
+                return ParseResult<ChemicalEquation>.Fail(single.Failure);
+            }
+
+            if (terms.Count != 1 || terms[0].Coefficient != Fraction.One)
+            {
+                return ParseResult<ChemicalEquation>.Fail(text.Length, "missing-arrow", "the equation has no arrow", "write reactants -> products; a single species alone (no coefficient) means its formation from the elements");
+            }
+
+            ChemicalEquation formation = ChemicalEquation.Formation(terms[0].Species);
+            if (formation.IsEmpty)
+            {
+                return ParseResult<ChemicalEquation>.Fail(0, "reference-formation", $"{terms[0].Species.Name} is an element in its reference state (or a conventional zero): its formation reaction is empty", "measure a reaction instead, or drop this row");
+            }
+
+            return ParseResult<ChemicalEquation>.Ok(formation);
+        }
+
+        ParseResult<List<EquationTerm>> left = ReadSide(text, 0, arrowAt, resolveSpecies, sign: -1);
+        if (!left.TryGetValue(out List<EquationTerm>? reactants))
+        {
+            return ParseResult<ChemicalEquation>.Fail(left.Failure);
+        }
+
+        ParseResult<List<EquationTerm>> right = ReadSide(text, arrowAt + arrowLength, text.Length, resolveSpecies, sign: 1);
+        if (!right.TryGetValue(out List<EquationTerm>? products))
+        {
+            return ParseResult<ChemicalEquation>.Fail(right.Failure);
+        }
+
+        if (reactants.Count == 0 || products.Count == 0)
+        {
+            int where = reactants.Count == 0 ? 0 : arrowAt + arrowLength;
+            return ParseResult<ChemicalEquation>.Fail(where, "bad-equation", reactants.Count == 0 ? "nothing before the arrow" : "nothing after the arrow", "write reactants -> products");
+        }
+
+        ChemicalEquation equation = ChemicalEquation.FromTerms(reactants.Concat(products));
+        if (equation.IsEmpty)
+        {
+            return ParseResult<ChemicalEquation>.Fail(0, "bad-equation", "every species cancels: the equation is empty", "check the equation");
+        }
+
+        return ParseResult<ChemicalEquation>.Ok(equation);
+    }
+
+    private static (int At, int Length) FindArrow(string text, out ParseFailure? failure)
+    {
+        failure = null;
+        int found = -1;
+        int length = 0;
+        for (int i = 0; i < text.Length; i++)
+        {
+            foreach (string arrow in Arrows)
+            {
+                if (string.CompareOrdinal(text, i, arrow, 0, arrow.Length) != 0)
+                {
+                    continue;
+                }
+
+                if (found >= 0)
+                {
+                    failure = new ParseFailure(i, "the equation has more than one arrow", "write one reaction per row: reactants -> products", "bad-equation");
+                    return (-1, 0);
+                }
+
+                found = i;
+                length = arrow.Length;
+                i += arrow.Length - 1;
+                break;
+            }
+        }
+
+        return (found, length);
+    }
+
+    private static ParseResult<List<EquationTerm>> ReadSide(string text, int start, int end, Func<string, ParseResult<Species>> resolveSpecies, int sign)
+    {
+        var terms = new List<EquationTerm>();
+        var words = new List<(string Word, int Offset)>();
+        int i = start;
+        while (i <= end)
+        {
+            while (i < end && char.IsWhiteSpace(text[i]))
+            {
+                i++;
+            }
+
+            if (i >= end)
+            {
+                break;
+            }
+
+            int wordStart = i;
+            while (i < end && !char.IsWhiteSpace(text[i]))
+            {
+                i++;
+            }
+
+            words.Add((text[wordStart..i], wordStart));
+        }
+
+        var current = new List<(string Word, int Offset)>();
+        foreach ((string word, int offset) in words.Append(("+", end)))
+        {
+            if (word != "+")
+            {
+                current.Add((word, offset));
+                continue;
+            }
+
+            if (current.Count == 0)
+            {
+                if (offset == end && terms.Count == 0 && words.Count == 0)
+                {
+                    break;
+                }
+
+                return ParseResult<List<EquationTerm>>.Fail(offset, "bad-equation", "a '+' has no species on one side", "separate species with ' + ' and write nothing else between them");
+            }
+
+            ParseResult<EquationTerm> term = ReadTerm(current, resolveSpecies, sign);
+            if (!term.TryGetValue(out EquationTerm value))
+            {
+                return ParseResult<List<EquationTerm>>.Fail(term.Failure);
+            }
+
+            terms.Add(value);
+            current.Clear();
+        }
+
+        return ParseResult<List<EquationTerm>>.Ok(terms);
+    }
+
+    private static ParseResult<EquationTerm> ReadTerm(List<(string Word, int Offset)> words, Func<string, ParseResult<Species>> resolveSpecies, int sign)
+    {
+        if (words.Count > 2)
+        {
+            return ParseResult<EquationTerm>.Fail(words[2].Offset, "bad-equation", $"unexpected '{words[2].Word}': a term is an optional coefficient and one species", "separate species with ' + ' (spaces around the plus)");
+        }
+
+        Fraction coefficient = Fraction.One;
+        string speciesText;
+        int speciesOffset;
+        if (words.Count == 2)
+        {
+            if (!RationalText.TryParse(words[0].Word, out coefficient))
+            {
+                return ParseResult<EquationTerm>.Fail(words[0].Offset, "bad-coefficient", $"'{words[0].Word}' is not a coefficient", "write coefficients as 2, 0.5 or 3/2 before the species");
+            }
+
+            (speciesText, speciesOffset) = words[1];
+        }
+        else
+        {
+            (string word, int offset) = words[0];
+            int glued = 0;
+            while (glued < word.Length && (char.IsAsciiDigit(word[glued]) || word[glued] is '.' or '/'))
+            {
+                glued++;
+            }
+
+            if (glued > 0 && glued < word.Length)
+            {
+                if (!RationalText.TryParse(word[..glued], out coefficient))
+                {
+                    return ParseResult<EquationTerm>.Fail(offset, "bad-coefficient", $"'{word[..glued]}' is not a coefficient", "write coefficients as 2, 0.5 or 3/2 before the species");
+                }
+            }
+            else
+            {
+                glued = 0;
+            }
+
+            speciesText = word[glued..];
+            speciesOffset = offset + glued;
+        }
+
+        if (coefficient <= Fraction.Zero)
+        {
+            return ParseResult<EquationTerm>.Fail(words[0].Offset, "bad-coefficient", "coefficients must be positive", "move the species to the other side of the arrow instead of using a negative or zero coefficient");
+        }
+
+        ParseResult<Species> species = resolveSpecies(speciesText);
+        if (!species.TryGetValue(out Species? value))
+        {
+            ParseFailure failure = species.Failure!.Shift(speciesOffset);
+            int plus = speciesText.IndexOf('+', StringComparison.Ordinal);
+            if (plus >= 0 && plus < speciesText.Length - 1 && (char.IsAsciiLetterUpper(speciesText[plus + 1]) || char.IsAsciiDigit(speciesText[plus + 1])))
+            {
+                failure = failure with { Hint = "separate species with ' + ' (spaces around the plus); a + touching a formula is read as a charge" };
+            }
+
+            return ParseResult<EquationTerm>.Fail(failure);
+        }
+
+        return ParseResult<EquationTerm>.Ok(new EquationTerm(value, sign < 0 ? -coefficient : coefficient));
+    }
+}

@@ -1,0 +1,256 @@
+using System.Globalization;
+using System.Text;
+using CsvHelper;
+using CsvHelper.Configuration;
+using PathFinder.Diagnostics;
+
+namespace PathFinder.Data;
+
+/// <summary>A CSV file read with CsvHelper: a header, rows with field locations, the dialect found, and problems.</summary>
+/// <remarks>
+/// RFC 4180 quoting, UTF-8 with or without BOM, lines starting with <c>#</c> are comments. A file saved by a
+/// spreadsheet in a comma-decimal locale (semicolon separators) is detected from its header and read with
+/// decimal commas; the caller is told so it can say it once.
+/// </remarks>
+public sealed class CsvTable
+{
+    private CsvTable(string file, IReadOnlyList<string> header, int headerLine, IReadOnlyList<int> headerColumns, IReadOnlyList<CsvRow> rows, char delimiter)
+    {
+        File = file;
+        Header = header;
+        HeaderLine = headerLine;
+        HeaderColumns = headerColumns;
+        Rows = rows;
+        Delimiter = delimiter;
+    }
+
+    /// <summary>The file path as given.</summary>
+    public string File { get; }
+
+    /// <summary>The header names as written (trimmed).</summary>
+    public IReadOnlyList<string> Header { get; }
+
+    /// <summary>1-based line of the header.</summary>
+    public int HeaderLine { get; }
+
+    /// <summary>1-based columns of the header names.</summary>
+    public IReadOnlyList<int> HeaderColumns { get; }
+
+    /// <summary>The data rows.</summary>
+    public IReadOnlyList<CsvRow> Rows { get; }
+
+    /// <summary>The field separator found: ',' normally, ';' for a comma-decimal spreadsheet export, or a tab.</summary>
+    public char Delimiter { get; }
+
+    /// <summary>Whether numbers in this file use a decimal comma (semicolon-separated files).</summary>
+    public bool DecimalComma => Delimiter == ';';
+
+    /// <summary>The index of a header name (case-insensitive), or -1.</summary>
+    public int IndexOf(string name)
+    {
+        for (int i = 0; i < Header.Count; i++)
+        {
+            if (string.Equals(Header[i], name, StringComparison.OrdinalIgnoreCase))
+            {
+                return i;
+            }
+        }
+
+        return -1;
+    }
+
+    /// <summary>Reads a CSV file; problems that make the file unreadable are added to <paramref name="diagnostics"/> and null is returned.</summary>
+    public static CsvTable? Read(string path, string displayPath, ICollection<Diagnostic> diagnostics)
+    {
+        ArgumentNullException.ThrowIfNull(path);
+        ArgumentNullException.ThrowIfNull(diagnostics);
+        byte[] bytes;
+        try
+        {
+            bytes = System.IO.File.ReadAllBytes(path);
+        }
+        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
+        {
+            diagnostics.Add(Diagnostic.Error("unreadable-file", new SourceLocation(displayPath), $"cannot read the file: {exception.Message}", "check the path and permissions"));
+            return null;
+        }
+
+        return Parse(bytes, displayPath, diagnostics);
+    }
+
+    /// <summary>Parses CSV content already in memory (see <see cref="Read"/>).</summary>
+    public static CsvTable? Parse(byte[] bytes, string displayPath, ICollection<Diagnostic> diagnostics)
+    {
+        ArgumentNullException.ThrowIfNull(bytes);
+        var fileLocation = new SourceLocation(displayPath);
+        if (Array.IndexOf(bytes, (byte)0) >= 0)
+        {
+            diagnostics.Add(Diagnostic.Error("binary-file", fileLocation, "the file contains NUL bytes: it is not a text CSV file", "export the sheet as CSV (UTF-8)"));
+            return null;
+        }
+
+        string text;
+        try
+        {
+            text = new UTF8Encoding(encoderShouldEmitUTF8Identifier: false, throwOnInvalidBytes: true).GetString(bytes);
+        }
+        catch (DecoderFallbackException)
+        {
+            diagnostics.Add(Diagnostic.Error("not-utf8", fileLocation, "the file is not valid UTF-8 text", "save the CSV as UTF-8 (in a spreadsheet: 'CSV UTF-8')"));
+            return null;
+        }
+
+        if (text.Length > 0 && text[0] == '\uFEFF')
+        {
+            text = text[1..];
+        }
+
+        string[] lines = text.Split('\n');
+        int headerIndex = Array.FindIndex(lines, line => line.Trim().Length > 0 && !line.TrimStart().StartsWith('#'));
+        if (headerIndex < 0)
+        {
+            diagnostics.Add(Diagnostic.Error("empty-file", fileLocation, "the file has no header and no data", "the first non-comment line must be the header: id,equation,property,value,uncertainty,unit,temperature,source"));
+            return null;
+        }
+
+        char delimiter = DetectDelimiter(lines[headerIndex]);
+        var configuration = new CsvConfiguration(CultureInfo.InvariantCulture)
+        {
+            Delimiter = delimiter.ToString(),
+            AllowComments = true,
+            Comment = '#',
+            IgnoreBlankLines = true,
+            DetectColumnCountChanges = false,
+            BadDataFound = null,
+            TrimOptions = TrimOptions.None,
+        };
+
+        var rows = new List<CsvRow>();
+        IReadOnlyList<string>? header = null;
+        IReadOnlyList<int> headerColumns = [];
+        int headerLine = 0;
+        using var reader = new StringReader(text);
+        using var parser = new CsvParser(reader, configuration);
+        try
+        {
+            while (parser.Read())
+            {
+                string[] fields = parser.Record ?? [];
+                string raw = parser.RawRecord;
+                int line = parser.RawRow - CountLineBreaks(raw);
+                if (fields.All(field => field.Trim().Length == 0))
+                {
+                    continue;
+                }
+
+                int[] columns = FieldColumns(raw, delimiter, fields.Length);
+                if (header is null)
+                {
+                    header = fields.Select(field => field.Trim()).ToArray();
+                    headerColumns = columns;
+                    headerLine = line;
+                    continue;
+                }
+
+                rows.Add(new CsvRow(displayPath, line, fields, columns));
+            }
+        }
+        catch (CsvHelperException exception)
+        {
+            int line = exception.Context?.Parser?.RawRow ?? 0;
+            diagnostics.Add(Diagnostic.Error("bad-csv", new SourceLocation(displayPath, line), $"the CSV cannot be read here: {FirstLine(exception.Message)}", "check quotes: a field with a comma or quote must be enclosed in double quotes, and quotes inside it doubled"));
+            return null;
+        }
+
+        if (header is null)
+        {
+            diagnostics.Add(Diagnostic.Error("empty-file", fileLocation, "the file has no header and no data", "the first non-comment line must be the header"));
+            return null;
+        }
+
+        return new CsvTable(displayPath, header, headerLine, headerColumns, rows, delimiter);
+    }
+
+    private static string FirstLine(string message)
+    {
+        int end = message.IndexOfAny(['\r', '\n']);
+        return end < 0 ? message : message[..end];
+    }
+
+    private static char DetectDelimiter(string headerLine)
+    {
+        int commas = headerLine.Count(ch => ch == ',');
+        int semicolons = headerLine.Count(ch => ch == ';');
+        int tabs = headerLine.Count(ch => ch == '\t');
+        if (semicolons > commas && semicolons >= tabs)
+        {
+            return ';';
+        }
+
+        return tabs > commas ? '\t' : ',';
+    }
+
+    private static int CountLineBreaks(string raw)
+    {
+        string trimmed = raw.TrimEnd('\r', '\n');
+        int count = 0;
+        foreach (char ch in trimmed)
+        {
+            if (ch == '\n')
+            {
+                count++;
+            }
+        }
+
+        return count;
+    }
+
+    /// <summary>Where each field's content starts in the raw record (1-based), honouring RFC 4180 quotes.</summary>
+    private static int[] FieldColumns(string raw, char delimiter, int count)
+    {
+        var columns = new int[count];
+        int field = 0;
+        int position = 0;
+        while (field < count)
+        {
+            int start = position;
+            while (start < raw.Length && raw[start] == ' ')
+            {
+                start++;
+            }
+
+            bool quoted = start < raw.Length && raw[start] == '"';
+            columns[field] = (quoted ? start + 1 : position) + 1;
+            int i = quoted ? start + 1 : position;
+            if (quoted)
+            {
+                while (i < raw.Length)
+                {
+                    if (raw[i] == '"')
+                    {
+                        if (i + 1 < raw.Length && raw[i + 1] == '"')
+                        {
+                            i += 2;
+                            continue;
+                        }
+
+                        i++;
+                        break;
+                    }
+
+                    i++;
+                }
+            }
+
+            while (i < raw.Length && raw[i] != delimiter && raw[i] != '\n' && raw[i] != '\r')
+            {
+                i++;
+            }
+
+            position = i + 1;
+            field++;
+        }
+
+        return columns;
+    }
+}

@@ -1,0 +1,373 @@
+using System.Globalization;
+using Fractions;
+using PathFinder.Chemistry;
+using PathFinder.Diagnostics;
+using PathFinder.Quantities;
+
+namespace PathFinder.Data;
+
+/// <summary>Reads a network (one CSV file or a folder of them) and validates every row, collecting all problems.</summary>
+/// <remarks>
+/// <para>The header contract, case-insensitive and in any order: <c>id,equation,property,value,uncertainty,unit,temperature,source</c>.
+/// <c>unit</c>, <c>temperature</c> and <c>source</c> may be blank or absent (defaults: kJ/mol or J/(mol·K), 298.15 K,
+/// the file name). An optional <c>coverage</c> column (k) turns an expanded uncertainty into a standard one.
+/// Other columns are kept as notes.</para>
+/// <para>Rows with errors are left out of the network; the rest is usable even when some rows are bad.</para>
+/// </remarks>
+public static class NetworkReader
+{
+    /// <summary>The required columns.</summary>
+    public static IReadOnlyList<string> RequiredColumns { get; } = ["id", "equation", "property", "value", "uncertainty"];
+
+    /// <summary>The optional columns with a meaning.</summary>
+    public static IReadOnlyList<string> OptionalColumns { get; } = ["unit", "temperature", "source", "coverage"];
+
+    /// <summary>Beyond this distance from 298.15 K (in K) a measurement without heat-capacity data is warned about.</summary>
+    public const double TemperatureWarningDistance = 10.0;
+
+    /// <summary>Reads and validates a network file or folder.</summary>
+    /// <param name="path">A CSV file or a folder of CSV files.</param>
+    public static NetworkReadResult Read(string path)
+    {
+        ArgumentNullException.ThrowIfNull(path);
+        var diagnostics = new List<Diagnostic>();
+        string name = Path.GetFileNameWithoutExtension(Path.TrimEndingDirectorySeparator(path));
+        if (!File.Exists(path) && !Directory.Exists(path))
+        {
+            diagnostics.Add(Diagnostic.Error("not-found", new SourceLocation(path), "no such file or folder", "give a CSV file or a folder of CSV files"));
+            return new NetworkReadResult(new ReactionNetwork(name, []), diagnostics, [], null, null);
+        }
+
+        IReadOnlyList<string> files = NetworkFiles.MeasurementFiles(path);
+        if (files.Count == 0)
+        {
+            diagnostics.Add(Diagnostic.Error("empty-network", new SourceLocation(path), "the folder holds no measurement CSV files", "put one or more CSV files with the header id,equation,property,value,uncertainty in it"));
+            return new NetworkReadResult(new ReactionNetwork(name, []), diagnostics, files, null, null);
+        }
+
+        string speciesPath = NetworkFiles.Companion(path, NetworkFiles.SpeciesFileName);
+        string? speciesFile = File.Exists(speciesPath) ? speciesPath : null;
+        SpeciesCatalog catalog = SpeciesCatalog.Read(speciesFile, speciesFile ?? "", diagnostics);
+        string heatCapacityPath = NetworkFiles.Companion(path, NetworkFiles.HeatCapacityFileName);
+        string? heatCapacityFile = File.Exists(heatCapacityPath) ? heatCapacityPath : null;
+
+        var measurements = new List<Measurement>();
+        var firstById = new Dictionary<string, SourceLocation>(StringComparer.Ordinal);
+        foreach (string file in files)
+        {
+            ReadFile(file, catalog, measurements, firstById, diagnostics);
+        }
+
+        AddNetworkWarnings(measurements, catalog, heatCapacityFile is not null, diagnostics);
+        List<Diagnostic> ordered = diagnostics
+            .OrderBy(diagnostic => diagnostic.Location.File, StringComparer.Ordinal)
+            .ThenBy(diagnostic => diagnostic.Location.Line)
+            .ThenBy(diagnostic => diagnostic.Location.Column)
+            .ToList();
+        return new NetworkReadResult(new ReactionNetwork(name, measurements), ordered, files, speciesFile, heatCapacityFile);
+    }
+
+    private static void ReadFile(string file, SpeciesCatalog catalog, List<Measurement> measurements, Dictionary<string, SourceLocation> firstById, List<Diagnostic> diagnostics)
+    {
+        CsvTable? table = CsvTable.Read(file, file, diagnostics);
+        if (table is null)
+        {
+            return;
+        }
+
+        var columns = RequiredColumns.Concat(OptionalColumns).ToDictionary(column => column, table.IndexOf, StringComparer.Ordinal);
+        string[] missing = RequiredColumns.Where(column => columns[column] < 0).ToArray();
+        if (missing.Length > 0)
+        {
+            string hint = table.Header.Count == 1 && table.Header[0].Contains(';', StringComparison.Ordinal)
+                ? "the header is one field: the file seems to use another separator"
+                : "the header must contain id,equation,property,value,uncertainty (unit,temperature,source optional), in any order";
+            diagnostics.Add(Diagnostic.Error("missing-column", new SourceLocation(file, table.HeaderLine, 1), $"missing required column(s): {string.Join(", ", missing)}", hint));
+            return;
+        }
+
+        if (table.DecimalComma)
+        {
+            diagnostics.Add(Diagnostic.Warning("decimal-comma", new SourceLocation(file, table.HeaderLine, 1), "the file is semicolon-separated (a comma-decimal spreadsheet export); numbers were read with decimal commas", "no action needed; export with a comma separator and decimal points to silence this"));
+        }
+
+        string defaultSource = Path.GetFileNameWithoutExtension(file);
+        foreach (CsvRow row in table.Rows)
+        {
+            // Ids are checked on every row, valid or not, so a clash is reported even when the first row is bad.
+            string id = row.FieldOrEmpty(columns["id"]);
+            bool duplicate = false;
+            if (id.Length > 0 && !firstById.TryAdd(id, row.LocationOf(columns["id"], "id")))
+            {
+                diagnostics.Add(Diagnostic.Error("duplicate-id", row.LocationOf(columns["id"], "id"), $"measurement id '{id}' was already used at {firstById[id]}", "give every measurement its own id"));
+                duplicate = true;
+            }
+
+            Measurement? measurement = ReadRow(row, table, columns, catalog, defaultSource, diagnostics);
+            if (measurement is not null && !duplicate)
+            {
+                measurements.Add(measurement);
+            }
+        }
+    }
+
+    private static Measurement? ReadRow(CsvRow row, CsvTable table, Dictionary<string, int> columns, SpeciesCatalog catalog, string defaultSource, List<Diagnostic> diagnostics)
+    {
+        int before = diagnostics.Count;
+        if (row.Fields.Count > table.Header.Count)
+        {
+            string hint = row.Fields.Any(field => field.Contains(',', StringComparison.Ordinal)) || table.Delimiter != ','
+                ? "quote fields that contain the separator"
+                : "a decimal comma (1,5) splits a number in two in a comma-separated file: write 1.5, or quote the field";
+            diagnostics.Add(Diagnostic.Error("extra-fields", row.LocationOf(table.Header.Count), $"the row has {row.Fields.Count} fields but the header has {table.Header.Count}", hint));
+            return null;
+        }
+
+        string id = row.FieldOrEmpty(columns["id"]);
+        if (id.Length == 0)
+        {
+            diagnostics.Add(Diagnostic.Error("missing-id", row.LocationOf(columns["id"], "id"), "the measurement has no id", "give every row a unique id such as m1"));
+        }
+
+        ThermoProperty property = ThermoProperty.Enthalpy;
+        string propertyText = row.FieldOrEmpty(columns["property"]);
+        bool propertyKnown = ThermoProperties.TryParse(propertyText, out property);
+        if (!propertyKnown)
+        {
+            diagnostics.Add(Diagnostic.Error("unknown-property", row.LocationOf(columns["property"], "property"), $"unknown property '{propertyText}'", $"use one of {string.Join(", ", ThermoProperties.Codes)}"));
+        }
+
+        ChemicalEquation? equation = ReadEquation(row, columns["equation"], catalog, propertyKnown ? property : null, diagnostics);
+
+        EnergyUnit unit = propertyKnown ? property.CanonicalUnit() : EnergyUnit.KilojoulePerMole;
+        string unitText = row.FieldOrEmpty(columns["unit"]);
+        if (unitText.Length > 0)
+        {
+            if (!EnergyUnit.TryParse(unitText, out EnergyUnit parsedUnit))
+            {
+                diagnostics.Add(Diagnostic.Error("unknown-unit", row.LocationOf(columns["unit"], "unit"), $"unknown unit '{unitText}'", $"use one of {string.Join(", ", EnergyUnit.AcceptedSymbols)}"));
+            }
+            else if (propertyKnown && (parsedUnit.Dimension == UnitDimension.MolarEnergy) != property.IsEnergy())
+            {
+                string expected = property.IsEnergy() ? "an energy unit such as kJ/mol" : "an entropy unit such as J/(mol·K)";
+                diagnostics.Add(Diagnostic.Error("wrong-unit", row.LocationOf(columns["unit"], "unit"), $"{property.Code()} cannot be in {parsedUnit.Symbol}", $"use {expected}"));
+            }
+            else
+            {
+                unit = parsedUnit;
+            }
+        }
+
+        double? value = ReadNumber(row, columns["value"], "value", table.DecimalComma, diagnostics);
+        double? uncertainty = ReadNumber(row, columns["uncertainty"], "uncertainty", table.DecimalComma, diagnostics);
+        if (uncertainty is <= 0.0)
+        {
+            diagnostics.Add(Diagnostic.Error("bad-uncertainty", row.LocationOf(columns["uncertainty"], "uncertainty"), $"the uncertainty must be positive, not {uncertainty.Value.ToString(CultureInfo.InvariantCulture)}", "give the standard uncertainty of the value (a zero uncertainty would make it exact)"));
+            uncertainty = null;
+        }
+
+        double coverage = 1.0;
+        if (columns["coverage"] >= 0 && row.FieldOrEmpty(columns["coverage"]).Length > 0)
+        {
+            double? k = ReadNumber(row, columns["coverage"], "coverage", table.DecimalComma, diagnostics);
+            if (k is < 1.0 or > 10.0)
+            {
+                diagnostics.Add(Diagnostic.Error("bad-coverage", row.LocationOf(columns["coverage"], "coverage"), $"the coverage factor k = {k.Value.ToString(CultureInfo.InvariantCulture)} is outside 1..10", "k is usually 2 (about 95 %); leave the field blank for a standard uncertainty"));
+            }
+            else if (k is not null)
+            {
+                coverage = k.Value;
+            }
+        }
+
+        double temperature = PhysicalConstants.StandardTemperature;
+        if (columns["temperature"] >= 0 && row.FieldOrEmpty(columns["temperature"]).Length > 0)
+        {
+            double? t = ReadNumber(row, columns["temperature"], "temperature", table.DecimalComma, diagnostics);
+            if (t is <= 0.0 or > 10000.0)
+            {
+                diagnostics.Add(Diagnostic.Error("bad-temperature", row.LocationOf(columns["temperature"], "temperature"), $"the temperature {t.Value.ToString(CultureInfo.InvariantCulture)} K is impossible here", "give the temperature in kelvin, above 0 and at most 10000 K (298.15 for 25 °C)"));
+            }
+            else if (t is not null)
+            {
+                temperature = t.Value;
+            }
+        }
+
+        string source = columns["source"] >= 0 ? row.FieldOrEmpty(columns["source"]) : "";
+        if (source.Length == 0)
+        {
+            source = defaultSource;
+        }
+
+        if (diagnostics.Count > before || equation is null || value is null || uncertainty is null || id.Length == 0)
+        {
+            return null;
+        }
+
+        var notes = new Dictionary<string, string>(StringComparer.Ordinal);
+        var known = new HashSet<int>(columns.Values.Where(index => index >= 0));
+        for (int i = 0; i < table.Header.Count; i++)
+        {
+            if (!known.Contains(i) && row.FieldOrEmpty(i).Length > 0)
+            {
+                notes[table.Header[i]] = row.FieldOrEmpty(i);
+            }
+        }
+
+        return new Measurement
+        {
+            Id = id,
+            Equation = equation,
+            EquationText = row.FieldOrEmpty(columns["equation"]),
+            Property = property,
+            Value = unit.ToCanonicalValue(value.Value),
+            Uncertainty = unit.ToCanonicalValue(uncertainty.Value / coverage),
+            Unit = unit,
+            Temperature = temperature,
+            Source = source,
+            Location = new SourceLocation(row.File, row.Line, 1),
+            Notes = notes,
+        };
+    }
+
+    private static ChemicalEquation? ReadEquation(CsvRow row, int column, SpeciesCatalog catalog, ThermoProperty? property, List<Diagnostic> diagnostics)
+    {
+        string raw = column < row.Fields.Count ? row.Fields[column] : "";
+        int leading = raw.Length - raw.TrimStart().Length;
+        string text = raw.Trim();
+        SourceLocation location = row.LocationOf(column, "equation");
+        if (text.Length == 0)
+        {
+            diagnostics.Add(Diagnostic.Error("missing-equation", location, "the equation is empty", "write reactants -> products, or one species for its formation"));
+            return null;
+        }
+
+        if (property == ThermoProperty.AbsoluteEntropy)
+        {
+            // S° belongs to one species: the shorthand here means the species itself, not its formation.
+            ParseResult<Species> species = catalog.Resolve(text);
+            if (!species.TryGetValue(out Species? value))
+            {
+                string hint = text.Contains("->", StringComparison.Ordinal) || text.Contains('=', StringComparison.Ordinal)
+                    ? "S is the absolute entropy of one species; use dS for a reaction entropy"
+                    : species.Failure.Hint;
+                diagnostics.Add(Diagnostic.Error(species.Failure.Code, location.Shift(leading + species.Failure.Offset), species.Failure.Message, hint));
+                return null;
+            }
+
+            return ChemicalEquation.FromTerms([new EquationTerm(value, Fraction.One)]);
+        }
+
+        ParseResult<ChemicalEquation> equation = EquationParser.Parse(text, catalog.Resolve);
+        if (!equation.TryGetValue(out ChemicalEquation? parsed))
+        {
+            diagnostics.Add(Diagnostic.Error(equation.Failure.Code, location.Shift(leading + equation.Failure.Offset), equation.Failure.Message, equation.Failure.Hint));
+            return null;
+        }
+
+        IReadOnlyList<string> imbalances = parsed.FindImbalances();
+        if (imbalances.Count > 0)
+        {
+            diagnostics.Add(Diagnostic.Error("unbalanced-equation", location.Shift(leading), $"the equation is not balanced: {string.Join("; ", imbalances)}", "correct the coefficients or formulas so every element and the charge balance"));
+            return null;
+        }
+
+        return parsed;
+    }
+
+    private static double? ReadNumber(CsvRow row, int column, string field, bool decimalComma, List<Diagnostic> diagnostics)
+    {
+        string text = row.FieldOrEmpty(column);
+        SourceLocation location = row.LocationOf(column, field);
+        if (text.Length == 0)
+        {
+            diagnostics.Add(Diagnostic.Error("missing-number", location, $"the {field} is empty", $"give the {field} as a number such as -74.87"));
+            return null;
+        }
+
+        string normalised = decimalComma ? text.Replace(',', '.') : text;
+        normalised = normalised.Replace('−', '-');
+        if (!double.TryParse(normalised, NumberStyles.Float, CultureInfo.InvariantCulture, out double number))
+        {
+            string hint = !decimalComma && text.Contains(',', StringComparison.Ordinal)
+                ? "use a decimal point (1.5), not a decimal comma"
+                : "write a plain number such as -74.87 or 1.2e3";
+            diagnostics.Add(Diagnostic.Error("bad-number", location, $"the {field} '{text}' is not a number", hint));
+            return null;
+        }
+
+        if (!double.IsFinite(number))
+        {
+            diagnostics.Add(Diagnostic.Error("bad-number", location, $"the {field} '{text}' is not a finite number", "give a finite value; leave the row out if there is none"));
+            return null;
+        }
+
+        return number;
+    }
+
+    private static void AddNetworkWarnings(List<Measurement> measurements, SpeciesCatalog catalog, bool hasHeatCapacityData, List<Diagnostic> diagnostics)
+    {
+        var seen = new Dictionary<(string Source, ThermoProperty Property, string Reaction), Measurement>();
+        var uses = new Dictionary<Species, List<Measurement>>();
+        foreach (Measurement measurement in measurements)
+        {
+            var key = (measurement.Source, measurement.Property, ReactionSignature(measurement.Equation));
+            if (seen.TryGetValue(key, out Measurement? first))
+            {
+                diagnostics.Add(Diagnostic.Warning("repeated-measurement", measurement.Location with { Field = "equation" }, $"'{measurement.Id}' measures the same reaction as '{first.Id}' in source '{measurement.Source}'", "if both are independent determinations keep them; if one is a copy, drop it"));
+            }
+            else
+            {
+                seen[key] = measurement;
+            }
+
+            if (!hasHeatCapacityData && Math.Abs(measurement.Temperature - PhysicalConstants.StandardTemperature) > TemperatureWarningDistance)
+            {
+                diagnostics.Add(Diagnostic.Warning("no-heat-capacity", measurement.Location with { Field = "temperature" }, $"'{measurement.Id}' was measured at {measurement.Temperature.ToString("0.##", CultureInfo.InvariantCulture)} K and there are no heat-capacity data to correct it to 298.15 K", $"add {NetworkFiles.HeatCapacityFileName} beside the data; until then the value is used uncorrected"));
+            }
+
+            foreach (EquationTerm term in measurement.Equation.Terms)
+            {
+                if (!uses.TryGetValue(term.Species, out List<Measurement>? list))
+                {
+                    list = [];
+                    uses[term.Species] = list;
+                }
+
+                list.Add(measurement);
+            }
+        }
+
+        foreach ((Species species, List<Measurement> list) in uses)
+        {
+            if (list.Count == 1 && !ReferenceStates.HasZeroFormationProperties(species))
+            {
+                Measurement only = list[0];
+                diagnostics.Add(Diagnostic.Warning("single-use-species", only.Location with { Field = "equation" }, $"{species.Name} appears only in '{only.Id}': nothing can check that value", "add another measurement involving this species to make it checkable"));
+            }
+        }
+
+        foreach ((Species species, IReadOnlyCollection<string> spellings) in catalog.MergedSpellings())
+        {
+            Measurement? first = uses.TryGetValue(species, out List<Measurement>? list) ? list[0] : null;
+            SourceLocation location = first?.Location ?? new SourceLocation("");
+            diagnostics.Add(Diagnostic.Warning("merged-spellings", location, $"{string.Join(", ", spellings)} in state {species.State} have the same composition and are treated as one species", "if they are different isomers, declare each in species.csv with its own key and use the keys"));
+        }
+    }
+
+    /// <summary>An identity of a reaction up to a positive scale factor (2 H2 + O2 = 2 H2O is H2 + ½ O2 = H2O).</summary>
+    private static string ReactionSignature(ChemicalEquation equation)
+    {
+        if (equation.Terms.Count == 0)
+        {
+            return "";
+        }
+
+        EquationTerm pivot = equation.Terms.OrderBy(term => term.Species.Key, StringComparer.Ordinal).First();
+        Fraction scale = pivot.Coefficient < Fraction.Zero ? -pivot.Coefficient : pivot.Coefficient;
+        return string.Join(";", equation.Terms
+            .OrderBy(term => term.Species.Key, StringComparer.Ordinal)
+            .Select(term => $"{term.Species.Key}:{RationalText.Format(term.Coefficient / scale)}"));
+    }
+}

@@ -1,0 +1,11 @@
+namespace PathFinder.Quantities;
+
+/// <summary>What a unit measures.</summary>
+public enum UnitDimension
+{
+    /// <summary>Molar energy (ΔH, ΔG, ΔU), canonical unit kJ/mol.</summary>
+    MolarEnergy,
+
+    /// <summary>Molar entropy (ΔS, S°), canonical unit J/(mol·K).</summary>
+    MolarEntropy,
+}
