@@ -15,8 +15,8 @@ public sealed record OutlierOptions
     /// <summary>Maximum number of adjustments; default 200.</summary>
     public int MaxIterations { get; init; } = 200;
 
-    /// <summary>Rank-one updates per component between fresh factorizations (numerical hygiene); default 25.</summary>
-    public int RefactorizationInterval { get; init; } = 25;
+    /// <summary>Rank-one updates per component between fresh factorizations (numerical hygiene); default 50.</summary>
+    public int RefactorizationInterval { get; init; } = 50;
 
     /// <summary>Options for the underlying solves.</summary>
     public SolverOptions Solver { get; init; } = SolverOptions.Default;

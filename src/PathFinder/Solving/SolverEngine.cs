@@ -83,8 +83,8 @@ internal sealed class SolverEngine
 
     public IReadOnlyList<ComponentFactorization> Components => _components;
 
-    /// <summary>Rank-one updates between refactorizations of a component (numerical hygiene); default 25.</summary>
-    public int RefactorizationInterval { get; set; } = 25;
+    /// <summary>Rank-one updates between refactorizations of a component (numerical hygiene); default 50.</summary>
+    public int RefactorizationInterval { get; set; } = 50;
 
     public static SolverEngine Create(ObservationSystem system, SolverOptions? options)
     {
