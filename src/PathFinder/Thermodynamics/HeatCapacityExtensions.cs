@@ -7,7 +7,7 @@ public static class HeatCapacityExtensions
     /// <param name="model">The heat-capacity model.</param>
     /// <param name="temperature">Temperature in K.</param>
     /// <param name="tolerance">Absolute tolerance in K; default <see cref="TemperatureRange.DefaultTolerance"/>.</param>
-    public static TemperatureRangeWarning? CheckRange(this IHeatCapacity model, double temperature, double tolerance = TemperatureRange.DefaultTolerance)
+    public static TemperatureRangeWarning? CheckTemperature(this IHeatCapacity model, double temperature, double tolerance = TemperatureRange.DefaultTolerance)
     {
         ArgumentNullException.ThrowIfNull(model);
         return model.ValidRange.Contains(temperature, tolerance)
@@ -20,7 +20,7 @@ public static class HeatCapacityExtensions
     /// <param name="first">One end of the interval in K.</param>
     /// <param name="second">The other end in K (either order).</param>
     /// <param name="tolerance">Absolute tolerance in K; default <see cref="TemperatureRange.DefaultTolerance"/>.</param>
-    public static TemperatureRangeWarning? CheckRange(this IHeatCapacity model, double first, double second, double tolerance = TemperatureRange.DefaultTolerance)
+    public static TemperatureRangeWarning? CheckInterval(this IHeatCapacity model, double first, double second, double tolerance = TemperatureRange.DefaultTolerance)
     {
         ArgumentNullException.ThrowIfNull(model);
         return model.ValidRange.Contains(first, second, tolerance)

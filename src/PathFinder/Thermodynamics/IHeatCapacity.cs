@@ -5,7 +5,7 @@ namespace PathFinder.Thermodynamics;
 /// Units: temperatures in K, Cp in J/(mol·K), ∫Cp dT in J/mol, ∫Cp/T dT in J/(mol·K).
 /// Integrals are analytic (closed form), taken from <c>from</c> to <c>to</c>: swapping the bounds changes the sign.
 /// Outside <see cref="ValidRange"/> a model extrapolates its nearest piece and does not throw; use
-/// <see cref="HeatCapacityExtensions.CheckRange(IHeatCapacity, double, double, double)"/> to obtain a warning to pass on.
+/// <see cref="HeatCapacityExtensions.CheckInterval"/> or <see cref="HeatCapacityExtensions.CheckTemperature"/> to obtain a warning to pass on.
 /// Non-positive or non-finite temperatures are programming errors and throw <see cref="ArgumentOutOfRangeException"/>.
 /// </remarks>
 public interface IHeatCapacity

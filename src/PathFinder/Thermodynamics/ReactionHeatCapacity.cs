@@ -71,12 +71,12 @@ public sealed class ReactionHeatCapacity<TKey>
     /// <param name="from">T1 in K.</param>
     /// <param name="to">T2 in K.</param>
     /// <param name="tolerance">Absolute tolerance in K; default <see cref="TemperatureRange.DefaultTolerance"/>.</param>
-    public IReadOnlyList<SpeciesRangeWarning<TKey>> CheckRange(double from, double to, double tolerance = TemperatureRange.DefaultTolerance)
+    public IReadOnlyList<SpeciesRangeWarning<TKey>> CheckInterval(double from, double to, double tolerance = TemperatureRange.DefaultTolerance)
     {
         var warnings = new List<SpeciesRangeWarning<TKey>>();
         foreach (ReactionSpecies<TKey> s in _species)
         {
-            if (s.Model is not null && s.Model.CheckRange(from, to, tolerance) is { } warning)
+            if (s.Model is not null && s.Model.CheckInterval(from, to, tolerance) is { } warning)
             {
                 warnings.Add(new SpeciesRangeWarning<TKey>(s.Species, warning));
             }
@@ -91,7 +91,7 @@ public sealed class ReactionHeatCapacity<TKey>
     /// <param name="to">T2 in K (&gt; 0).</param>
     /// <param name="tolerance">Range tolerance in K; default <see cref="TemperatureRange.DefaultTolerance"/>.</param>
     public KirchhoffShift<TKey> ShiftEnthalpy(double enthalpy, double from, double to, double tolerance = TemperatureRange.DefaultTolerance) =>
-        new(from, to, enthalpy, IntegrateHeatCapacity(from, to), CheckRange(from, to, tolerance), SpeciesWithoutData);
+        new(from, to, enthalpy, IntegrateHeatCapacity(from, to), CheckInterval(from, to, tolerance), SpeciesWithoutData);
 
     /// <summary>Moves a reaction entropy from <paramref name="from"/> to <paramref name="to"/>: ΔrS(T2) = ΔrS(T1) + ∫ΔrCp/T dT.</summary>
     /// <param name="entropy">ΔrS(T1) in J/(mol·K).</param>
@@ -99,7 +99,7 @@ public sealed class ReactionHeatCapacity<TKey>
     /// <param name="to">T2 in K (&gt; 0).</param>
     /// <param name="tolerance">Range tolerance in K; default <see cref="TemperatureRange.DefaultTolerance"/>.</param>
     public KirchhoffShift<TKey> ShiftEntropy(double entropy, double from, double to, double tolerance = TemperatureRange.DefaultTolerance) =>
-        new(from, to, entropy, IntegrateHeatCapacityOverTemperature(from, to), CheckRange(from, to, tolerance), SpeciesWithoutData);
+        new(from, to, entropy, IntegrateHeatCapacityOverTemperature(from, to), CheckInterval(from, to, tolerance), SpeciesWithoutData);
 
     private double Sum(Func<IHeatCapacity, double> term)
     {
