@@ -1,0 +1,23 @@
+namespace PathFinder.Solving;
+
+/// <summary>The two dense steps of the solver: rank-revealing Cholesky and inversion from the factor.</summary>
+/// <remarks>
+/// Matrices are column-major <c>double[]</c> of order n with leading dimension n, element (i, j) at i + j·n,
+/// like LAPACK. Only the upper triangle is read or written.
+/// </remarks>
+internal interface IDenseKernel
+{
+    /// <summary>The backend this kernel implements.</summary>
+    LinearAlgebraBackend Backend { get; }
+
+    /// <summary>Pivoted Cholesky PᵀAP = UᵀU of a symmetric positive semi-definite matrix, stopping at pivots ≤ tolerance.</summary>
+    /// <param name="a">On entry the upper triangle of A; on exit rows 0..rank−1 of U in the upper triangle (the rest is scratch).</param>
+    /// <param name="n">The order.</param>
+    /// <param name="pivot">On exit, pivot[k] = original index of the k-th pivoted column (0-based).</param>
+    /// <param name="tolerance">Absolute pivot threshold.</param>
+    /// <returns>The computed rank.</returns>
+    int PivotedCholesky(double[] a, int n, int[] pivot, double tolerance);
+
+    /// <summary>Replaces the leading rank×rank upper triangle U₁₁ by the upper triangle of (U₁₁ᵀU₁₁)⁻¹.</summary>
+    void InvertFromFactor(double[] a, int n, int rank);
+}

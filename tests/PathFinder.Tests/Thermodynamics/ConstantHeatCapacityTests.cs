@@ -1,0 +1,45 @@
+using PathFinder.Thermodynamics;
+
+namespace PathFinder.Tests.Thermodynamics;
+
+public class ConstantHeatCapacityTests
+{
+    [Fact]
+    public void Integrals_MatchClosedForms()
+    {
+        // Given Cp = 29.1 J/(mol K)
+        var model = new ConstantHeatCapacity(29.1);
+
+        // Then ∫Cp dT = Cp ΔT and ∫Cp/T dT = Cp ln(T2/T1) (calculus)
+        Assert.Equal(29.1 * (1000 - 298.15), model.IntegrateHeatCapacity(298.15, 1000), 1e-9);
+        Assert.Equal(29.1 * Math.Log(1000 / 298.15), model.IntegrateHeatCapacityOverTemperature(298.15, 1000), 1e-12);
+    }
+
+    [Fact]
+    public void CheckInterval_OutsideRange_GivesWarningNotException()
+    {
+        // Given a model valid from 300 to 600 K
+        var model = new ConstantHeatCapacity(30, new TemperatureRange(300, 600));
+
+        // When asked about 298.15–800 K
+        TemperatureRangeWarning? warning = model.CheckInterval(298.15, 800);
+        double value = model.IntegrateHeatCapacity(298.15, 800);
+
+        // Then a warning names the interval and the valid range, and the value is still computed
+        Assert.NotNull(warning);
+        Assert.Equal(298.15, warning.Low, 1e-12);
+        Assert.Equal(800, warning.High, 1e-12);
+        Assert.Equal(new TemperatureRange(300, 600), warning.ValidRange);
+        Assert.Contains("300–600 K", warning.Message, StringComparison.Ordinal);
+        Assert.Equal(30 * (800 - 298.15), value, 1e-9);
+    }
+
+    [Fact]
+    public void CheckInterval_InsideRangeWithinTolerance_GivesNoWarning()
+    {
+        var model = new ConstantHeatCapacity(30, new TemperatureRange(298.15, 600));
+        Assert.Null(model.CheckInterval(298.145, 600));
+        Assert.Null(model.CheckTemperature(450));
+        Assert.NotNull(model.CheckTemperature(298.0));
+    }
+}
