@@ -1,4 +1,6 @@
+using PathFinder.Chemistry;
 using PathFinder.Diagnostics;
+using PathFinder.Thermodynamics;
 
 namespace PathFinder.Data;
 
@@ -8,12 +10,14 @@ namespace PathFinder.Data;
 /// <param name="Files">The measurement files read.</param>
 /// <param name="SpeciesFile">The species declaration file used, if any.</param>
 /// <param name="HeatCapacityFile">The heat-capacity file beside the network, if any.</param>
+/// <param name="HeatCapacities">Heat-capacity models by species, from <paramref name="HeatCapacityFile"/>.</param>
 public sealed record NetworkReadResult(
     ReactionNetwork Network,
     IReadOnlyList<Diagnostic> Diagnostics,
     IReadOnlyList<string> Files,
     string? SpeciesFile,
-    string? HeatCapacityFile)
+    string? HeatCapacityFile,
+    IReadOnlyDictionary<Species, IHeatCapacity> HeatCapacities)
 {
     /// <summary>Whether any error was found.</summary>
     public bool HasErrors => Diagnostics.Any(diagnostic => diagnostic.Severity == Severity.Error);

@@ -3,6 +3,7 @@ using Fractions;
 using PathFinder.Chemistry;
 using PathFinder.Diagnostics;
 using PathFinder.Quantities;
+using PathFinder.Thermodynamics;
 
 namespace PathFinder.Data;
 
@@ -35,14 +36,14 @@ public static class NetworkReader
         if (!File.Exists(path) && !Directory.Exists(path))
         {
             diagnostics.Add(Diagnostic.Error("not-found", new SourceLocation(path), "no such file or folder", "give a CSV file or a folder of CSV files"));
-            return new NetworkReadResult(new ReactionNetwork(name, []), diagnostics, [], null, null);
+            return new NetworkReadResult(new ReactionNetwork(name, []), diagnostics, [], null, null, NoHeatCapacities);
         }
 
         IReadOnlyList<string> files = NetworkFiles.MeasurementFiles(path);
         if (files.Count == 0)
         {
             diagnostics.Add(Diagnostic.Error("empty-network", new SourceLocation(path), "the folder holds no measurement CSV files", "put one or more CSV files with the header id,equation,property,value,uncertainty in it"));
-            return new NetworkReadResult(new ReactionNetwork(name, []), diagnostics, files, null, null);
+            return new NetworkReadResult(new ReactionNetwork(name, []), diagnostics, files, null, null, NoHeatCapacities);
         }
 
         string speciesPath = NetworkFiles.Companion(path, NetworkFiles.SpeciesFileName);
@@ -50,6 +51,7 @@ public static class NetworkReader
         SpeciesCatalog catalog = SpeciesCatalog.Read(speciesFile, speciesFile ?? "", diagnostics);
         string heatCapacityPath = NetworkFiles.Companion(path, NetworkFiles.HeatCapacityFileName);
         string? heatCapacityFile = File.Exists(heatCapacityPath) ? heatCapacityPath : null;
+        Dictionary<Species, IHeatCapacity> heatCapacities = ReadHeatCapacities(heatCapacityFile, catalog, diagnostics);
 
         var measurements = new List<Measurement>();
         var firstById = new Dictionary<string, SourceLocation>(StringComparer.Ordinal);
@@ -58,13 +60,43 @@ public static class NetworkReader
             ReadFile(file, catalog, measurements, firstById, diagnostics);
         }
 
-        AddNetworkWarnings(measurements, catalog, heatCapacityFile is not null, diagnostics);
+        AddNetworkWarnings(measurements, catalog, heatCapacities, diagnostics);
         List<Diagnostic> ordered = diagnostics
             .OrderBy(diagnostic => diagnostic.Location.File, StringComparer.Ordinal)
             .ThenBy(diagnostic => diagnostic.Location.Line)
             .ThenBy(diagnostic => diagnostic.Location.Column)
             .ToList();
-        return new NetworkReadResult(new ReactionNetwork(name, measurements), ordered, files, speciesFile, heatCapacityFile);
+        return new NetworkReadResult(new ReactionNetwork(name, measurements), ordered, files, speciesFile, heatCapacityFile, heatCapacities);
+    }
+
+    private static readonly IReadOnlyDictionary<Species, IHeatCapacity> NoHeatCapacities = new Dictionary<Species, IHeatCapacity>();
+
+    private static Dictionary<Species, IHeatCapacity> ReadHeatCapacities(string? path, SpeciesCatalog catalog, List<Diagnostic> diagnostics)
+    {
+        var models = new Dictionary<Species, IHeatCapacity>();
+        if (path is null)
+        {
+            return models;
+        }
+
+        HeatCapacityTable table = HeatCapacityTableReader.ReadFile(path);
+        diagnostics.AddRange(table.Diagnostics);
+        foreach (HeatCapacityEntry entry in table.Entries)
+        {
+            ParseResult<Species> species = catalog.Resolve(entry.SpeciesText);
+            if (!species.TryGetValue(out Species? resolved))
+            {
+                diagnostics.Add(Diagnostic.Error(species.Failure.Code, entry.Location.Shift(species.Failure.Offset), species.Failure.Message, species.Failure.Hint));
+                continue;
+            }
+
+            if (!models.TryAdd(resolved, entry.Model))
+            {
+                diagnostics.Add(Diagnostic.Warning("repeated-heat-capacity", entry.Location, $"{resolved.Name} has heat-capacity rows under two spellings; the first is used", "keep one spelling per species"));
+            }
+        }
+
+        return models;
     }
 
     private static void ReadFile(string file, SpeciesCatalog catalog, List<Measurement> measurements, Dictionary<string, SourceLocation> firstById, List<Diagnostic> diagnostics)
@@ -306,7 +338,7 @@ public static class NetworkReader
         return number;
     }
 
-    private static void AddNetworkWarnings(List<Measurement> measurements, SpeciesCatalog catalog, bool hasHeatCapacityData, List<Diagnostic> diagnostics)
+    private static void AddNetworkWarnings(List<Measurement> measurements, SpeciesCatalog catalog, IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities, List<Diagnostic> diagnostics)
     {
         var seen = new Dictionary<(string Source, ThermoProperty Property, string Reaction), Measurement>();
         var uses = new Dictionary<Species, List<Measurement>>();
@@ -322,9 +354,16 @@ public static class NetworkReader
                 seen[key] = measurement;
             }
 
-            if (!hasHeatCapacityData && Math.Abs(measurement.Temperature - PhysicalConstants.StandardTemperature) > TemperatureWarningDistance)
+            if (Math.Abs(measurement.Temperature - PhysicalConstants.StandardTemperature) > TemperatureWarningDistance)
             {
-                diagnostics.Add(Diagnostic.Warning("no-heat-capacity", measurement.Location with { Field = "temperature" }, $"'{measurement.Id}' was measured at {measurement.Temperature.ToString("0.##", CultureInfo.InvariantCulture)} K and there are no heat-capacity data to correct it to 298.15 K", $"add {NetworkFiles.HeatCapacityFileName} beside the data; until then the value is used uncorrected"));
+                string[] lacking = measurement.Equation.Terms
+                    .Where(term => !heatCapacities.ContainsKey(term.Species) && !term.Species.Formula.IsElectron)
+                    .Select(term => term.Species.Name)
+                    .ToArray();
+                if (lacking.Length > 0)
+                {
+                    diagnostics.Add(Diagnostic.Warning("no-heat-capacity", measurement.Location with { Field = "temperature" }, $"'{measurement.Id}' was measured at {measurement.Temperature.ToString("0.##", CultureInfo.InvariantCulture)} K and there are no heat-capacity data for {string.Join(", ", lacking)} to correct it to 298.15 K", $"add those species to {NetworkFiles.HeatCapacityFileName} beside the data; until then the value is used uncorrected"));
+                }
             }
 
             foreach (EquationTerm term in measurement.Equation.Terms)
