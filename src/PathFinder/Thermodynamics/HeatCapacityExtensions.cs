@@ -23,7 +23,7 @@ public static class HeatCapacityExtensions
     public static TemperatureRangeWarning? CheckInterval(this IHeatCapacity model, double first, double second, double tolerance = TemperatureRange.DefaultTolerance)
     {
         ArgumentNullException.ThrowIfNull(model);
-        return model.ValidRange.Contains(first, second, tolerance)
+        return model.ValidRange.ContainsInterval(first, second, tolerance)
             ? null
             : new TemperatureRangeWarning(Math.Min(first, second), Math.Max(first, second), model.ValidRange);
     }

@@ -64,6 +64,7 @@ public static class HeatCapacityTableReader
         ArgumentNullException.ThrowIfNull(fileName);
         options ??= HeatCapacityTableOptions.Default;
         var diagnostics = new List<Diagnostic>();
+        bool malformed = false;
         var config = new CsvConfiguration(CultureInfo.InvariantCulture)
         {
             AllowComments = true,
@@ -71,11 +72,15 @@ public static class HeatCapacityTableReader
             IgnoreBlankLines = true,
             DetectColumnCountChanges = false,
             MissingFieldFound = null,
-            BadDataFound = args => diagnostics.Add(Diagnostic.Error(
-                "heat-capacity-bad-csv",
-                new SourceLocation(fileName, args.Context.Parser?.RawRow ?? 0),
-                $"malformed CSV field '{args.Field}'",
-                "quote fields that contain quotes, and double the quotes inside them")),
+            BadDataFound = args =>
+            {
+                malformed = true;
+                diagnostics.Add(Diagnostic.Error(
+                    "heat-capacity-bad-csv",
+                    new SourceLocation(fileName, args.Context.Parser?.RawRow ?? 0),
+                    $"malformed CSV field '{args.Field}'",
+                    "quote fields that contain quotes, and double the quotes inside them"));
+            },
         };
 
         using var parser = new CsvParser(reader, config);
@@ -97,6 +102,13 @@ public static class HeatCapacityTableReader
         {
             RecordCells cells = RecordCells.From(parser, fileName);
             RangeRow? row = ReadRow(cells, header, diagnostics, out string? species);
+            if (malformed)
+            {
+                // The fields of a malformed record cannot be trusted even when they parse.
+                malformed = false;
+                row = null;
+            }
+
             if (row is not null)
             {
                 rows.Add(row);
@@ -288,8 +300,14 @@ public static class HeatCapacityTableReader
         var entries = new List<HeatCapacityEntry>();
         foreach (IGrouping<string, RangeRow> group in rows.GroupBy(r => r.Species, StringComparer.Ordinal))
         {
+            if (failedSpecies.Contains(group.Key))
+            {
+                // A rejected row would show up as a spurious gap; its own error is enough.
+                continue;
+            }
+
             RangeRow[] ranges = [.. group.OrderBy(r => r.Model.ValidRange.Minimum)];
-            bool ok = !failedSpecies.Contains(group.Key);
+            bool ok = true;
             for (int i = 1; i < ranges.Length; i++)
             {
                 RangeRow previous = ranges[i - 1];

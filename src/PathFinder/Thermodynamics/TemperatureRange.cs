@@ -51,7 +51,7 @@ public readonly record struct TemperatureRange
     /// <param name="first">One end in K.</param>
     /// <param name="second">The other end in K.</param>
     /// <param name="tolerance">Absolute tolerance in K; default <see cref="DefaultTolerance"/>.</param>
-    public bool Contains(double first, double second, double tolerance = DefaultTolerance) =>
+    public bool ContainsInterval(double first, double second, double tolerance = DefaultTolerance) =>
         Contains(Math.Min(first, second), tolerance) && Contains(Math.Max(first, second), tolerance);
 
     /// <summary>Formats as <c>298.15–1000 K</c> with invariant culture.</summary>

@@ -9,7 +9,8 @@ public class ConstantVolumeCalorimetryTests
     public void BenzoicAcidCombustion_BombEnergyToEnthalpy_MatchesHessValue()
     {
         // Given C7H6O2(cr) + 15/2 O2(g) → 7 CO2(g) + 3 H2O(l), Δn(gas) = 7 − 7.5 = −0.5, and the standard massic
-        // energy of combustion of benzoic acid −26.413 kJ/g (thermochemical standard, from memory), molar mass from
+        // energy of combustion of benzoic acid, the calorimetric reference substance, ΔcU°/m = −26.413 kJ/g
+        // (standard-state value from the literature on benzoic acid calibrations, from memory), molar mass from
         // IUPAC standard atomic weights C 12.011, H 1.008, O 15.999 (conventional values)
         double molarMass = (7 * 12.011) + (6 * 1.008) + (2 * 15.999);
         double internalEnergy = -26.413e3 * molarMass;
@@ -17,7 +18,7 @@ public class ConstantVolumeCalorimetryTests
         // When converted to an enthalpy at 298.15 K
         double enthalpy = ConstantVolumeCalorimetry.EnthalpyFromInternalEnergy(internalEnergy, -0.5, 298.15);
 
-        // Then it matches ΔcH° by Hess's law from ΔfH°(C7H6O2, cr) = −385.2 kJ/mol (NIST Chemistry WebBook, from memory),
+        // Then it matches ΔcH° by Hess's law from ΔfH°(C7H6O2, cr) = −385.2 kJ/mol (literature value, from memory; the exact primary source not verified),
         // ΔfH°(CO2, g) = −393.51 and ΔfH°(H2O, l) = −285.830 kJ/mol (CODATA Key Values, Cox, Wagman, Medvedev 1989,
         // from memory); the tolerance 0.6 kJ/mol is half the 1.24 kJ/mol correction, so a missing or reversed
         // correction fails
