@@ -164,6 +164,17 @@ internal sealed class SvgScene
         });
     }
 
+    /// <summary>Moves the most recently added primitive to the back (drawn first, under everything else).</summary>
+    public void SendLastToBack()
+    {
+        if (_items.Count > 1)
+        {
+            Item last = _items[^1];
+            _items.RemoveAt(_items.Count - 1);
+            _items.Insert(0, last);
+        }
+    }
+
     /// <summary>Writes the document: the scene is shifted by (<paramref name="dx"/>, <paramref name="dy"/>).</summary>
     public string ToSvg(double width, double height, double dx, double dy, string title, string description)
     {
