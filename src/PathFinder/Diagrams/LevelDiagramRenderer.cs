@@ -160,18 +160,18 @@ public static class LevelDiagramRenderer
                 // A gap is a two-headed bracket with end ticks, so even a tiny gap stays visible.
                 _scene.Line(new DiagramPoint(arrowX - 10.0, _zeroY), new DiagramPoint(arrowX + 10.0, _zeroY), colour, width);
                 _scene.Line(new DiagramPoint(arrowX - 10.0, last.Y), new DiagramPoint(arrowX + 10.0, last.Y), colour, width);
-                double top = Math.Min(_zeroY, last.Y);
-                double bottom = Math.Max(_zeroY, last.Y);
-                if (bottom - top >= 2 * ArrowHead + 4.0)
+                double gapTop = Math.Min(_zeroY, last.Y);
+                double gapBottom = Math.Max(_zeroY, last.Y);
+                if (gapBottom - gapTop >= 2 * ArrowHead + 4.0)
                 {
-                    Arrow(arrowX, (top + bottom) / 2, top, colour, width, dash);
-                    Arrow(arrowX, (top + bottom) / 2, bottom, colour, width, dash);
+                    Arrow(arrowX, (gapTop + gapBottom) / 2, gapTop, colour, width, dash);
+                    Arrow(arrowX, (gapTop + gapBottom) / 2, gapBottom, colour, width, dash);
                 }
                 else
                 {
                     // Too small for arrows inside: point at the two lines from outside, as on a dimension line.
-                    Arrow(arrowX, top - 16.0, top, colour, width, null);
-                    Arrow(arrowX, bottom + 16.0, bottom, colour, width, null);
+                    Arrow(arrowX, gapTop - 16.0, gapTop, colour, width, null);
+                    Arrow(arrowX, gapBottom + 16.0, gapBottom, colour, width, null);
                 }
             }
 
