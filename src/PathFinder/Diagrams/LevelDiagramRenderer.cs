@@ -177,7 +177,7 @@ public static class LevelDiagramRenderer
 
             double blockHeight = lines.Count * LineGap;
             double top = ((_zeroY + last.Y) / 2) - (blockHeight / 2);
-            double textX = arrowX + 14.0;
+            double textX = arrowX + 18.0;
             if (badge)
             {
                 var c = new DiagramPoint(arrowX + 22.0, top + 6.0);
