@@ -7,6 +7,9 @@ namespace PathFinder.Diagrams;
 /// union of the (conservatively estimated) extents is known; then the document is written translated by a margin.</remarks>
 internal sealed class SvgScene
 {
+    /// <summary>Largest <c>width</c> attribute written, in px (1600); wider drawings are scaled down for display only.</summary>
+    public const double MaxDisplayWidth = 1600.0;
+
     private readonly List<Item> _items = [];
 
     /// <summary>Union of the extents of all primitives added so far, or null when empty.</summary>
@@ -180,8 +183,10 @@ internal sealed class SvgScene
     {
         var sb = new StringBuilder();
         sb.Append("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n");
-        sb.Append("<svg xmlns=\"http://www.w3.org/2000/svg\" version=\"1.1\" width=\"").Append(C(width))
-          .Append("\" height=\"").Append(C(height)).Append("\" viewBox=\"0 0 ").Append(C(width)).Append(' ').Append(C(height))
+        // Display size is capped so that huge drawings open at a usable zoom; the viewBox keeps full resolution.
+        double display = Math.Min(1.0, MaxDisplayWidth / width);
+        sb.Append("<svg xmlns=\"http://www.w3.org/2000/svg\" version=\"1.1\" width=\"").Append(C(Math.Round(width * display)))
+          .Append("\" height=\"").Append(C(Math.Round(height * display))).Append("\" viewBox=\"0 0 ").Append(C(width)).Append(' ').Append(C(height))
           .Append("\" font-family=\"").Append(DiagramText.Escape(DiagramStyle.FontFamily)).Append("\">\n");
         sb.Append("<title>").Append(DiagramText.Escape(title)).Append("</title>\n");
         sb.Append("<desc>").Append(DiagramText.Escape(description)).Append("</desc>\n");

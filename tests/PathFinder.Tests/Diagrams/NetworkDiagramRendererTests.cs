@@ -224,4 +224,15 @@ public class NetworkDiagramRendererTests
             Directory.Delete(folder, recursive: true);
         }
     }
+
+    [Fact]
+    public void Render_CapsTheDisplayWidthOfLargeDrawings()
+    {
+        // Given a network too wide for a page; Then the viewBox keeps its size but the width attribute is capped.
+        SvgDiagram diagram = NetworkDiagramRenderer.Render(DiagramSamples.Chain(40)).Diagram!;
+
+        Assert.True(diagram.Width > 1600.0);
+        XDocument doc = SvgChecks.ParseValid(diagram);
+        Assert.Equal(1600.0, SvgChecks.Number(doc.Root!, "width"), 2);
+    }
 }
