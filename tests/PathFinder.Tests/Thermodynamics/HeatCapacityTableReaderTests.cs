@@ -10,9 +10,9 @@ public class HeatCapacityTableReaderTests
     private const string ValidTable =
         "species,form,tmin,tmax,c1,c2,c3,c4,c5,c6,c7,c8,source\n" +
         "# nitrogen, three Shomate ranges (rows in any order)\n" +
-        "N2(g),shomate,500,2000,19.50583,19.88705,-8.598535,1.369784,0.527601,-4.935202,212.3900,0.0,NIST Shomate fit to JANAF\n" +
-        "N2(g),shomate,100,500,28.98641,1.853978,-9.647459,16.63537,0.000117,-8.671914,226.4168,0.0,NIST Shomate fit to JANAF\n" +
-        "N2(g),shomate,2000,6000,35.51872,1.128728,-0.196103,0.014662,-4.553760,-18.97091,224.9810,0.0,NIST Shomate fit to JANAF\n" +
+        "N2(g),shomate,500,2000,19.50583,19.88705,-8.598535,1.369784,0.527601,-4.935202,212.3900,0.0,Shomate fit to the JANAF tables (from memory)\n" +
+        "N2(g),shomate,100,500,28.98641,1.853978,-9.647459,16.63537,0.000117,-8.671914,226.4168,0.0,Shomate fit to the JANAF tables (from memory)\n" +
+        "N2(g),shomate,2000,6000,35.51872,1.128728,-0.196103,0.014662,-4.553760,-18.97091,224.9810,0.0,Shomate fit to the JANAF tables (from memory)\n" +
         "\n" +
         "N2 nasa,nasa7,300,1000,3.298677,1.4082404E-03,-3.963222E-06,5.641515E-09,-2.444854E-12,-1020.8999,3.950372,,GRI-Mech 3.0\n" +
         "N2 nasa,NASA7,1000,5000,2.926640,1.4879768E-03,-5.684760E-07,1.0097038E-10,-6.753351E-15,-922.7977,5.980528,,GRI-Mech 3.0\n" +

@@ -49,7 +49,7 @@ public class ReactionHeatCapacityTests
     [Fact]
     public void Kirchhoff_WaterFormationAt1000K_MatchesJanaf()
     {
-        // Given H2 + ½O2 → H2O(g) with Shomate data (NIST Shomate fit to NIST-JANAF 1998, from memory) and
+        // Given H2 + ½O2 → H2O(g) with Shomate data (Shomate fit to NIST-JANAF 1998, from memory) and
         // ΔfH°(H2O, g, 298.15 K) = −241.826 kJ/mol (NIST-JANAF 4th ed. 1998; CODATA Key Values 1989), from memory
         var reaction = new ReactionHeatCapacity<string>(
         [
@@ -74,7 +74,7 @@ public class ReactionHeatCapacityTests
     public void KirchhoffEntropyAndGibbs_WaterFormationAt1000K_MatchJanaf()
     {
         // Given ΔfH°(298.15 K) = −241.826 kJ/mol and S°(298.15 K): H2O(g) 188.834, H2 130.680, O2 205.147 J/(mol K)
-        // (NIST-JANAF 4th ed. 1998, from memory), and the Shomate data (NIST Shomate fit to NIST-JANAF 1998, from memory)
+        // (NIST-JANAF 4th ed. 1998, from memory), and the Shomate data (Shomate fit to NIST-JANAF 1998, from memory)
         double entropy298 = 188.834 - 130.680 - (0.5 * 205.147);
         var reaction = new ReactionHeatCapacity<string>(
         [

@@ -13,7 +13,7 @@ public class ShomateEquationTests
     [InlineData("H2", 20.680)]
     public void IntegratedCp_From298To1000K_MatchesJanafEnthalpyIncrement(string species, double janafKiloJoules)
     {
-        // Given Shomate coefficients (NIST Shomate fit to NIST-JANAF 1998, from memory)
+        // Given Shomate coefficients (Shomate fit to NIST-JANAF 1998, from memory)
         IHeatCapacity model = Model(species);
 
         // When Cp is integrated analytically across the ranges
@@ -26,7 +26,7 @@ public class ShomateEquationTests
     [Fact]
     public void EntropyIncrement_N2From298To1000K_MatchesJanaf()
     {
-        // Given N2 Shomate data (NIST Shomate fit to NIST-JANAF 1998, from memory)
+        // Given N2 Shomate data (Shomate fit to NIST-JANAF 1998, from memory)
         IHeatCapacity model = ReferenceHeatCapacities.NitrogenShomate();
 
         // When ∫Cp/T dT is taken

@@ -1,0 +1,26 @@
+namespace PathFinder.Analysis;
+
+/// <summary>Settings of the consistency analysis.</summary>
+public sealed record ConsistencyOptions
+{
+    /// <summary>|z| above which a cycle, source offset or cross check is flagged and the suspect procedure acts. Default 2.</summary>
+    public double Threshold { get; init; } = 2.0;
+
+    /// <summary>Factor by which the suspect procedure enlarges an offending uncertainty at each step. Default 2.</summary>
+    public double InflationFactor { get; init; } = 2.0;
+
+    /// <summary>Largest cycle (number of measurements) enumerated. Default 6.</summary>
+    public int MaxCycleSize { get; init; } = 6;
+
+    /// <summary>At most this many cycles are kept (worst first). Default 1000.</summary>
+    public int MaxCycles { get; init; } = 1000;
+
+    /// <summary>Time allowed for cycle enumeration per family. Default 1 s.</summary>
+    public TimeSpan CycleTimeBudget { get; init; } = TimeSpan.FromSeconds(1);
+
+    /// <summary>Whether to run the suspect procedure (otherwise suspects are empty and the adjusted solution is the given one).</summary>
+    public bool RunSuspectProcedure { get; init; } = true;
+
+    /// <summary>Cancels the analysis.</summary>
+    public CancellationToken CancellationToken { get; init; }
+}

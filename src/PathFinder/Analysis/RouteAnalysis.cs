@@ -1,0 +1,70 @@
+using Fractions;
+using PathFinder.Algebra;
+using PathFinder.Chemistry;
+using PathFinder.Routes;
+using PathFinder.Solving;
+
+namespace PathFinder.Analysis;
+
+/// <summary>Finds and explains every Hess's-law route from the measurements of a network to a target reaction.</summary>
+public static class RouteAnalysis
+{
+    /// <summary>Searches the routes to <paramref name="target"/> and explains each one.</summary>
+    /// <param name="model">The property model (its measurements are the candidate steps).</param>
+    /// <param name="target">The target equation (element-balanced).</param>
+    /// <param name="options">Search bounds; defaults to 6 steps and the best 100 routes.</param>
+    /// <param name="solution">A least-squares solution of the same model, for the network estimate beside the routes; optional.</param>
+    public static RouteReport Find(PropertyModel model, ChemicalEquation target, RouteSearchOptions? options = null, LeastSquaresSolution? solution = null)
+    {
+        ArgumentNullException.ThrowIfNull(model);
+        ArgumentNullException.ThrowIfNull(target);
+        options ??= new RouteSearchOptions();
+        SparseVector vector = model.VectorOf(target, out IReadOnlyList<Species> missing);
+        DerivedEstimate? estimate = null;
+        if (missing.Count > 0 || vector.IsZero)
+        {
+            // A species no measurement mentions cannot be reached; a target of reference states only is zero by definition.
+            return new RouteReport(target, model.Family, [], 0, SearchCut.None, 0, missing, estimate, options.MaxSteps);
+        }
+
+        RouteSearchResult result = FindRoutes.To(model.ToRouteNetwork(), vector, options);
+        if (solution is not null)
+        {
+            DerivedEstimate derived = solution.Estimate(PropertyModel.RowOf(vector));
+            estimate = derived.IsEstimable ? derived : null;
+        }
+
+        var routes = result.Routes.Select((route, position) => Explain(model, target, route, position + 1)).ToArray();
+        Species[] unreachable = result.UnreachableSpecies.Select(index => model.Unknowns[index]).ToArray();
+        return new RouteReport(target, model.Family, routes, result.RoutesFound, result.Cut, result.IndependentRouteCount, unreachable, estimate, options.MaxSteps);
+    }
+
+    /// <summary>Spells out one route: each step transformed, the intermediates that cancel, and the sum.</summary>
+    public static ExplainedRoute Explain(PropertyModel model, ChemicalEquation target, Route route, int number)
+    {
+        ArgumentNullException.ThrowIfNull(model);
+        ArgumentNullException.ThrowIfNull(route);
+        var steps = new List<RouteStep>(route.Steps);
+        ChemicalEquation sum = ChemicalEquation.FromTerms([]);
+        var seen = new List<Species>();
+        for (int i = 0; i < route.Steps; i++)
+        {
+            PreparedMeasurement measurement = model.Measurements[route.Measurements[i]];
+            Fraction factor = route.Factors[i];
+            ChemicalEquation scaled = measurement.Equation.Scale(factor);
+            double c = factor.ToDouble();
+            steps.Add(new RouteStep(measurement, factor, scaled, c * measurement.Value, Math.Abs(c) * measurement.Uncertainty));
+            sum = sum.Add(scaled);
+            foreach (EquationTerm term in scaled.Terms)
+            {
+                if (!seen.Contains(term.Species))
+                {
+                    seen.Add(term.Species);
+                }
+            }
+        }
+
+        Species[] cancelled = seen.Where(species => sum.CoefficientOf(species).IsZero).ToArray();
+        return new ExplainedRoute(number, steps, route.Value, route.Uncertainty, route.IsIndependent, cancelled, sum);
+    }
+}
