@@ -16,6 +16,9 @@ public static class CliApp
             "find every route to a target, test cycle closure and solve the network.\n" + ExitCodes.HelpText)
         {
             new ValidateCommand().Build(context),
+            new RoutesCommand().Build(context),
+            new CheckCommand().Build(context),
+            new SolveCommand().Build(context),
         };
 
         ParseResult parse = root.Parse(args);

@@ -96,7 +96,7 @@ public static class ConsistencyCheck
             checks,
             cycleChecks,
             cycles.CyclesFound,
-            cycles.Complete,
+            cycles.Cut,
             cycles.IndependentCycleCount,
             suspects,
             adjustments,
@@ -110,13 +110,15 @@ public static class ConsistencyCheck
             .GroupBy(check => check.Measurement.Source, StringComparer.Ordinal)
             .Select(group =>
             {
-                double[] z = group.Where(check => check.NormalizedResidual.HasValue).Select(check => check.NormalizedResidual!.Value).ToArray();
+                // Each measurement's distance from what the rest of the (adjusted) network predicts is about
+                // N(0, 1) for sound data, so the mean over n sound measurements is about N(0, 1/n). Suspects are
+                // counted apart and left out of the mean, so one gross error does not pass for a source-wide offset.
+                double[] z = group.Where(check => !check.IsSuspect && check.PredictionZ.HasValue).Select(check => check.PredictionZ!.Value).ToArray();
                 double mean = z.Length > 0 ? z.Average() : 0.0;
                 double spread = z.Length > 1 ? Math.Sqrt(z.Sum(value => (value - mean) * (value - mean)) / (z.Length - 1)) : double.NaN;
-
-                // Normalized residuals of sound data are about N(0, 1), so their mean over n is about N(0, 1/n).
                 double offsetZ = mean * Math.Sqrt(z.Length);
-                return new SourceCheck(group.Key, group.Count(), z.Length, mean, spread, offsetZ, group.Count(check => check.IsSuspect), z.Length >= 2 && Math.Abs(offsetZ) > threshold);
+                int checkable = group.Count(check => check.IsCheckable);
+                return new SourceCheck(group.Key, group.Count(), checkable, mean, spread, offsetZ, group.Count(check => check.IsSuspect), z.Length >= 2 && Math.Abs(offsetZ) > threshold);
             })
             .OrderByDescending(source => Math.Abs(source.OffsetZ))
             .ToArray();

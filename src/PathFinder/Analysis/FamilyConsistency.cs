@@ -1,3 +1,4 @@
+using PathFinder.Routes;
 using PathFinder.Solving;
 
 namespace PathFinder.Analysis;
@@ -7,7 +8,7 @@ namespace PathFinder.Analysis;
 /// <param name="Measurements">Every measurement's residual, normalized residual and leave-one-out prediction, in data order.</param>
 /// <param name="Cycles">Minimal cycles up to the size bound, worst |z| first.</param>
 /// <param name="CyclesFound">How many minimal cycles the search found.</param>
-/// <param name="CyclesComplete">Whether every minimal cycle up to the bound was found.</param>
+/// <param name="CycleCut">What cut the cycle enumeration short, if anything.</param>
 /// <param name="IndependentCycles">Measurements − rank: the number of independent cycles.</param>
 /// <param name="Suspects">Suspects, most serious first.</param>
 /// <param name="Adjustments">Each uncertainty enlargement made by the procedure, in order.</param>
@@ -19,7 +20,7 @@ public sealed record FamilyConsistency(
     IReadOnlyList<MeasurementCheck> Measurements,
     IReadOnlyList<CycleCheck> Cycles,
     long CyclesFound,
-    bool CyclesComplete,
+    SearchCut CycleCut,
     int IndependentCycles,
     IReadOnlyList<SuspectReport> Suspects,
     IReadOnlyList<UncertaintyAdjustment> Adjustments,
@@ -27,6 +28,9 @@ public sealed record FamilyConsistency(
     LeastSquaresSolution AsGiven,
     LeastSquaresSolution Adjusted)
 {
+    /// <summary>Whether every minimal cycle up to the size bound was found.</summary>
+    public bool CyclesComplete => CycleCut == SearchCut.None;
+
     /// <summary>The family.</summary>
     public PropertyFamily Family => Model.Family;
 

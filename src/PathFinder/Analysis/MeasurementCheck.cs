@@ -22,6 +22,12 @@ public sealed record MeasurementCheck(
     /// <summary>Whether any other measurement checks this one.</summary>
     public bool IsCheckable => NormalizedResidual.HasValue;
 
+    /// <summary>(measured − predicted) / √(u² + u_pred²): how far the measurement is from what the rest says, about N(0,1) for sound data; null when not checkable.</summary>
+    /// <remarks>Uses the measured (not enlarged) uncertainty, so a suspect keeps its large value.</remarks>
+    public double? PredictionZ => Predicted is { } predicted && PredictedUncertainty is { } spread
+        ? (Measurement.Value - predicted) / Math.Sqrt((Measurement.Uncertainty * Measurement.Uncertainty) + (spread * spread))
+        : null;
+
     /// <summary>A word for the status, readable without colour: ok, suspect, adjusted, unchecked.</summary>
     public string Status => IsSuspect ? "suspect"
         : FinalUncertainty > Measurement.Uncertainty * (1 + 1e-9) ? "adjusted"

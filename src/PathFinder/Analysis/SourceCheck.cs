@@ -4,7 +4,7 @@ namespace PathFinder.Analysis;
 /// <param name="Source">The source name.</param>
 /// <param name="Measurements">How many measurements it gave (in this family).</param>
 /// <param name="Checkable">How many of them are checked by other data.</param>
-/// <param name="MeanNormalizedResidual">Mean of the normalized residuals of its checkable measurements.</param>
+/// <param name="MeanNormalizedResidual">Mean of (measured − predicted)/√(u² + u_pred²) over its checkable measurements that are not suspects.</param>
 /// <param name="SpreadNormalizedResidual">Their standard deviation (about 1 for a sound source).</param>
 /// <param name="OffsetZ">Mean × √n: the significance of a systematic offset (about N(0,1) for a sound source).</param>
 /// <param name="Suspects">How many of its measurements are suspects.</param>

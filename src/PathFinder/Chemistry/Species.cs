@@ -8,8 +8,9 @@ namespace PathFinder.Chemistry;
 /// </remarks>
 public sealed class Species : IEquatable<Species>
 {
-    private Species(Formula formula, PhysicalState state, string label, string name)
+    private Species(Formula formula, PhysicalState state, string label, string name, string description)
     {
+        Description = description;
         Formula = formula;
         State = state;
         Label = label;
@@ -29,6 +30,9 @@ public sealed class Species : IEquatable<Species>
     /// <summary>How the species is shown: as written in the data, e.g. <c>CH3OH(l)</c>, or its declared name.</summary>
     public string Name { get; }
 
+    /// <summary>A descriptive name declared in <c>species.csv</c> (e.g. "dimethyl ether"), or empty.</summary>
+    public string Description { get; }
+
     /// <summary>The canonical identity, e.g. <c>CH4O(l)</c> or <c>C2H6O(g)[DME]</c>.</summary>
     public string Key { get; }
 
@@ -36,18 +40,19 @@ public sealed class Species : IEquatable<Species>
     public bool IsGas => State.Phase == Phase.Gas;
 
     /// <summary>Creates a species; <paramref name="name"/> defaults to the formula as written plus its state.</summary>
-    public static Species Create(Formula formula, PhysicalState state, string label = "", string? name = null)
+    public static Species Create(Formula formula, PhysicalState state, string label = "", string? name = null, string description = "")
     {
         ArgumentNullException.ThrowIfNull(formula);
         ArgumentNullException.ThrowIfNull(label);
-        return new Species(formula, state, label, name ?? $"{formula.Text}({state})");
+        ArgumentNullException.ThrowIfNull(description);
+        return new Species(formula, state, label, name ?? $"{formula.Text}({state})", description);
     }
 
     /// <summary>Reads a species such as <c>CH4(g)</c> (throws on bad input; use <see cref="SpeciesParser"/> to get a located failure).</summary>
     public static Species Parse(string text) => SpeciesParser.Parse(text).Value;
 
     /// <summary>The same species shown under another name (identity unchanged).</summary>
-    public Species WithName(string name) => new(Formula, State, Label, name);
+    public Species WithName(string name) => new(Formula, State, Label, name, Description);
 
     /// <inheritdoc/>
     public bool Equals(Species? other) => other is not null && Key == other.Key;

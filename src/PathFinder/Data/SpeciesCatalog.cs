@@ -68,7 +68,7 @@ public sealed class SpeciesCatalog
                 continue;
             }
 
-            Species declared = Species.Create(parsed.Formula, parsed.State, key, name.Length > 0 ? name : key);
+            Species declared = Species.Create(parsed.Formula, parsed.State, key, name: key, description: name);
             if (!catalog._byKey.TryAdd(key, declared))
             {
                 diagnostics.Add(Diagnostic.Error("duplicate-species-key", row.LocationOf(keyColumn, "key"), $"species key '{key}' is declared twice", "give each species its own key"));

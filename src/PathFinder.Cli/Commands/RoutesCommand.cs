@@ -1,0 +1,83 @@
+using System.CommandLine;
+using PathFinder.Analysis;
+using PathFinder.Chemistry;
+using PathFinder.Cli.Output;
+using PathFinder.Quantities;
+using PathFinder.Routes;
+
+namespace PathFinder.Cli.Commands;
+
+/// <summary><c>pathfinder routes &lt;network&gt; --target "…"</c>: every minimal Hess's-law route to a target, best first.</summary>
+public sealed class RoutesCommand
+{
+    private readonly Argument<string> _network = new("network") { Description = "A CSV file or a folder of CSV files." };
+    private readonly Option<string> _target = new("--target", "-t") { Description = "The target: a balanced equation, or one species for its formation.", Required = true };
+    private readonly Option<string> _property = new("--property", "-p") { Description = "dH (default), dG, dS or dU.", DefaultValueFactory = _ => "dH" };
+    private readonly Option<int> _maxSteps = new("--max-steps") { Description = "Longest route searched, in measurements (default 6).", DefaultValueFactory = _ => 6 };
+    private readonly Option<int> _top = new("--top") { Description = "How many routes to list, best first (default 10).", DefaultValueFactory = _ => 10 };
+    private readonly Option<int> _explain = new("--explain") { Description = "How many of the listed routes to spell out step by step (default 3).", DefaultValueFactory = _ => 3 };
+    private readonly Option<double> _timeBudget = new("--time-budget") { Description = "Seconds the search may take before it reports what it found as incomplete (default 20).", DefaultValueFactory = _ => 20.0 };
+    private readonly Option<double?> _temperature = new("--temperature") { Description = "Also report ΔrH, ΔrS, ΔrG and K of the target at this temperature in K (needs ΔS or S° data, and heat capacities)." };
+    private readonly Option<bool> _json = new("--json") { Description = "Write the result as JSON." };
+    private readonly Option<bool> _skipInvalid = new("--skip-invalid") { Description = "Use the valid rows when some rows have errors." };
+
+    /// <summary>Builds the command bound to <paramref name="context"/>.</summary>
+    public Command Build(CommandContext context)
+    {
+        var command = new Command("routes", "Find every minimal route from the measurements to a target reaction, with exact factors, values and propagated uncertainties.")
+        {
+            _network, _target, _property, _maxSteps, _top, _explain, _timeBudget, _temperature, _json, _skipInvalid,
+        };
+        command.SetAction(parse => Run(
+            parse.GetValue(_network)!,
+            parse.GetValue(_target)!,
+            parse.GetValue(_property)!,
+            parse.GetValue(_maxSteps),
+            parse.GetValue(_top),
+            parse.GetValue(_explain),
+            parse.GetValue(_timeBudget),
+            parse.GetValue(_temperature),
+            parse.GetValue(_json),
+            parse.GetValue(_skipInvalid),
+            context));
+        return command;
+    }
+
+    /// <summary>Runs the search; exit 0 when a route exists, 1 when none does, 2 for bad input.</summary>
+    public static int Run(string path, string targetText, string propertyCode, int maxSteps, int top, int explain, double timeBudget, double? temperature, bool json, bool skipInvalid, CommandContext context)
+    {
+        ArgumentNullException.ThrowIfNull(context);
+        ThermoProperty property = OptionParsing.Property(propertyCode);
+        OptionParsing.Positive(maxSteps, "--max-steps");
+        OptionParsing.Positive(top, "--top");
+        OptionParsing.Positive(timeBudget, "--time-budget");
+        if (temperature is { } t && (!double.IsFinite(t) || t <= 0 || t > 10000))
+        {
+            throw new UserInputException("--temperature must be in kelvin, above 0 and at most 10000");
+        }
+
+        AnalysisSession? session = AnalysisSession.Open(path, context, skipInvalid, out int exitCode);
+        if (session is null)
+        {
+            return exitCode;
+        }
+
+        ChemicalEquation target = OptionParsing.Target(targetText, session.Network);
+        PropertyFamily family = PropertyFamilies.FamilyOf(property);
+        PropertyModel model = session.Model(family);
+        SolveReport solved = NetworkSolver.Solve(model, adjust: true);
+        RouteReport report = RouteAnalysis.Find(model, target, new RouteSearchOptions { MaxSteps = maxSteps, MaxRoutes = top, TimeBudget = TimeSpan.FromSeconds(timeBudget) }, solved.Solution);
+        TargetConditions? atTemperature = temperature is { } kelvin ? TargetConditions.Evaluate(session.Network, session.HeatCapacities, target, kelvin) : null;
+        RouteOutput.Write(context.Out, report, model, property, explain, atTemperature, json);
+        if (report.Routes.Count == 0)
+        {
+            string why = report.UnreachableSpecies.Count > 0
+                ? $"no route: no {family.ResultProperty().Code()} measurement contains {string.Join(", ", report.UnreachableSpecies.Select(species => species.Name))}"
+                : report.Complete ? "no route: the measurements cannot be combined into the target" : $"no route found ({report.IncompleteReason})";
+            context.Error.WriteLine(why);
+            return ExitCodes.AnalysisProblem;
+        }
+
+        return ExitCodes.Success;
+    }
+}

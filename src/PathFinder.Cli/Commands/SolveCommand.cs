@@ -1,0 +1,61 @@
+using System.CommandLine;
+using PathFinder.Analysis;
+using PathFinder.Cli.Output;
+using PathFinder.Quantities;
+
+namespace PathFinder.Cli.Commands;
+
+/// <summary><c>pathfinder solve &lt;network&gt;</c>: one self-consistent best set of species values (weighted least squares).</summary>
+public sealed class SolveCommand
+{
+    private readonly Argument<string> _network = new("network") { Description = "A CSV file or a folder of CSV files." };
+    private readonly Option<string> _property = new("--property", "-p") { Description = "dH (default: ΔfH° from ΔH and ΔU data), dG (ΔfG°) or dS (S° from ΔS and S° data).", DefaultValueFactory = _ => "dH" };
+    private readonly Option<bool> _noAdjust = new("--no-adjust") { Description = "Solve the data as given, without the suspect procedure." };
+    private readonly Option<double> _threshold = new("--threshold") { Description = "|z| threshold of the suspect procedure (default 2).", DefaultValueFactory = _ => 2.0 };
+    private readonly Option<string> _format = new("--format", "-f") { Description = "table (default), csv, json or markdown.", DefaultValueFactory = _ => "table" };
+    private readonly Option<bool> _json = new("--json") { Description = "Same as --format json." };
+    private readonly Option<bool> _skipInvalid = new("--skip-invalid") { Description = "Use the valid rows when some rows have errors." };
+
+    /// <summary>Builds the command bound to <paramref name="context"/>.</summary>
+    public Command Build(CommandContext context)
+    {
+        var command = new Command("solve", "Solve the network by weighted least squares: the best estimate and uncertainty of every species the data determine.")
+        {
+            _network, _property, _noAdjust, _threshold, _format, _json, _skipInvalid,
+        };
+        _format.AcceptOnlyFromAmong("table", "csv", "json", "markdown");
+        command.SetAction(parse => Run(
+            parse.GetValue(_network)!,
+            parse.GetValue(_property)!,
+            parse.GetValue(_noAdjust),
+            parse.GetValue(_threshold),
+            parse.GetValue(_json) ? "json" : parse.GetValue(_format)!,
+            parse.GetValue(_skipInvalid),
+            context));
+        return command;
+    }
+
+    /// <summary>Runs the solve; exit 0, or 2 for bad input.</summary>
+    public static int Run(string path, string propertyCode, bool noAdjust, double threshold, string format, bool skipInvalid, CommandContext context)
+    {
+        ArgumentNullException.ThrowIfNull(context);
+        ThermoProperty property = OptionParsing.Property(propertyCode);
+        OptionParsing.Positive(threshold, "--threshold");
+        AnalysisSession? session = AnalysisSession.Open(path, context, skipInvalid, out int exitCode);
+        if (session is null)
+        {
+            return exitCode;
+        }
+
+        PropertyFamily family = PropertyFamilies.FamilyOf(property);
+        PropertyModel model = session.Model(family);
+        if (model.Measurements.Count == 0)
+        {
+            throw new UserInputException($"the network has no {family.ResultProperty().Code()} data to solve");
+        }
+
+        SolveReport report = NetworkSolver.Solve(model, adjust: !noAdjust, new ConsistencyOptions { Threshold = threshold });
+        SolveOutput.Write(context.Out, report, format);
+        return ExitCodes.Success;
+    }
+}

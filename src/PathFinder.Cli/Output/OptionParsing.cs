@@ -1,0 +1,36 @@
+using PathFinder.Analysis;
+using PathFinder.Chemistry;
+using PathFinder.Diagnostics;
+using PathFinder.Quantities;
+
+namespace PathFinder.Cli.Output;
+
+/// <summary>Checks of option values that the command-line parser cannot express; failures become exit code 2.</summary>
+public static class OptionParsing
+{
+    /// <summary>Reads a property code such as dH into its family.</summary>
+    public static ThermoProperty Property(string code) =>
+        ThermoProperties.TryParse(code, out ThermoProperty property) && property != ThermoProperty.AbsoluteEntropy
+            ? property
+            : throw new UserInputException($"--property '{code}' is not one of dH, dG, dS, dU");
+
+    /// <summary>Reads a target against the network, with a caret under the problem when it fails.</summary>
+    public static ChemicalEquation Target(string text, ReactionNetwork network)
+    {
+        ParseResult<ChemicalEquation> target = TargetReaction.Parse(text, network);
+        if (!target.TryGetValue(out ChemicalEquation? equation))
+        {
+            throw new UserInputException(TargetReaction.Describe(text, target.Failure));
+        }
+
+        return equation;
+    }
+
+    /// <summary>Requires a positive whole number.</summary>
+    public static int Positive(int value, string option) =>
+        value > 0 ? value : throw new UserInputException($"{option} must be a positive whole number, not {value}");
+
+    /// <summary>Requires a positive finite number.</summary>
+    public static double Positive(double value, string option) =>
+        double.IsFinite(value) && value > 0 ? value : throw new UserInputException($"{option} must be a positive number");
+}

@@ -1,0 +1,108 @@
+using System.Globalization;
+using System.Text;
+using PathFinder.Analysis;
+using PathFinder.Quantities;
+
+namespace PathFinder.Cli.Output;
+
+/// <summary>Writes a solve report as a text table, CSV, Markdown or JSON.</summary>
+public static class SolveOutput
+{
+    /// <summary>Writes the report in <paramref name="format"/> (table, csv, json, markdown).</summary>
+    public static void Write(TextWriter output, SolveReport report, string format)
+    {
+        ArgumentNullException.ThrowIfNull(output);
+        ArgumentNullException.ThrowIfNull(report);
+        string unit = report.Model.Unit.Symbol;
+        string quantity = report.Family.SpeciesQuantity();
+        SpeciesEstimate[] determined = report.Species.Where(estimate => estimate.IsDetermined).ToArray();
+        switch (format)
+        {
+            case "json":
+                Json.Write(output, new
+                {
+                    property = report.Family.ResultProperty().Code(),
+                    quantity,
+                    unit,
+                    temperature = report.Model.ReferenceTemperature,
+                    adjusted = report.Adjusted,
+                    measurements = report.Model.Measurements.Count,
+                    rank = report.Solution.Rank,
+                    chiSquared = report.Solution.ChiSquared,
+                    degreesOfFreedom = report.Solution.DegreesOfFreedom,
+                    birgeRatio = Json.Number(report.Solution.BirgeRatio),
+                    species = determined.Select(estimate => new { name = estimate.Species.Name, value = estimate.Value, uncertainty = estimate.Uncertainty, measurements = estimate.Measurements }),
+                    undetermined = report.Undetermined.Select(estimate => estimate.Species.Name),
+                    relativeOnly = report.RelativeGroups,
+                    suspects = report.Suspects.Select(suspect => report.Model.Measurements[suspect.ObservationIndex].Id),
+                    adjustments = report.Adjustments.Count,
+                    caution = Text.Caution,
+                });
+                return;
+            case "csv":
+                var csv = new StringBuilder();
+                csv.AppendLine(CultureInfo.InvariantCulture, $"species,{Code(report)},uncertainty,unit,measurements");
+                foreach (SpeciesEstimate estimate in determined)
+                {
+                    csv.AppendLine(CultureInfo.InvariantCulture, $"{Quote(estimate.Species.Name)},{estimate.Value:R},{estimate.Uncertainty:R},{unit},{estimate.Measurements}");
+                }
+
+                output.Write(csv.ToString());
+                return;
+            case "markdown":
+                output.WriteLine($"| species | {quantity} / ({unit}) | u / ({unit}) | measurements |");
+                output.WriteLine("|---|---:|---:|---:|");
+                foreach (SpeciesEstimate estimate in determined)
+                {
+                    output.WriteLine($"| {estimate.Species.Name} | {Text.Number(estimate.Value)} | {Text.Number(estimate.Uncertainty)} | {estimate.Measurements} |");
+                }
+
+                output.WriteLine();
+                WriteFooter(output, report);
+                return;
+            default:
+                output.WriteLine($"{quantity} at 298.15 K in {unit}, weighted least squares over {report.Model.Measurements.Count} measurements{(report.Adjusted ? $" after the suspect procedure ({report.Adjustments.Count} adjustments, {report.Suspects.Count} suspects)" : " as given")}");
+                output.WriteLine($"χ² = {Text.Number(report.Solution.ChiSquared)}, {report.Solution.DegreesOfFreedom} degrees of freedom, Birge ratio {Text.Number(report.Solution.BirgeRatio)}");
+                output.WriteLine();
+                int width = Math.Max(12, determined.Select(estimate => estimate.Species.Name.Length).DefaultIfEmpty(12).Max());
+                output.WriteLine($"  {"species".PadRight(width)}  {quantity,12}  {"±u",8}  measurements");
+                foreach (SpeciesEstimate estimate in determined)
+                {
+                    output.WriteLine($"  {estimate.Species.Name.PadRight(width)}  {Text.Number(estimate.Value),12}  {Text.Number(estimate.Uncertainty),8}  {estimate.Measurements,12}");
+                }
+
+                output.WriteLine();
+                WriteFooter(output, report);
+                return;
+        }
+    }
+
+    private static void WriteFooter(TextWriter output, SolveReport report)
+    {
+        if (report.Undetermined.Count > 0)
+        {
+            output.WriteLine($"Not determined by the data ({report.Undetermined.Count}): {string.Join(", ", report.Undetermined.Select(estimate => estimate.Species.Name))}");
+            foreach (string group in report.RelativeGroups)
+            {
+                output.WriteLine($"  known only relative to each other: {group}");
+            }
+        }
+
+        if (report.Suspects.Count > 0)
+        {
+            output.WriteLine($"Suspects down-weighted: {string.Join(", ", report.Suspects.Select(suspect => report.Model.Measurements[suspect.ObservationIndex].Id))} (see 'pathfinder check')");
+        }
+
+        output.WriteLine(Text.Caution);
+    }
+
+    private static string Code(SolveReport report) => report.Family switch
+    {
+        PropertyFamily.Enthalpy => "dfH",
+        PropertyFamily.GibbsEnergy => "dfG",
+        _ => "S",
+    };
+
+    private static string Quote(string text) =>
+        text.IndexOfAny([',', '"', '\n']) >= 0 ? "\"" + text.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"" : text;
+}
