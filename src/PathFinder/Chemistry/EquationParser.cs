@@ -40,7 +40,10 @@ public static class EquationParser
             ParseResult<List<EquationTerm>> single = ReadSide(text, 0, text.Length, resolveSpecies, sign: 1);
             if (!single.TryGetValue(out List<EquationTerm>? terms))
             {
-                return ParseResult<ChemicalEquation>.Fail(single.Failure);
+                // Without an arrow, a structural error (two species with no '+' between them) marks where the arrow was forgotten.
+                return single.Failure.Code == "bad-equation"
+                    ? ParseResult<ChemicalEquation>.Fail(single.Failure.Offset, "missing-arrow", "the equation has no arrow", "write reactants -> products; a single species alone (no coefficient) means its formation from the elements")
+                    : ParseResult<ChemicalEquation>.Fail(single.Failure);
             }
 
             if (terms.Count != 1 || terms[0].Coefficient != Fraction.One)

@@ -4,7 +4,7 @@ namespace PathFinder.Quantities;
 /// <remarks>
 /// Canonical units: kJ/mol for energies, J/(mol·K) for entropies. Per-particle units are converted with the
 /// CODATA 2018 exact constants: 1 eV = e·N_A = 96.485 332 12... kJ/mol; 1 cm⁻¹ = h·c·(100 m⁻¹)·N_A =
-/// 0.011 962 656 8... kJ/mol. The calorie is the thermochemical calorie, 4.184 J exactly (NIST SP 811).
+/// 0.011 962 656 56... kJ/mol. The calorie is the thermochemical calorie, 4.184 J exactly (NIST SP 811).
 /// </remarks>
 /// <param name="Symbol">The symbol as printed, e.g. <c>kJ/mol</c>.</param>
 /// <param name="Dimension">Energy or entropy.</param>

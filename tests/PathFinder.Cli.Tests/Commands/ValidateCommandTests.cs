@@ -1,0 +1,142 @@
+using System.Text.Json;
+using PathFinder.Cli.Tests.TestSupport;
+
+namespace PathFinder.Cli.Tests.Commands;
+
+public sealed class ValidateCommandTests : IDisposable
+{
+    private readonly TempFolder _folder = new();
+
+    public void Dispose() => _folder.Dispose();
+
+    [Fact]
+    public void Validate_ValidNetworkPrintsASummaryAndExitsZero()
+    {
+        // Given the combustion-lab demo folder
+        CliRun run = CliRun.Of("validate", RepoPaths.Demo("combustion-lab"));
+
+        // Then the summary is printed and the result is valid
+        Assert.Equal(0, run.ExitCode);
+        Assert.Contains("29 usable measurement(s) in 3 file(s)", run.Out, StringComparison.Ordinal);
+        Assert.Contains("0 error(s)", run.Out, StringComparison.Ordinal);
+        Assert.Contains("Result: valid", run.Out, StringComparison.Ordinal);
+        Assert.Contains("group-a (14), group-b (9), group-c (6)", run.Out, StringComparison.Ordinal);
+        Assert.Equal("", run.Error);
+    }
+
+    [Fact]
+    public void Validate_BrineIonsIsValid()
+    {
+        CliRun run = CliRun.Of("validate", RepoPaths.Demo("brine-ions.csv"));
+
+        Assert.Equal(0, run.ExitCode);
+        Assert.Contains("Result: valid", run.Out, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Validate_FaultyNotebookListsEveryProblemAndExitsTwo()
+    {
+        string file = RepoPaths.Demo("notebook-with-typos.csv");
+
+        CliRun run = CliRun.Of("validate", file);
+
+        Assert.Equal(2, run.ExitCode);
+        Assert.Contains("10 error(s), 0 warning(s)", run.Out, StringComparison.Ordinal);
+        Assert.Contains($"{file}:4:5: error unbalanced-equation: the equation is not balanced: left has 4 H, right has 2 H; left has 4 O, right has 3 O", run.Out, StringComparison.Ordinal);
+        Assert.Contains("Result: INVALID", run.Out, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Validate_JsonOfAValidNetworkHasTheSummary()
+    {
+        CliRun run = CliRun.Of("validate", RepoPaths.Demo("combustion-lab"), "--json");
+
+        Assert.Equal(0, run.ExitCode);
+        using JsonDocument document = JsonDocument.Parse(run.Out);
+        JsonElement root = document.RootElement;
+        Assert.True(root.GetProperty("valid").GetBoolean());
+        Assert.Equal(0, root.GetProperty("errors").GetInt32());
+        Assert.Equal(3, root.GetProperty("files").GetArrayLength());
+        JsonElement summary = root.GetProperty("summary");
+        Assert.Equal(29, summary.GetProperty("measurements").GetInt32());
+        Assert.Equal(["group-a", "group-b", "group-c"], summary.GetProperty("sources").EnumerateArray().Select(source => source.GetProperty("name").GetString()));
+        Assert.Equal(["C", "H", "O"], summary.GetProperty("elements").EnumerateArray().Select(element => element.GetString()));
+        Assert.Contains("dU", summary.GetProperty("properties").EnumerateArray().Select(property => property.GetProperty("property").GetString()));
+        Assert.EndsWith("species.csv", root.GetProperty("speciesFile").GetString(), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Validate_JsonOfTheFaultyNotebookListsLocatedDiagnostics()
+    {
+        string file = RepoPaths.Demo("notebook-with-typos.csv");
+
+        CliRun run = CliRun.Of("validate", file, "--json");
+
+        Assert.Equal(2, run.ExitCode);
+        using JsonDocument document = JsonDocument.Parse(run.Out);
+        JsonElement root = document.RootElement;
+        Assert.False(root.GetProperty("valid").GetBoolean());
+        Assert.Equal(10, root.GetProperty("errors").GetInt32());
+        JsonElement[] diagnostics = [.. root.GetProperty("diagnostics").EnumerateArray()];
+        Assert.Equal(10, diagnostics.Length);
+        JsonElement first = diagnostics[0];
+        Assert.Equal("error", first.GetProperty("severity").GetString());
+        Assert.Equal("unbalanced-equation", first.GetProperty("code").GetString());
+        Assert.Equal(file, first.GetProperty("file").GetString());
+        Assert.Equal(4, first.GetProperty("line").GetInt32());
+        Assert.Equal(5, first.GetProperty("column").GetInt32());
+        Assert.Equal("equation", first.GetProperty("field").GetString());
+        Assert.Equal(Enumerable.Range(4, 10), diagnostics.Select(diagnostic => diagnostic.GetProperty("line").GetInt32()));
+    }
+
+    [Fact]
+    public void Validate_JsonKeepsReadableUnicode()
+    {
+        string file = _folder.Write("lab.csv", "id,equation,property,value,uncertainty,unit\nm1,CO(g),dS,89.0,0.2,kJ/(mol·K)\nm2,CO(g),dH,1,1,J/(mol·K)\n");
+
+        CliRun run = CliRun.Of("validate", file, "--json");
+
+        Assert.Contains("J/(mol·K)", run.Out, StringComparison.Ordinal);
+        using JsonDocument document = JsonDocument.Parse(run.Out);
+        JsonElement error = Assert.Single(document.RootElement.GetProperty("diagnostics").EnumerateArray(), diagnostic => diagnostic.GetProperty("severity").GetString() == "error");
+        Assert.Equal("wrong-unit", error.GetProperty("code").GetString());
+        Assert.Equal("dH cannot be in J/(mol·K)", error.GetProperty("message").GetString());
+    }
+
+    [Fact]
+    public void Validate_WarningsAloneStillExitZero()
+    {
+        string file = _folder.Write("lab.csv", "id,equation,property,value,uncertainty\nm1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2\n");
+
+        CliRun run = CliRun.Of("validate", file);
+
+        Assert.Equal(0, run.ExitCode);
+        Assert.Contains("warning single-use-species", run.Out, StringComparison.Ordinal);
+        Assert.Contains("Result: valid, with warnings.", run.Out, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Validate_NonexistentPathExitsTwoWithAMessage()
+    {
+        string path = Path.Combine(_folder.Path, "missing.csv");
+
+        CliRun run = CliRun.Of("validate", path);
+
+        Assert.Equal(2, run.ExitCode);
+        Assert.Contains($"{path}: error not-found: no such file or folder", run.Out, StringComparison.Ordinal);
+        Assert.DoesNotContain("   at ", run.Out + run.Error, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Validate_BinaryFileExitsTwo()
+    {
+        string file = Path.Combine(_folder.Path, "photo.csv");
+        File.WriteAllBytes(file, [0xFF, 0xD8, 0xFF, 0x00, 0x10]);
+
+        CliRun run = CliRun.Of("validate", file, "--json");
+
+        Assert.Equal(2, run.ExitCode);
+        using JsonDocument document = JsonDocument.Parse(run.Out);
+        Assert.Equal("binary-file", document.RootElement.GetProperty("diagnostics")[0].GetProperty("code").GetString());
+    }
+}

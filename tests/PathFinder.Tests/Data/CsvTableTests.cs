@@ -1,0 +1,120 @@
+using System.Text;
+using PathFinder.Data;
+using PathFinder.Diagnostics;
+
+namespace PathFinder.Tests.Data;
+
+public sealed class CsvTableTests
+{
+    [Fact]
+    public void Parse_ReadsHeaderRowsAndFieldColumns()
+    {
+        // Given a header and a row with a quoted field holding a comma
+        List<Diagnostic> diagnostics = [];
+        CsvTable table = Parse("id,note,value\nm1,\"a, b\",2.5\n", diagnostics)!;
+
+        // Then fields are unquoted and each column points at the field's content (inside the quotes)
+        Assert.Empty(diagnostics);
+        Assert.Equal(["id", "note", "value"], table.Header);
+        Assert.Equal([1, 4, 9], table.HeaderColumns);
+        CsvRow row = Assert.Single(table.Rows);
+        Assert.Equal(["m1", "a, b", "2.5"], row.Fields);
+        Assert.Equal([1, 5, 11], row.Columns);
+        Assert.Equal(2, row.Line);
+        Assert.Equal(',', table.Delimiter);
+        Assert.False(table.DecimalComma);
+    }
+
+    [Fact]
+    public void Parse_UnescapesDoubledQuotes()
+    {
+        CsvTable table = Parse("id,note\nm1,\"the \"\"hot\"\" cell\"\n", [])!;
+
+        Assert.Equal("the \"hot\" cell", table.Rows[0].Fields[1]);
+    }
+
+    [Fact]
+    public void Parse_SkipsCommentsAndBlankLinesButCountsThem()
+    {
+        CsvTable table = Parse("# a comment\n\nid,value\n# another\nm1,1\n\n   \nm2,2\n", [])!;
+
+        Assert.Equal(3, table.HeaderLine);
+        Assert.Equal([5, 8], table.Rows.Select(row => row.Line));
+    }
+
+    [Theory]
+    [InlineData("id;value;unit\nm1;1,5;kJ/mol\n", ';', true)]
+    [InlineData("id\tvalue\tunit\nm1\t1.5\tkJ/mol\n", '\t', false)]
+    [InlineData("id,value,unit\nm1,1.5,kJ/mol\n", ',', false)]
+    public void Parse_DetectsTheDelimiterFromTheHeader(string content, char delimiter, bool decimalComma)
+    {
+        CsvTable table = Parse(content, [])!;
+
+        Assert.Equal(delimiter, table.Delimiter);
+        Assert.Equal(decimalComma, table.DecimalComma);
+        Assert.Equal(3, table.Rows[0].Fields.Count);
+    }
+
+    [Fact]
+    public void Parse_StripsTheByteOrderMark()
+    {
+        byte[] bytes = [0xEF, 0xBB, 0xBF, .. Encoding.UTF8.GetBytes("id,value\nm1,1\n")];
+
+        CsvTable table = CsvTable.Parse(bytes, "bom.csv", [])!;
+
+        Assert.Equal("id", table.Header[0]);
+        Assert.Equal(0, table.IndexOf("ID"));
+        Assert.Equal(1, table.HeaderColumns[0]);
+    }
+
+    [Fact]
+    public void IndexOf_IsCaseInsensitiveAndMinusOneWhenAbsent()
+    {
+        CsvTable table = Parse("Id,Value\n", [])!;
+
+        Assert.Equal(1, table.IndexOf("value"));
+        Assert.Equal(-1, table.IndexOf("unit"));
+        Assert.Empty(table.Rows);
+    }
+
+    [Theory]
+    [InlineData(new byte[] { 0x69, 0x64, 0x00, 0x0A }, "binary-file")]
+    [InlineData(new byte[] { 0x69, 0x64, 0x0A, 0xC3, 0x28, 0x0A }, "not-utf8")]
+    [InlineData(new byte[] { }, "empty-file")]
+    [InlineData(new byte[] { 0x23, 0x20, 0x78, 0x0A }, "empty-file")]
+    public void Parse_RefusesUnreadableContentWithOneDiagnostic(byte[] bytes, string code)
+    {
+        List<Diagnostic> diagnostics = [];
+
+        CsvTable? table = CsvTable.Parse(bytes, "bad.csv", diagnostics);
+
+        Assert.Null(table);
+        Diagnostic diagnostic = Assert.Single(diagnostics);
+        Assert.Equal(code, diagnostic.Code);
+        Assert.Equal(new SourceLocation("bad.csv"), diagnostic.Location);
+    }
+
+    [Fact]
+    public void Read_ReportsAMissingFileAsUnreadable()
+    {
+        List<Diagnostic> diagnostics = [];
+
+        CsvTable? table = CsvTable.Read(Path.Combine(Path.GetTempPath(), Guid.NewGuid().ToString("N") + ".csv"), "gone.csv", diagnostics);
+
+        Assert.Null(table);
+        Assert.Equal("unreadable-file", Assert.Single(diagnostics).Code);
+    }
+
+    [Fact]
+    public void CsvRow_LocationOfAMissingFieldFallsBackToTheLastField()
+    {
+        CsvTable table = Parse("a,b,c\nx,y\n", [])!;
+        CsvRow row = table.Rows[0];
+
+        Assert.Equal(new SourceLocation("t.csv", 2, 3, "c"), row.LocationOf(2, "c"));
+        Assert.Equal("", row.FieldOrEmpty(2));
+    }
+
+    private static CsvTable? Parse(string content, List<Diagnostic> diagnostics) =>
+        CsvTable.Parse(Encoding.UTF8.GetBytes(content), "t.csv", diagnostics);
+}
