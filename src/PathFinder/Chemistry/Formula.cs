@@ -16,7 +16,7 @@ public sealed class Formula : IEquatable<Formula>
     internal Formula(string text, IDictionary<string, Fraction> counts, int charge)
     {
         Text = text;
-        _counts = new SortedDictionary<string, Fraction>(HillComparer.Instance);
+        _counts = new SortedDictionary<string, Fraction>(counts.ContainsKey("C") && !counts["C"].IsZero ? HillComparer.WithCarbon : HillComparer.WithoutCarbon);
         foreach (KeyValuePair<string, Fraction> pair in counts)
         {
             if (!pair.Value.IsZero)
@@ -100,12 +100,12 @@ public sealed class Formula : IEquatable<Formula>
         return text.ToString();
     }
 
-    private sealed class HillComparer : IComparer<string>
+    private sealed class HillComparer(bool carbonFirst) : IComparer<string>
     {
-        public static readonly HillComparer Instance = new();
+        public static readonly HillComparer WithCarbon = new(carbonFirst: true);
+        public static readonly HillComparer WithoutCarbon = new(carbonFirst: false);
 
-        // Hill order is C first, H second, the rest alphabetical. Applying it unconditionally keeps the
-        // comparer a total order independent of content, which is all the canonical key needs.
+        // Hill order: with carbon, C first, H second, the rest alphabetical; without carbon, all alphabetical.
         public int Compare(string? x, string? y)
         {
             int rankX = Rank(x);
@@ -113,7 +113,7 @@ public sealed class Formula : IEquatable<Formula>
             return rankX != rankY ? rankX.CompareTo(rankY) : string.CompareOrdinal(x, y);
         }
 
-        private static int Rank(string? symbol) => symbol switch
+        private int Rank(string? symbol) => !carbonFirst ? 2 : symbol switch
         {
             "C" => 0,
             "H" => 1,

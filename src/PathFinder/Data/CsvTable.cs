@@ -105,7 +105,17 @@ public sealed class CsvTable
             text = text[1..];
         }
 
+        // CsvHelper only knows comments that start in the first column; blank indented ones too, keeping line numbers.
         string[] lines = text.Split('\n');
+        for (int i = 0; i < lines.Length; i++)
+        {
+            if (lines[i].TrimStart().StartsWith('#') && !lines[i].StartsWith('#'))
+            {
+                lines[i] = lines[i].EndsWith('\r') ? "\r" : "";
+            }
+        }
+
+        text = string.Join('\n', lines);
         int headerIndex = Array.FindIndex(lines, line => line.Trim().Length > 0 && !line.TrimStart().StartsWith('#'));
         if (headerIndex < 0)
         {

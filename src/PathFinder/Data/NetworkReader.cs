@@ -258,7 +258,7 @@ public static class NetworkReader
             Unit = unit,
             Temperature = temperature,
             Source = source,
-            Location = new SourceLocation(row.File, row.Line, 1),
+            Location = row.LocationOf(columns["equation"], "equation"),
             Notes = notes,
         };
     }

@@ -13,7 +13,10 @@ public sealed class FormulaTests
     [InlineData("SO4^2-", "O4S^2-")]
     [InlineData("NH4+", "H4N^+")]
     [InlineData("Cl-", "Cl^-")]
-    public void HillNotation_IsCarbonHydrogenThenAlphabetical(string text, string hill)
+    [InlineData("HCl", "ClH")]
+    [InlineData("Ca(OH)2", "CaH2O2")]
+    [InlineData("NaHCO3", "CHNaO3")]
+    public void HillNotation_IsCarbonHydrogenThenAlphabetical_OrAllAlphabeticalWithoutCarbon(string text, string hill)
     {
         Assert.Equal(hill, Formula.Parse(text).HillNotation);
     }

@@ -25,8 +25,9 @@ public sealed class DemoNetworkTests
     {
         ReactionNetwork network = NetworkReader.Read(RepoPaths.Demo("combustion-lab")).Network;
 
-        Assert.Equal("dimethyl ether(g)", network["A14"].Equation.Terms[0].Species.Name);
-        Assert.Equal("ethanol(l)", network["A10"].Equation.Terms[0].Species.Name);
+        Assert.Equal("DME(g)", network["A14"].Equation.Terms[0].Species.Name);
+        Assert.Equal("dimethyl ether(g)", network["A14"].Equation.Terms[0].Species.Description);
+        Assert.Equal("EtOH(l)", network["A10"].Equation.Terms[0].Species.Name);
         Assert.NotEqual(network["C04"].Equation.Terms.Single(term => term.Species.Label == "DME(g)").Species, network["B07"].Equation.Terms.Single(term => term.Species.Label == "EtOH(g)").Species);
     }
 

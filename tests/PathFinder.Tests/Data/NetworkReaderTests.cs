@@ -313,7 +313,7 @@ public sealed class NetworkReaderTests : IDisposable
         string file = _folder.Write("lab.csv", Header + "\n"
             + "w1,H2(g) + 1/2 O2(g) -> H2O(l),dH,-285.83,0.04,kJ/mol,400,a\n"
             + "w2,H2(g) + 1/2 O2(g) -> H2O(l),dH,-285.83,0.04,kJ/mol,,b\n");
-        string heatCapacity = _folder.Write("lab.heat-capacity.csv", "species,a\n");
+        string heatCapacity = _folder.Write("lab.heat-capacity.csv", "species,form,tmin,tmax,c1\nH2(g),constant,200,1000,28.8\nO2(g),constant,200,1000,29.4\nH2O(l),constant,273,500,75.3\n");
 
         NetworkReadResult result = NetworkReader.Read(file);
 
@@ -621,7 +621,8 @@ public sealed class NetworkReaderTests : IDisposable
 
         // Then the keys resolve to different species and the bare formula is ambiguous
         Assert.NotEqual(result.Network["m1"].Equation.Terms[0].Species, result.Network["m2"].Equation.Terms[0].Species);
-        Assert.Equal("dimethyl ether(g)", result.Network["m1"].Equation.Terms[0].Species.Name);
+        Assert.Equal("DME", result.Network["m1"].Equation.Terms[0].Species.Name);
+        Assert.Equal("dimethyl ether(g)", result.Network["m1"].Equation.Terms[0].Species.Description);
         Diagnostic error = Assert.Single(result.Errors);
         Assert.Equal(("ambiguous-species", 4, ColumnOf(row, "C2H6O")), (error.Code, error.Location.Line, error.Location.Column));
         Assert.Equal("'C2H6O(g)' matches several declared isomers: EtOH, DME", error.Message);
@@ -636,7 +637,8 @@ public sealed class NetworkReaderTests : IDisposable
 
         NetworkReadResult result = NetworkReader.Read(file);
 
-        Assert.Equal("ethanol", result.Network["m1"].Equation.Terms[0].Species.Name);
+        Assert.Equal("EtOH", result.Network["m1"].Equation.Terms[0].Species.Name);
+        Assert.Equal("ethanol", result.Network["m1"].Equation.Terms[0].Species.Description);
         Assert.Equal("EtOH", result.Network["m1"].Equation.Terms[0].Species.Label);
     }
 

@@ -18,10 +18,11 @@ public sealed class SpeciesCatalogTests : IDisposable
         List<Diagnostic> diagnostics = [];
         SpeciesCatalog catalog = ReadCatalog("# isomers\nkey,formula,state,name\nEtOH,C2H5OH,g,ethanol(g)\nDME,CH3OCH3,g,\n", diagnostics);
 
-        // Then both are declared, labelled, the name defaulting to the key
+        // Then both are declared and labelled, shown by their keys, with the declared names as descriptions
         Assert.Empty(diagnostics);
         Assert.Equal(["EtOH", "DME"], catalog.Declared.Select(species => species.Label));
-        Assert.Equal(["ethanol(g)", "DME"], catalog.Declared.Select(species => species.Name));
+        Assert.Equal(["EtOH", "DME"], catalog.Declared.Select(species => species.Name));
+        Assert.Equal(["ethanol(g)", ""], catalog.Declared.Select(species => species.Description));
         Assert.Equal("C2H6O(g)[DME]", catalog.Declared[1].Key);
     }
 
