@@ -38,7 +38,7 @@ public sealed class DataOnlyAnalysis : INetworkAnalysis
     public ReactionNetwork Network { get; }
 
     /// <inheritdoc/>
-    public string Description => "data only (no solver connected)";
+    public string Description => "data only, no solver connected";
 
     /// <inheritdoc/>
     public IReadOnlyDictionary<string, MeasurementAssessment> Measurements { get; }

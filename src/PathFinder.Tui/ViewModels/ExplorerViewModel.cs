@@ -107,9 +107,9 @@ public sealed class ExplorerViewModel
     {
         get
         {
-            string work = IsBusy ? $"computing: {string.Join(", ", _running)}…" : $"ready ({Analysis?.Description ?? "no analysis"})";
+            string work = IsBusy ? $"computing: {string.Join(", ", _running)}…" : Analysis is null ? "no analysis yet" : "ready";
             string excluded = $"{Curated.Excluded.Count} excluded";
-            string unsaved = HasUnsavedChanges ? "UNSAVED changes" : "saved";
+            string unsaved = HasUnsavedChanges ? "UNSAVED (Ctrl+S saves)" : "saved";
             string message = _message.Length > 0 ? $" | {_message}" : "";
             return $"{work} | {excluded}, {unsaved}{message}";
         }

@@ -18,12 +18,12 @@ public sealed record MeasurementRow(Measurement Measurement, MeasurementAssessme
     public IReadOnlyList<string> Cells =>
     [
         Measurement.Id,
-        Measurement.Equation.ToString(),
+        StatusText,
+        IsExcluded ? Display.NotAvailable : Display.Z(Assessment?.NormalizedResidual),
         Quantities.ThermoProperties.Code(Measurement.Property),
         Display.ValueWithUncertainty(Measurement.Value, Measurement.Uncertainty),
         Measurement.Source,
-        IsExcluded ? Display.NotAvailable : Display.Z(Assessment?.NormalizedResidual),
-        StatusText,
+        Measurement.Equation.ToString(),
     ];
 
     /// <summary>The word for a status (never a colour alone).</summary>

@@ -7,8 +7,14 @@ public sealed class MeasurementsViewModel
 
     internal MeasurementsViewModel(ExplorerViewModel owner) => _owner = owner;
 
+    /// <summary>The index of the normalized residual column (sorted by magnitude, missing values last).</summary>
+    public const int ResidualColumn = 2;
+
+    /// <summary>The index of the value column (sorted numerically).</summary>
+    public const int ValueColumn = 4;
+
     /// <summary>The column headers.</summary>
-    public static IReadOnlyList<string> Headers { get; } = ["id", "equation", "prop", "value ± u", "source", "r", "status"];
+    public static IReadOnlyList<string> Headers { get; } = ["id", "status", "r", "prop", "value ± u", "source", "equation"];
 
     /// <summary>Text that every shown row must contain (in any cell, case-insensitive); empty shows all.</summary>
     public string Filter { get; private set; } = "";
@@ -112,8 +118,8 @@ public sealed class MeasurementsViewModel
 
     private static Comparison<MeasurementRow> Comparer(int column) => column switch
     {
-        3 => (a, b) => a.Measurement.Value.CompareTo(b.Measurement.Value),
-        5 => (a, b) => Magnitude(a).CompareTo(Magnitude(b)),
+        ValueColumn => (a, b) => a.Measurement.Value.CompareTo(b.Measurement.Value),
+        ResidualColumn => (a, b) => Magnitude(a).CompareTo(Magnitude(b)),
         _ => (a, b) => string.Compare(a.Cells[column], b.Cells[column], StringComparison.Ordinal),
     };
 
