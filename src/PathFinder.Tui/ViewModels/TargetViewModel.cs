@@ -55,7 +55,7 @@ public sealed class TargetViewModel
 
             if (Report is null)
             {
-                return "type a reaction or a species and press Enter; F4 picks a species, Ctrl+P changes the property";
+                return "type a reaction or a species and press Enter, or Tab to the species list; Ctrl+P changes the property";
             }
 
             string unit = Report.Property.CanonicalUnit().Symbol;

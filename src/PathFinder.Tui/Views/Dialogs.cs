@@ -1,3 +1,4 @@
+using System.Collections.ObjectModel;
 using Terminal.Gui.App;
 using Terminal.Gui.ViewBase;
 using Terminal.Gui.Views;
@@ -25,9 +26,11 @@ internal static class Dialogs
     public static void ShowText(IApplication app, string title, IReadOnlyList<string> lines)
     {
         int height = Math.Min(lines.Count + 5, Math.Max(8, (app.Screen.Height) - 2));
-        int width = Math.Min(Math.Max(lines.Select(line => line.Length).DefaultIfEmpty(20).Max() + 4, 40), Math.Max(40, app.Screen.Width - 2));
+        int width = Math.Min(Math.Max(lines.Select(line => line.Length).DefaultIfEmpty(20).Max() + 8, 40), Math.Max(40, app.Screen.Width - 2));
         using var dialog = new Dialog { Title = title, Width = width, Height = height };
-        var text = new Label { Text = string.Join("\n", lines), X = 1, Y = 0, Width = Dim.Fill(1), Height = Dim.Fill(2) };
+        // A list, so long texts scroll with the arrow keys at 80×24.
+        var text = new ListView { X = 1, Y = 0, Width = Dim.Fill(1), Height = Dim.Fill(2) };
+        text.SetSource(new ObservableCollection<string>(lines));
         dialog.Add(text);
         dialog.AddButton(new Button { Text = "_Close" });
         app.Run(dialog);

@@ -65,7 +65,7 @@ internal sealed class ExplorerWindow : Window
         _vm = vm;
         Title = "PathFinder explorer";
         BorderStyle = Terminal.Gui.Drawing.LineStyle.Single;
-        var content = new View { X = 0, Y = 1, Width = Dim.Fill(), Height = Dim.Fill(2) };
+        var content = new View { X = 0, Y = 1, Width = Dim.Fill(), Height = Dim.Fill(2), CanFocus = true };
         Add(_screenBar, content, _status, _keys);
 
         _screens[Screen.Measurements] = BuildMeasurements();
@@ -81,6 +81,9 @@ internal sealed class ExplorerWindow : Window
 
         _vm.Changed += (_, _) => RefreshAll();
         _app.Keyboard.KeyDown += OnAppKeyDown;
+        // Focus can only move once the window is running; until then the first field would keep it.
+        Initialized += (_, _) => FocusCurrentScreen();
+        IsRunningChanged += (_, _) => FocusCurrentScreen();
         ShowScreen(Screen.Measurements);
         RefreshAll();
     }
@@ -231,7 +234,13 @@ internal sealed class ExplorerWindow : Window
         }
 
         _screenBar.Text = string.Join(" ", ScreenKeys.Select(s => s.Screen == screen ? $"[{s.Key} {s.Name}]" : $"{s.Key} {s.Name}"));
-        View focus = screen switch
+        FocusCurrentScreen();
+        SetNeedsDraw();
+    }
+
+    private void FocusCurrentScreen()
+    {
+        View focus = _current switch
         {
             Screen.Measurements => _measurements,
             Screen.Species => _species,
@@ -241,7 +250,6 @@ internal sealed class ExplorerWindow : Window
             _ => _curation,
         };
         focus.SetFocus();
-        SetNeedsDraw();
     }
 
     private void OnAppKeyDown(object? sender, Key key)
@@ -267,7 +275,7 @@ internal sealed class ExplorerWindow : Window
 
         if (key == Key.F1)
         {
-            Dialogs.ShowText(_app, "Keys", KeyHelp.All.Select(k => $"{k.Keys,-18} {k.Action}").ToArray());
+            Dialogs.ShowText(_app, "Keys", KeyHelp.All.Select(k => $"{k.Keys,-17} {k.Action}").ToArray());
         }
         else if (key == Key.Q.WithCtrl)
         {
