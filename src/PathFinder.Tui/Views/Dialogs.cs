@@ -25,7 +25,7 @@ internal static class Dialogs
     /// <summary>Shows lines of text until Enter or Esc.</summary>
     public static void ShowText(IApplication app, string title, IReadOnlyList<string> lines)
     {
-        int height = Math.Min(lines.Count + 5, Math.Max(8, (app.Screen.Height) - 2));
+        int height = Math.Min(lines.Count + 7, Math.Max(8, (app.Screen.Height) - 2));
         int width = Math.Min(Math.Max(lines.Select(line => line.Length).DefaultIfEmpty(20).Max() + 8, 40), Math.Max(40, app.Screen.Width - 2));
         using var dialog = new Dialog { Title = title, Width = width, Height = height };
         // A list, so long texts scroll with the arrow keys at 80×24.
