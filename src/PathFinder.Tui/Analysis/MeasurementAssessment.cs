@@ -1,0 +1,14 @@
+namespace PathFinder.Tui.Analysis;
+
+/// <summary>The analysis of one measurement.</summary>
+/// <param name="MeasurementId">The measurement.</param>
+/// <param name="Status">The conclusion.</param>
+/// <param name="NormalizedResidual">(measured − adjusted) / σ(residual), dimensionless; null when not computed.</param>
+/// <param name="LeaveOneOutValue">The value the rest of the network predicts for this measurement, canonical unit; null when not computed.</param>
+/// <param name="LeaveOneOutUncertainty">The standard uncertainty of that prediction; null when not computed.</param>
+public sealed record MeasurementAssessment(
+    string MeasurementId,
+    MeasurementStatus Status,
+    double? NormalizedResidual = null,
+    double? LeaveOneOutValue = null,
+    double? LeaveOneOutUncertainty = null);

@@ -1,0 +1,349 @@
+using PathFinder.Curation;
+using PathFinder.Data;
+using PathFinder.Diagnostics;
+using PathFinder.IO;
+using PathFinder.Tui.Analysis;
+
+namespace PathFinder.Tui.ViewModels;
+
+/// <summary>The explorer's state: the data, the curation (saved and current), the analysis, and background work.</summary>
+/// <remarks>
+/// All members are called on the UI thread. Heavy work (<see cref="NetworkAnalyzer"/>, route search) runs on the
+/// thread pool through <see cref="RunInBackground{T}"/>; its result comes back through the <see cref="IUiDispatcher"/>,
+/// and a result superseded by newer work is dropped. <see cref="Changed"/> tells the views to redraw.
+/// </remarks>
+public sealed class ExplorerViewModel
+{
+    private readonly NetworkAnalyzer _analyzer;
+    private readonly IUiDispatcher _dispatcher;
+    private readonly Func<DateOnly> _today;
+    private readonly HashSet<string> _running = new(StringComparer.Ordinal);
+    private readonly List<Task> _tasks = [];
+    private CancellationTokenSource? _analysisCancel;
+    private int _analysisVersion;
+    private string _message = "";
+
+    /// <summary>Loads the network and its curation file; the first analysis starts at once.</summary>
+    public ExplorerViewModel(string networkPath, NetworkAnalyzer analyzer, IUiDispatcher dispatcher, Func<DateOnly>? today = null)
+    {
+        ArgumentNullException.ThrowIfNull(networkPath);
+        _analyzer = analyzer ?? throw new ArgumentNullException(nameof(analyzer));
+        _dispatcher = dispatcher ?? throw new ArgumentNullException(nameof(dispatcher));
+        _today = today ?? (() => DateOnly.FromDateTime(DateTime.Now));
+        NetworkPath = networkPath;
+        Data = NetworkReader.Read(networkPath);
+        CurationPath = CurationFile.PathFor(networkPath);
+        CurationReadResult curation = CurationFile.Read(CurationPath);
+        CurationDiagnostics = curation.Diagnostics;
+        SavedCuration = curation.Set;
+        Curation = curation.Set;
+        Curated = Curation.Apply(Data.Network);
+        Measurements = new MeasurementsViewModel(this);
+        Species = new SpeciesViewModel(this);
+        Sources = new SourcesViewModel(this);
+        Target = new TargetViewModel(this);
+        Consistency = new ConsistencyViewModel(this);
+        CurationLog = new CurationLogViewModel(this);
+        Measurements.Refresh();
+        Recompute();
+    }
+
+    /// <summary>Raised on the UI thread whenever state shown on any screen changed.</summary>
+    public event EventHandler? Changed;
+
+    /// <summary>The network path given.</summary>
+    public string NetworkPath { get; }
+
+    /// <summary>The curation file beside the data.</summary>
+    public string CurationPath { get; }
+
+    /// <summary>The data as read, with every measurement (excluded ones too) and the data diagnostics.</summary>
+    public NetworkReadResult Data { get; }
+
+    /// <summary>Problems found in the curation file when it was read.</summary>
+    public IReadOnlyList<Diagnostic> CurationDiagnostics { get; }
+
+    /// <summary>The decisions as last saved (or read).</summary>
+    public CurationSet SavedCuration { get; private set; }
+
+    /// <summary>The decisions now, saved or not.</summary>
+    public CurationSet Curation { get; private set; }
+
+    /// <summary>The network after the current decisions.</summary>
+    public CurationResult Curated { get; private set; }
+
+    /// <summary>Whether there are decisions not written to <see cref="CurationPath"/>.</summary>
+    public bool HasUnsavedChanges => Curation.Decisions.Count != SavedCuration.Decisions.Count;
+
+    /// <summary>The latest finished analysis of <see cref="Curated"/>, or null before the first one.</summary>
+    public INetworkAnalysis? Analysis { get; private set; }
+
+    /// <summary>Whether the analysis shown is older than the current curation (a newer one is computing).</summary>
+    public bool IsAnalysisStale { get; private set; }
+
+    /// <summary>Whether any background work is running.</summary>
+    public bool IsBusy => _running.Count > 0;
+
+    /// <summary>The measurements screen.</summary>
+    public MeasurementsViewModel Measurements { get; }
+
+    /// <summary>The species screen.</summary>
+    public SpeciesViewModel Species { get; }
+
+    /// <summary>The sources screen.</summary>
+    public SourcesViewModel Sources { get; }
+
+    /// <summary>The target screen.</summary>
+    public TargetViewModel Target { get; }
+
+    /// <summary>The consistency screen.</summary>
+    public ConsistencyViewModel Consistency { get; }
+
+    /// <summary>The curation screen.</summary>
+    public CurationLogViewModel CurationLog { get; }
+
+    /// <summary>The status line: what is computing, the analysis used, exclusions, unsaved changes, and the last message.</summary>
+    public string StatusText
+    {
+        get
+        {
+            string work = IsBusy ? $"computing: {string.Join(", ", _running)}…" : Analysis is null ? "no analysis yet" : "ready";
+            string excluded = $"{Curated.Excluded.Count} excluded";
+            string unsaved = HasUnsavedChanges ? "UNSAVED (Ctrl+S saves)" : "saved";
+            string message = _message.Length > 0 ? $" | {_message}" : "";
+            return $"{work} | {excluded}, {unsaved}{message}";
+        }
+    }
+
+    /// <summary>A title line: network name and counts.</summary>
+    public string Title =>
+        $"{Data.Network.Name}: {Data.Network.Measurements.Count} measurements, {Data.Network.Species.Count} species, {Data.Network.Sources.Count} sources" +
+        (Data.HasErrors ? $", {Data.Errors.Count()} data error(s)" : "");
+
+    /// <summary>Excludes measurement <paramref name="id"/> with a reason dated today; the analysis re-runs.</summary>
+    /// <returns>An empty string on success, else why nothing was done.</returns>
+    public string Exclude(string id, string reason)
+    {
+        if (!Data.Network.TryGetMeasurement(id, out _))
+        {
+            return Fail($"no measurement '{id}'");
+        }
+
+        if (string.IsNullOrWhiteSpace(reason))
+        {
+            return Fail("an exclusion needs a reason");
+        }
+
+        if (Curation.IsExcluded(id))
+        {
+            return Fail($"{id} is already excluded");
+        }
+
+        ApplyCuration(Curation.Exclude(id, reason, _today()), $"excluded {id}");
+        return "";
+    }
+
+    /// <summary>Takes an excluded measurement back in (the reason may be empty); the analysis re-runs.</summary>
+    /// <returns>An empty string on success, else why nothing was done.</returns>
+    public string Include(string id, string reason)
+    {
+        if (!Curation.IsExcluded(id))
+        {
+            return Fail($"{id} is not excluded");
+        }
+
+        ApplyCuration(Curation.Include(id, reason ?? "", _today()), $"re-included {id}");
+        return "";
+    }
+
+    /// <summary>Writes the decisions to <see cref="CurationPath"/> (atomically).</summary>
+    /// <returns>A one-line message saying what happened.</returns>
+    public string Save()
+    {
+        try
+        {
+            CurationFile.Write(CurationPath, Curation);
+            SavedCuration = Curation;
+            return Say($"saved {Curation.Decisions.Count} decision(s) to {CurationPath}");
+        }
+        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
+        {
+            return Say($"could not save: {exception.Message}");
+        }
+    }
+
+    /// <summary>Exports <paramref name="table"/> (or, for a .svg path, a diagram through the analysis) to <paramref name="path"/>.</summary>
+    /// <returns>A one-line message saying what was written, or why not.</returns>
+    public string Export(string path, TableSnapshot table, string? focusMeasurementId = null)
+    {
+        ArgumentNullException.ThrowIfNull(table);
+        if (string.IsNullOrWhiteSpace(path))
+        {
+            return Say("give a file path ending in .csv, .json, .md or .svg");
+        }
+
+        path = path.Trim();
+        ExportFormat? format = TableExporter.FormatFromPath(path);
+        if (format is null)
+        {
+            return Say($"unknown export type '{Path.GetExtension(path)}': use .csv, .json, .md or .svg");
+        }
+
+        try
+        {
+            if (format == ExportFormat.Svg)
+            {
+                return Analysis is null ? Say("the analysis is not ready yet") : Say(Analysis.ExportDiagram(path, focusMeasurementId));
+            }
+
+            AtomicFile.WriteAllText(path, TableExporter.Format(table, format.Value));
+            return Say($"wrote {table.Rows.Count} row(s) of {table.Title} to {path}");
+        }
+        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
+        {
+            return Say($"could not export: {exception.Message}");
+        }
+    }
+
+    /// <summary>Starts a new analysis of the current curation; an older one still running is cancelled and its result dropped.</summary>
+    public void Recompute()
+    {
+        _analysisCancel?.Cancel();
+        var cancel = new CancellationTokenSource();
+        _analysisCancel = cancel;
+        int version = ++_analysisVersion;
+        IsAnalysisStale = true;
+        ReactionNetwork network = Curated.Network;
+        IReadOnlyList<Diagnostic> diagnostics = Data.Diagnostics;
+        RunInBackground(
+            "analysis",
+            _ => _analyzer(network, diagnostics, cancel.Token),
+            analysis =>
+            {
+                if (version != _analysisVersion)
+                {
+                    return;
+                }
+
+                Analysis = analysis;
+                IsAnalysisStale = false;
+                Measurements.Refresh();
+            },
+            null,
+            cancel.Token);
+    }
+
+    /// <summary>A task that completes when all background work started so far has finished and been applied.</summary>
+    public async Task WhenIdleAsync()
+    {
+        while (true)
+        {
+            Task[] pending;
+            lock (_tasks)
+            {
+                pending = _tasks.Where(task => !task.IsCompleted).ToArray();
+            }
+
+            if (pending.Length == 0)
+            {
+                return;
+            }
+
+            await Task.WhenAll(pending).ConfigureAwait(false);
+        }
+    }
+
+    /// <summary>Runs <paramref name="work"/> on the thread pool and applies its result on the UI thread.</summary>
+    /// <param name="what">Shown in the status line while running.</param>
+    /// <param name="work">The heavy part; must not touch views or this view model.</param>
+    /// <param name="apply">Applies the result (UI thread).</param>
+    /// <param name="failed">Called on the UI thread when the work throws or is cancelled (optional).</param>
+    /// <param name="cancellationToken">Cancels the work.</param>
+    public void RunInBackground<T>(string what, Func<CancellationToken, T> work, Action<T> apply, Action? failed = null, CancellationToken cancellationToken = default)
+    {
+        ArgumentNullException.ThrowIfNull(work);
+        ArgumentNullException.ThrowIfNull(apply);
+        string label = what;
+        for (int i = 2; _running.Contains(label); i++)
+        {
+            label = $"{what} ({i})";
+        }
+
+        _running.Add(label);
+        RaiseChanged();
+        var completion = new TaskCompletionSource(TaskCreationOptions.RunContinuationsAsynchronously);
+        lock (_tasks)
+        {
+            _tasks.RemoveAll(task => task.IsCompleted);
+            _tasks.Add(completion.Task);
+        }
+
+        Task.Run(() => work(cancellationToken), cancellationToken).ContinueWith(
+            task => _dispatcher.Post(() =>
+            {
+                try
+                {
+                    _running.Remove(label);
+                    if (task.IsCompletedSuccessfully)
+                    {
+                        apply(task.Result);
+                    }
+                    else
+                    {
+                        failed?.Invoke();
+                        if (task.IsFaulted)
+                        {
+                            _message = $"{what} failed: {task.Exception?.GetBaseException().Message}";
+                        }
+                    }
+
+                    RaiseChanged();
+                }
+                finally
+                {
+                    completion.TrySetResult();
+                }
+            }),
+            CancellationToken.None,
+            TaskContinuationOptions.None,
+            TaskScheduler.Default);
+    }
+
+    /// <summary>The rows of every measurement (excluded ones too), in data order.</summary>
+    internal IEnumerable<MeasurementRow> AllMeasurementRows()
+    {
+        IReadOnlyDictionary<string, MeasurementAssessment>? assessments = Analysis?.Measurements;
+        foreach (Measurement measurement in Data.Network.Measurements)
+        {
+            CurationDecision? decision = Curation.CurrentDecision(measurement.Id);
+            string? reason = decision is { Action: CurationAction.Exclude } ? decision.Reason : null;
+            MeasurementAssessment? assessment = reason is null && assessments is not null && assessments.TryGetValue(measurement.Id, out MeasurementAssessment? found) ? found : null;
+            yield return new MeasurementRow(measurement, assessment, reason);
+        }
+    }
+
+    private void ApplyCuration(CurationSet curation, string message)
+    {
+        Curation = curation;
+        Curated = curation.Apply(Data.Network);
+        _message = message;
+        Measurements.Refresh();
+        Recompute();
+    }
+
+    private string Fail(string message)
+    {
+        _message = message;
+        RaiseChanged();
+        return message;
+    }
+
+    private string Say(string message)
+    {
+        _message = message;
+        RaiseChanged();
+        return message;
+    }
+
+    private void RaiseChanged() => Changed?.Invoke(this, EventArgs.Empty);
+}

@@ -1,0 +1,42 @@
+using System.Collections.ObjectModel;
+using Terminal.Gui.App;
+using Terminal.Gui.ViewBase;
+using Terminal.Gui.Views;
+
+namespace PathFinder.Tui.Views;
+
+/// <summary>Small modal dialogs: a text prompt, a text viewer, and a yes/no question. Esc cancels each.</summary>
+internal static class Dialogs
+{
+    /// <summary>Asks for one line of text; null when cancelled.</summary>
+    public static string? AskText(IApplication app, string title, string prompt, string initial)
+    {
+        using var dialog = new Dialog { Title = title, Width = Dim.Percent(90), Height = 9 };
+        var label = new Label { Text = prompt, X = 1, Y = 0, Width = Dim.Fill(1), Height = 2 };
+        var field = new TextField { Text = initial, X = 1, Y = 2, Width = Dim.Fill(1) };
+        dialog.Add(label, field);
+        dialog.AddButton(new Button { Text = "_Cancel" });
+        dialog.AddButton(new Button { Text = "_OK" });
+        field.SetFocus();
+        app.Run(dialog);
+        return dialog.Result == 1 && !dialog.Canceled ? field.Text : null;
+    }
+
+    /// <summary>Shows lines of text until Enter or Esc.</summary>
+    public static void ShowText(IApplication app, string title, IReadOnlyList<string> lines)
+    {
+        int height = Math.Min(lines.Count + 7, Math.Max(8, (app.Screen.Height) - 2));
+        int width = Math.Min(Math.Max(lines.Select(line => line.Length).DefaultIfEmpty(20).Max() + 8, 40), Math.Max(40, app.Screen.Width - 2));
+        using var dialog = new Dialog { Title = title, Width = width, Height = height };
+        // A list, so long texts scroll with the arrow keys at 80×24.
+        var text = new ListView { X = 1, Y = 0, Width = Dim.Fill(1), Height = Dim.Fill(2) };
+        text.SetSource(new ObservableCollection<string>(lines));
+        dialog.Add(text);
+        dialog.AddButton(new Button { Text = "_Close" });
+        app.Run(dialog);
+    }
+
+    /// <summary>Asks a question with buttons; returns the button index, or null when cancelled.</summary>
+    public static int? Ask(IApplication app, string title, string message, params string[] buttons) =>
+        MessageBox.Query(app, title, message, buttons);
+}

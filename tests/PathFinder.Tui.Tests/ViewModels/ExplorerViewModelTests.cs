@@ -1,0 +1,198 @@
+using PathFinder.Curation;
+using PathFinder.Tui.Analysis;
+using PathFinder.Tui.ViewModels;
+
+namespace PathFinder.Tui.Tests.ViewModels;
+
+public sealed class ExplorerViewModelTests : IDisposable
+{
+    private static readonly DateOnly Day = new(2024, 5, 17);
+    private readonly DemoNetwork _demo = new();
+
+    public void Dispose() => _demo.Dispose();
+
+    private ExplorerViewModel Open(NetworkAnalyzer? analyzer = null) =>
+        new(_demo.Folder, analyzer ?? DataOnlyAnalysis.Analyzer, new InlineDispatcher(), () => Day);
+
+    [Fact]
+    public async Task Opening_the_demo_shows_every_measurement_and_an_analysis_without_invented_numbers()
+    {
+        ExplorerViewModel vm = Open();
+        await vm.WhenIdleAsync();
+
+        Assert.False(vm.IsBusy);
+        Assert.NotNull(vm.Analysis);
+        Assert.Equal(vm.Data.Network.Measurements.Count, vm.Measurements.Rows.Count);
+        Assert.All(vm.Measurements.Rows, row => Assert.Equal(Display.NotAvailable, row.Cells[MeasurementsViewModel.ResidualColumn]));
+        Assert.Contains("ready", vm.StatusText, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task Excluding_marks_the_row_removes_it_from_the_analysis_and_tracks_unsaved_changes()
+    {
+        ExplorerViewModel vm = Open();
+        await vm.WhenIdleAsync();
+
+        string problem = vm.Exclude("C03", "value slipped in the notebook");
+        await vm.WhenIdleAsync();
+
+        Assert.Equal("", problem);
+        MeasurementRow row = vm.Measurements.Rows.Single(r => r.Measurement.Id == "C03");
+        Assert.Equal("excluded", row.StatusText);
+        Assert.False(vm.Analysis!.Network.TryGetMeasurement("C03", out _));
+        Assert.True(vm.HasUnsavedChanges);
+        Assert.Contains("UNSAVED", vm.StatusText, StringComparison.Ordinal);
+        Assert.Equal("UNSAVED", vm.CurationLog.Cells(vm.CurationLog.Rows[0])[4]);
+    }
+
+    [Fact]
+    public async Task Saved_decisions_are_honoured_when_the_network_is_opened_again()
+    {
+        ExplorerViewModel first = Open();
+        first.Exclude("B05", "phase-change value from an old calibration");
+        first.Save();
+        await first.WhenIdleAsync();
+
+        ExplorerViewModel second = Open();
+        await second.WhenIdleAsync();
+
+        Assert.False(first.HasUnsavedChanges);
+        Assert.True(File.Exists(_demo.CurationPath));
+        Assert.False(second.HasUnsavedChanges);
+        Assert.Equal(["B05"], second.Curated.Excluded.Select(e => e.Measurement.Id));
+        Assert.Equal("phase-change value from an old calibration", second.Curated.Excluded[0].Decision.Reason);
+        Assert.False(second.Analysis!.Network.TryGetMeasurement("B05", out _));
+    }
+
+    [Fact]
+    public async Task Re_including_takes_the_measurement_back_and_keeps_the_history()
+    {
+        ExplorerViewModel vm = Open();
+        vm.Exclude("A07", "doubtful");
+        vm.Include("A07", "checked the raw data");
+        await vm.WhenIdleAsync();
+
+        Assert.NotEqual("excluded", vm.Measurements.Rows.Single(r => r.Measurement.Id == "A07").StatusText);
+        Assert.Equal([CurationAction.Exclude, CurationAction.Include], vm.Curation.Decisions.Select(d => d.Action));
+        Assert.True(vm.Analysis!.Network.TryGetMeasurement("A07", out _));
+    }
+
+    [Fact]
+    public void Exclude_without_a_reason_or_of_an_unknown_id_changes_nothing_and_says_why()
+    {
+        ExplorerViewModel vm = Open();
+
+        Assert.Contains("reason", vm.Exclude("A01", "  "), StringComparison.Ordinal);
+        Assert.Contains("no measurement", vm.Exclude("Z99", "x"), StringComparison.Ordinal);
+        Assert.Empty(vm.Curation.Decisions);
+    }
+
+    [Fact]
+    public void Filter_keeps_rows_containing_the_text_in_any_cell()
+    {
+        ExplorerViewModel vm = Open();
+
+        vm.Measurements.SetFilter("group-c");
+
+        Assert.NotEmpty(vm.Measurements.Rows);
+        Assert.All(vm.Measurements.Rows, row => Assert.Equal("group-c", row.Measurement.Source));
+        Assert.Equal(vm.Data.Network.Measurements.Count(m => m.Source == "group-c"), vm.Measurements.Rows.Count);
+    }
+
+    [Fact]
+    public void Sorting_by_value_orders_rows_numerically_and_again_reverses()
+    {
+        ExplorerViewModel vm = Open();
+
+        vm.Measurements.SortBy(MeasurementsViewModel.ValueColumn);
+        double[] ascending = vm.Measurements.Rows.Select(r => r.Measurement.Value).ToArray();
+        vm.Measurements.SortBy(MeasurementsViewModel.ValueColumn);
+        double[] descending = vm.Measurements.Rows.Select(r => r.Measurement.Value).ToArray();
+
+        Assert.Equal(ascending.Order().ToArray(), ascending);
+        Assert.Equal(ascending.Reverse().ToArray(), descending);
+        Assert.Contains("descending", vm.Measurements.SortText, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task Target_explains_invalid_input_inline_with_its_position()
+    {
+        ExplorerViewModel vm = Open();
+        await vm.WhenIdleAsync();
+
+        bool started = vm.Target.Submit("CH4(g) + 2 O2(g) -> CO2(g) + H2O(l)");
+
+        Assert.False(started);
+        Assert.Contains("not balanced", vm.Target.Error, StringComparison.Ordinal);
+
+        vm.Target.Submit("CH4(g) -> C(cr,graphite) + 2 Xe(g)");
+        Assert.NotEqual("", vm.Target.Error);
+    }
+
+    [Fact]
+    public async Task Target_route_is_a_direct_measurement_scaled_by_its_exact_factor()
+    {
+        // Given the demo's A08, CO(g) + 1/2 O2(g) -> CO2(g), measured dH = -283.0 ± 0.2 kJ/mol (demo data)
+        ExplorerViewModel vm = Open();
+        await vm.WhenIdleAsync();
+        Measurement a08 = vm.Data.Network["A08"];
+
+        // When the doubled reaction is asked for
+        Assert.True(vm.Target.Submit("2 CO(g) + O2(g) -> 2 CO2(g)"));
+        await vm.WhenIdleAsync();
+
+        // Then the route is A08 × 2, its value twice the measured one, and the network estimate is not invented
+        RouteReport route = Assert.Single(vm.Target.Routes);
+        RouteStep step = Assert.Single(route.Steps);
+        Assert.Equal(("A08", "2"), (step.MeasurementId, step.Factor));
+        Assert.Equal(2.0 * a08.Value, route.Value!.Value, 9);
+        Assert.Equal(2.0 * a08.Uncertainty, route.Uncertainty!.Value, 9);
+        Assert.Null(vm.Target.Report!.NetworkValue);
+        Assert.Contains(vm.Target.Explain(0), line => line.Contains("2 × A08", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Export_writes_the_table_in_the_format_of_the_extension()
+    {
+        ExplorerViewModel vm = Open();
+        string path = Path.Combine(_demo.Folder, "table.md");
+
+        string message = vm.Export(path, vm.Measurements.Snapshot());
+
+        Assert.StartsWith("wrote", message, StringComparison.Ordinal);
+        string[] lines = File.ReadAllLines(path);
+        Assert.Equal("## Measurements", lines[0]);
+        Assert.Equal(2 + 2 + vm.Measurements.Rows.Count, lines.Length);
+        Assert.Contains("unknown export type", vm.Export(Path.Combine(_demo.Folder, "x.txt"), vm.Measurements.Snapshot()), StringComparison.Ordinal);
+        Assert.Contains("not available", vm.Export(Path.Combine(_demo.Folder, "x.svg"), vm.Measurements.Snapshot()), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task A_newer_analysis_supersedes_an_older_one_that_finishes_later()
+    {
+        // Given an analyzer whose first run blocks until released
+        using var release = new ManualResetEventSlim(false);
+        int calls = 0;
+        NetworkAnalyzer slowFirst = (network, diagnostics, token) =>
+        {
+            if (Interlocked.Increment(ref calls) == 1)
+            {
+                release.Wait(TimeSpan.FromSeconds(10));
+            }
+
+            return DataOnlyAnalysis.Create(network, diagnostics);
+        };
+        ExplorerViewModel vm = Open(slowFirst);
+        Assert.True(vm.IsBusy);
+        Assert.Contains("computing", vm.StatusText, StringComparison.Ordinal);
+
+        // When a curation change starts a second analysis and then the first one finishes
+        vm.Exclude("A01", "test");
+        release.Set();
+        await vm.WhenIdleAsync();
+
+        // Then the analysis shown is the newer one (without A01)
+        Assert.False(vm.Analysis!.Network.TryGetMeasurement("A01", out _));
+        Assert.False(vm.IsAnalysisStale);
+    }
+}

@@ -1,0 +1,176 @@
+using System.Diagnostics;
+using PathFinder.Tui.Analysis;
+using PathFinder.Tui.ViewModels;
+using PathFinder.Tui.Views;
+using Terminal.Gui.App;
+using Terminal.Gui.Drivers;
+using Terminal.Gui.Input;
+using Terminal.Gui.Testing;
+using Terminal.Gui.Time;
+using Terminal.Gui.Views;
+
+namespace PathFinder.Tui.Tests.Views;
+
+/// <summary>Drives the real explorer (ansi driver, buffer output) with injected keys, as a user would.</summary>
+public sealed class ExplorerAppHeadlessTests : IDisposable
+{
+    private readonly DemoNetwork _demo = new();
+
+    public void Dispose() => _demo.Dispose();
+
+    [Fact]
+    public void Excluding_with_a_reason_shows_excluded_and_the_saved_decision_is_honoured_after_reopening()
+    {
+        // Given the explorer on the demo network at 100×30
+        var screens = new Dictionary<string, string>();
+        using (IApplication app = Application.Create(new VirtualTimeProvider()))
+        {
+            app.Init(DriverRegistry.Names.ANSI);
+            app.Driver!.SetScreenSize(100, 30);
+            ExplorerViewModel vm = ExplorerApp.CreateViewModel(app, _demo.Folder, DataOnlyAnalysis.Analyzer);
+            using ExplorerWindow window = ExplorerApp.CreateWindow(app, vm);
+
+            // When the user moves to C03, excludes it with a reason, saves and quits
+            var steps = new Queue<(string Name, Func<bool> Ready, Action Act)>();
+            steps.Enqueue(("start", () => !vm.IsBusy && ScreenText(app).Contains("ready", StringComparison.Ordinal), () =>
+            {
+                for (int i = 0; i < vm.Measurements.IndexOf("C03"); i++)
+                {
+                    app.InjectKey(Key.CursorDown);
+                }
+            }));
+            steps.Enqueue(("selected", () => ScreenText(app).Contains("C03  dH = -47.60", StringComparison.Ordinal), () => app.InjectKey(Key.E.WithCtrl)));
+            steps.Enqueue(("dialog", () => app.TopRunnableView is Dialog, () =>
+            {
+                screens["dialog"] = ScreenText(app);
+                foreach (char c in "slipped digit")
+                {
+                    app.InjectKey(new Key(c));
+                }
+
+                app.InjectKey(Key.Enter);
+            }));
+            steps.Enqueue(("excluded", () => ReferenceEquals(app.TopRunnableView, window) && !vm.IsBusy && vm.HasUnsavedChanges, () =>
+            {
+                screens["excluded"] = ScreenText(app);
+                app.InjectKey(Key.S.WithCtrl);
+            }));
+            steps.Enqueue(("saved", () => !vm.HasUnsavedChanges, () =>
+            {
+                screens["saved"] = ScreenText(app);
+                app.InjectKey(Key.F7);
+            }));
+            steps.Enqueue(("curation", () => window.CurrentScreen == Screen.Curation, () =>
+            {
+                app.LayoutAndDraw();
+                screens["curation"] = ScreenText(app);
+                app.InjectKey(Key.Q.WithCtrl);
+            }));
+            RunScript(app, window, steps);
+
+            Assert.Empty(steps);
+        }
+
+        // Then the dialog asked for a reason, the row said "excluded", the status said UNSAVED, then saved
+        Assert.Contains("Exclude C03", screens["dialog"], StringComparison.Ordinal);
+        string c03 = Line(screens["excluded"], "│C03");
+        Assert.Contains("excluded", c03, StringComparison.Ordinal);
+        Assert.Contains("EXCLUDED: slipped digit", screens["excluded"], StringComparison.Ordinal);
+        Assert.Contains("UNSAVED", screens["excluded"], StringComparison.Ordinal);
+        Assert.Contains("saved 1 decision(s)", screens["saved"], StringComparison.Ordinal);
+        Assert.Contains("slipped digit", Line(screens["curation"], "│exclude│C03"), StringComparison.Ordinal);
+        Assert.Contains("C03,exclude,slipped digit,", File.ReadAllText(_demo.CurationPath), StringComparison.Ordinal);
+
+        // And when the network is opened again, C03 is still shown excluded
+        using (IApplication app = Application.Create(new VirtualTimeProvider()))
+        {
+            app.Init(DriverRegistry.Names.ANSI);
+            app.Driver!.SetScreenSize(100, 30);
+            ExplorerViewModel vm = ExplorerApp.CreateViewModel(app, _demo.Folder, DataOnlyAnalysis.Analyzer);
+            using ExplorerWindow window = ExplorerApp.CreateWindow(app, vm);
+            SessionToken? token = app.Begin(window);
+            app.InjectKey(Key.F.WithCtrl);
+            foreach (char c in "C03")
+            {
+                app.InjectKey(new Key(c));
+            }
+
+            app.LayoutAndDraw();
+            string reopened = ScreenText(app);
+            app.End(token!);
+
+            Assert.Contains("excluded", Line(reopened, "│C03"), StringComparison.Ordinal);
+            Assert.Contains("1 excluded, saved", reopened, StringComparison.Ordinal);
+        }
+    }
+
+    [Fact]
+    public void Every_screen_key_shows_its_screen_and_F1_lists_the_keys_at_80_by_24()
+    {
+        var screens = new Dictionary<string, string>();
+        using IApplication app = Application.Create(new VirtualTimeProvider());
+        app.Init(DriverRegistry.Names.ANSI);
+        app.Driver!.SetScreenSize(80, 24);
+        ExplorerViewModel vm = ExplorerApp.CreateViewModel(app, _demo.Folder, DataOnlyAnalysis.Analyzer);
+        using ExplorerWindow window = ExplorerApp.CreateWindow(app, vm);
+        var steps = new Queue<(string Name, Func<bool> Ready, Action Act)>();
+        foreach ((Key key, string name) in new[] { (Key.F3, "Species"), (Key.F4, "Sources"), (Key.F5, "Target"), (Key.F6, "Consistency"), (Key.F7, "Curation"), (Key.F2, "Measurements") })
+        {
+            steps.Enqueue((name, () => !vm.IsBusy, () => app.InjectKey(key)));
+            steps.Enqueue((name + " shown", () => ScreenText(app).Contains($"[{key} {name}]", StringComparison.Ordinal), () => screens[name] = ScreenText(app)));
+        }
+
+        steps.Enqueue(("help", () => true, () => app.InjectKey(Key.F1)));
+        steps.Enqueue(("help shown", () => app.TopRunnableView is Dialog, () =>
+        {
+            screens["help"] = ScreenText(app);
+            app.InjectKey(Key.Esc);
+        }));
+        steps.Enqueue(("closed", () => ReferenceEquals(app.TopRunnableView, window), () => app.InjectKey(Key.Q.WithCtrl)));
+        RunScript(app, window, steps);
+
+        Assert.Empty(steps);
+        Assert.Contains("best estimate", screens["Species"], StringComparison.Ordinal);
+        Assert.Contains("group-c", screens["Sources"], StringComparison.Ordinal);
+        Assert.Contains("Target (dH):", screens["Target"], StringComparison.Ordinal);
+        Assert.Contains("suspect(s)", screens["Consistency"], StringComparison.Ordinal);
+        Assert.Contains("curation.csv", screens["Curation"], StringComparison.Ordinal);
+        Assert.Contains("Ctrl+E", screens["help"], StringComparison.Ordinal);
+    }
+
+    private static void RunScript(IApplication app, ExplorerWindow window, Queue<(string Name, Func<bool> Ready, Action Act)> steps)
+    {
+        var clock = Stopwatch.StartNew();
+        EventHandler<EventArgs<IApplication?>>? handler = null;
+        handler = (_, _) =>
+        {
+            if (clock.Elapsed > TimeSpan.FromSeconds(30))
+            {
+                // Safety stop: the assertions then name the step that never became ready.
+                app.RequestStop(app.TopRunnable);
+                return;
+            }
+
+            if (steps.Count > 0 && steps.Peek().Ready())
+            {
+                steps.Dequeue().Act();
+            }
+        };
+        app.Iteration += handler;
+        try
+        {
+            app.Run(window);
+        }
+        finally
+        {
+            app.Iteration -= handler;
+        }
+
+        Assert.True(steps.Count == 0, steps.Count == 0 ? "" : $"step '{steps.Peek().Name}' never became ready; screen:\n{ScreenText(app)}");
+    }
+
+    private static string ScreenText(IApplication app) => app.Driver!.ToString() ?? "";
+
+    private static string Line(string screen, string start) =>
+        screen.Split('\n').FirstOrDefault(line => line.Contains(start, StringComparison.Ordinal)) ?? "";
+}
