@@ -19,6 +19,8 @@ public static class CliApp
             new RoutesCommand().Build(context),
             new CheckCommand().Build(context),
             new SolveCommand().Build(context),
+            new DrawCommand().Build(context),
+            new ExploreCommand().Build(context),
         };
 
         ParseResult parse = root.Parse(args);

@@ -15,7 +15,7 @@ public static class ExplorerApp
     public const int CannotStart = 2;
 
     /// <summary>Runs the explorer on <paramref name="networkPath"/> with the data-only analysis; returns the exit code.</summary>
-    public static int Run(string networkPath) => Run(networkPath, DataOnlyAnalysis.Analyzer, Console.Error);
+    public static int Run(string networkPath) => Run(networkPath, SolvedAnalysis.Analyzer, Console.Error);
 
     /// <summary>Runs the explorer with <paramref name="analyzer"/>; messages that prevent starting go to <paramref name="error"/>.</summary>
     /// <returns>0 after a normal quit; 2 when there is no terminal or the network cannot be found.</returns>

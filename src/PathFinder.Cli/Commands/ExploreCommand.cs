@@ -16,7 +16,7 @@ public sealed class ExploreCommand
         {
             _network,
         };
-        command.SetAction(parse => ExplorerApp.Run(parse.GetValue(_network)!, PathFinder.Tui.Analysis.DataOnlyAnalysis.Analyzer, context.Error));
+        command.SetAction(parse => ExplorerApp.Run(parse.GetValue(_network)!, PathFinder.Tui.Analysis.SolvedAnalysis.Analyzer, context.Error));
         return command;
     }
 }

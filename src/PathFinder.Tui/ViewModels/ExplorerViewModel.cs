@@ -214,10 +214,10 @@ public sealed class ExplorerViewModel
         int version = ++_analysisVersion;
         IsAnalysisStale = true;
         ReactionNetwork network = Curated.Network;
-        IReadOnlyList<Diagnostic> diagnostics = Data.Diagnostics;
+        NetworkReadResult data = Data;
         RunInBackground(
             "analysis",
-            _ => _analyzer(network, diagnostics, cancel.Token),
+            _ => _analyzer(network, data, cancel.Token),
             analysis =>
             {
                 if (version != _analysisVersion)

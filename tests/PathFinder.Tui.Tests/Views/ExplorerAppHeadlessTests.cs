@@ -27,7 +27,7 @@ public sealed class ExplorerAppHeadlessTests : IDisposable
         {
             app.Init(DriverRegistry.Names.ANSI);
             app.Driver!.SetScreenSize(100, 30);
-            ExplorerViewModel vm = ExplorerApp.CreateViewModel(app, _demo.Folder, DataOnlyAnalysis.Analyzer);
+            ExplorerViewModel vm = ExplorerApp.CreateViewModel(app, _demo.Folder, SolvedAnalysis.Analyzer);
             using ExplorerWindow window = ExplorerApp.CreateWindow(app, vm);
 
             // When the user moves to C03, excludes it with a reason, saves and quits
@@ -86,7 +86,7 @@ public sealed class ExplorerAppHeadlessTests : IDisposable
         {
             app.Init(DriverRegistry.Names.ANSI);
             app.Driver!.SetScreenSize(100, 30);
-            ExplorerViewModel vm = ExplorerApp.CreateViewModel(app, _demo.Folder, DataOnlyAnalysis.Analyzer);
+            ExplorerViewModel vm = ExplorerApp.CreateViewModel(app, _demo.Folder, SolvedAnalysis.Analyzer);
             using ExplorerWindow window = ExplorerApp.CreateWindow(app, vm);
             SessionToken? token = app.Begin(window);
             app.InjectKey(Key.F.WithCtrl);
@@ -111,7 +111,7 @@ public sealed class ExplorerAppHeadlessTests : IDisposable
         using IApplication app = Application.Create(new VirtualTimeProvider());
         app.Init(DriverRegistry.Names.ANSI);
         app.Driver!.SetScreenSize(80, 24);
-        ExplorerViewModel vm = ExplorerApp.CreateViewModel(app, _demo.Folder, DataOnlyAnalysis.Analyzer);
+        ExplorerViewModel vm = ExplorerApp.CreateViewModel(app, _demo.Folder, SolvedAnalysis.Analyzer);
         using ExplorerWindow window = ExplorerApp.CreateWindow(app, vm);
         var steps = new Queue<(string Name, Func<bool> Ready, Action Act)>();
         foreach ((Key key, string name) in new[] { (Key.F3, "Species"), (Key.F4, "Sources"), (Key.F5, "Target"), (Key.F6, "Consistency"), (Key.F7, "Curation"), (Key.F2, "Measurements") })

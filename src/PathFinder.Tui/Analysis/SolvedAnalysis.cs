@@ -1,0 +1,177 @@
+using System.Globalization;
+using PathFinder.Analysis;
+using PathFinder.Chemistry;
+using PathFinder.Data;
+using PathFinder.Diagnostics;
+using PathFinder.Diagrams;
+using PathFinder.Figures;
+using PathFinder.Graph;
+using PathFinder.Quantities;
+using PathFinder.Routes;
+
+namespace PathFinder.Tui.Analysis;
+
+/// <summary>The explorer's analysis: the consistency check, the network solution and route search of the core library.</summary>
+/// <remarks>Built once per curation state, off the UI thread; afterwards only read (route searches build nothing shared).</remarks>
+public sealed class SolvedAnalysis : INetworkAnalysis
+{
+    private readonly NetworkReadResult _data;
+    private readonly ConsistencyReport _report;
+
+    private SolvedAnalysis(ReactionNetwork network, NetworkReadResult data, ConsistencyReport report)
+    {
+        Network = network;
+        _data = data;
+        _report = report;
+        var measurements = new Dictionary<string, MeasurementAssessment>(StringComparer.Ordinal);
+        var species = new List<SpeciesEstimate>();
+        var suspects = new List<SuspectReport>();
+        var cycles = new List<CycleReport>();
+        foreach (FamilyConsistency family in report.Families)
+        {
+            foreach (MeasurementCheck check in family.Measurements)
+            {
+                MeasurementStatus status = check.IsSuspect ? MeasurementStatus.Suspect
+                    : check.IsCheckable ? MeasurementStatus.Consistent
+                    : MeasurementStatus.Unchecked;
+                measurements[check.Measurement.Id] = new MeasurementAssessment(check.Measurement.Id, status, check.NormalizedResidual, check.Predicted, check.PredictedUncertainty);
+            }
+
+            foreach (PathFinder.Analysis.SuspectReport suspect in family.Suspects)
+            {
+                string reason = string.Create(CultureInfo.InvariantCulture, $"z = {suspect.NormalizedResidual:+0.0;-0.0} when first picked; its uncertainty had to grow ×{suspect.Inflation:0.#} to agree with the rest");
+                suspects.Add(new SuspectReport(suspect.Measurement.Id, suspect.NormalizedResidual, suspect.Predicted, suspect.PredictedUncertainty, reason));
+            }
+
+            cycles.AddRange(family.Cycles.Select(cycle => new CycleReport(
+                cycle.Members.Select(member => member.Measurement.Id).ToArray(),
+                cycle.Members.Select(member => RationalText.Format(member.Factor)).ToArray(),
+                cycle.Residual,
+                cycle.Uncertainty,
+                double.IsFinite(cycle.Z) ? cycle.Z : null,
+                cycle.Flagged)));
+
+            SolveReport solved = NetworkSolver.Report(family.Model, family.Adjusted, adjusted: true, family.Adjustments, []);
+            ThermoProperty property = family.Family == PropertyFamily.Entropy ? ThermoProperty.AbsoluteEntropy : family.Family.ResultProperty();
+            species.AddRange(solved.Species.Select(estimate => new SpeciesEstimate(
+                estimate.Species,
+                property,
+                estimate.IsDetermined ? estimate.Value : null,
+                estimate.IsDetermined ? estimate.Uncertainty : null,
+                estimate.Measurements)));
+        }
+
+        Measurements = measurements;
+        Species = species;
+        Suspects = suspects.OrderByDescending(suspect => Math.Abs(suspect.NormalizedResidual ?? 0)).ToArray();
+        Cycles = cycles.OrderByDescending(cycle => cycle.Flagged).ThenByDescending(cycle => Math.Abs(cycle.Z ?? 0)).ToArray();
+        Sources = network.Sources.Select(source => SourceOf(network, data.Diagnostics, report, source)).ToArray();
+        int flagged = cycles.Count(cycle => cycle.Flagged);
+        Description = string.Create(CultureInfo.InvariantCulture, $"{network.Measurements.Count} measurements solved; {suspects.Count} suspect(s); {flagged} cycle(s) fail to close");
+    }
+
+    /// <inheritdoc/>
+    public ReactionNetwork Network { get; }
+
+    /// <inheritdoc/>
+    public string Description { get; }
+
+    /// <inheritdoc/>
+    public IReadOnlyDictionary<string, MeasurementAssessment> Measurements { get; }
+
+    /// <inheritdoc/>
+    public IReadOnlyList<CycleReport> Cycles { get; }
+
+    /// <inheritdoc/>
+    public IReadOnlyList<SuspectReport> Suspects { get; }
+
+    /// <inheritdoc/>
+    public IReadOnlyList<SpeciesEstimate> Species { get; }
+
+    /// <inheritdoc/>
+    public IReadOnlyList<SourceReport> Sources { get; }
+
+    /// <inheritdoc/>
+    public bool CanExportDiagram => true;
+
+    /// <summary>The analyzer delegate that builds this analysis.</summary>
+    public static NetworkAnalyzer Analyzer { get; } = Create;
+
+    /// <summary>Analyses <paramref name="network"/> (already curated).</summary>
+    public static SolvedAnalysis Create(ReactionNetwork network, NetworkReadResult data, CancellationToken cancellationToken)
+    {
+        ArgumentNullException.ThrowIfNull(network);
+        ArgumentNullException.ThrowIfNull(data);
+        ConsistencyReport report = ConsistencyCheck.Run(network, data.HeatCapacities, new ConsistencyOptions { CancellationToken = cancellationToken });
+        cancellationToken.ThrowIfCancellationRequested();
+        return new SolvedAnalysis(network, data, report);
+    }
+
+    /// <inheritdoc/>
+    public TargetReport FindRoutes(ChemicalEquation target, ThermoProperty property, int maxRoutes, CancellationToken cancellationToken)
+    {
+        ArgumentNullException.ThrowIfNull(target);
+        PropertyFamily family = PropertyFamilies.FamilyOf(property);
+        FamilyConsistency? solved = _report.Families.FirstOrDefault(item => item.Family == family);
+        if (solved is null)
+        {
+            return new TargetReport(target, property, [], null, null, $"the network has no {family.ResultProperty().Code()} data");
+        }
+
+        PathFinder.Analysis.RouteReport report = RouteAnalysis.Find(
+            solved.Model,
+            target,
+            new RouteSearchOptions { MaxRoutes = maxRoutes, TimeBudget = TimeSpan.FromSeconds(10), CancellationToken = cancellationToken },
+            solved.Adjusted);
+        var routes = report.Routes.Select(route => new RouteReport(
+            route.Steps.Select(step => new RouteStep(step.Measurement.Id, RationalText.Format(step.Factor), step.Equation.ToString(), step.Value)).ToArray(),
+            route.Value,
+            route.Uncertainty)).ToArray();
+        string message = report.UnreachableSpecies.Count > 0
+            ? $"no {family.ResultProperty().Code()} measurement contains {string.Join(", ", report.UnreachableSpecies.Select(species => species.Name))}"
+            : string.Create(CultureInfo.InvariantCulture, $"{report.RoutesFound} route(s); {(report.Complete ? $"complete up to {report.MaxSteps} steps" : "incomplete: " + report.IncompleteReason)}; {report.IndependentRoutes} independent");
+        return new TargetReport(target, property, routes, report.NetworkEstimate?.Value, report.NetworkEstimate?.StandardUncertainty, message);
+    }
+
+    /// <inheritdoc/>
+    public string ExportDiagram(string path, string? focusMeasurementId)
+    {
+        ArgumentNullException.ThrowIfNull(path);
+        var marks = new FigureMarks(
+            Suspects.Select(suspect => suspect.MeasurementId).ToHashSet(StringComparer.Ordinal),
+            new HashSet<string>(StringComparer.Ordinal));
+        NetworkGraph graph = NetworkGraph.Build(Network);
+        Species[] centres;
+        PropertyFamily family = PropertyFamily.Enthalpy;
+        if (focusMeasurementId is not null && Network.TryGetMeasurement(focusMeasurementId, out Measurement measurement))
+        {
+            centres = measurement.Equation.Terms.Select(term => term.Species).Where(species => !ReferenceStates.HasZeroFormationProperties(species)).ToArray();
+            family = PropertyFamilies.FamilyOf(measurement.Property);
+        }
+        else
+        {
+            centres = Network.Species.Where(species => !ReferenceStates.HasZeroFormationProperties(species)).ToArray();
+        }
+
+        NetworkDiagram diagram = FigureBuilder.Neighbourhood(graph, centres, 1, family, marks);
+        NetworkDiagramResult result = NetworkDiagramRenderer.Render(diagram);
+        if (!result.IsRendered)
+        {
+            return result.RefusalMessage ?? "the diagram could not be drawn";
+        }
+
+        result.Diagram!.Save(path);
+        return $"wrote {path}";
+    }
+
+    private static SourceReport SourceOf(ReactionNetwork network, IReadOnlyList<Diagnostic> diagnostics, ConsistencyReport report, string source)
+    {
+        Measurement[] rows = network.Measurements.Where(measurement => measurement.Source == source).ToArray();
+        var lines = rows.Select(measurement => (measurement.Location.File, measurement.Location.Line)).ToHashSet();
+        Diagnostic[] own = diagnostics.Where(diagnostic => lines.Contains((diagnostic.Location.File, diagnostic.Location.Line))).ToArray();
+        MeasurementCheck[] checks = report.Families.SelectMany(family => family.Measurements).Where(check => check.Measurement.Source == source).ToArray();
+        double[] z = checks.Where(check => check.NormalizedResidual.HasValue).Select(check => check.NormalizedResidual!.Value).ToArray();
+        double? rms = z.Length > 0 ? Math.Sqrt(z.Average(value => value * value)) : null;
+        return new SourceReport(source, rows.Length, checks.Count(check => check.IsSuspect), rms, own);
+    }
+}
