@@ -29,9 +29,11 @@ internal sealed class IncrementalFit
     private readonly int[] _rowStart;
     private readonly int[] _local;
     private readonly double[] _coefficients;
-    private readonly int[] _positionInComponent;
     private readonly LowRank[] _lowRank;
     private readonly int _blockSize;
+    private double[] _gBuffer = [];
+    private double[] _tBuffer = [];
+    private double[] _zBuffer = [];
 
     public IncrementalFit(SolverEngine engine, int blockSize)
     {
@@ -64,16 +66,9 @@ internal sealed class IncrementalFit
             }
         }
 
-        _positionInComponent = new int[m];
         _lowRank = new LowRank[engine.Components.Count];
         for (int c = 0; c < _lowRank.Length; c++)
         {
-            int[] observations = engine.Components[c].Observations;
-            for (int p = 0; p < observations.Length; p++)
-            {
-                _positionInComponent[observations[p]] = p;
-            }
-
             Refresh(c);
         }
     }
@@ -106,13 +101,27 @@ internal sealed class IncrementalFit
     }
 
     /// <summary>Prepares g = G·aᵢ and tₗ = aₗᵀg for every observation l of i's component.</summary>
+    /// <remarks>The probe shares buffers with the next one: it is valid until the next call.</remarks>
     public Probe Prepare(int i)
     {
         int c = _engine.ComponentOfObservation(i);
         ComponentFactorization component = _engine.Components[c];
         LowRank lowRank = LowRankOf(c);
         int k = component.Size;
-        var g = new double[k];
+        int[] observations = component.Observations;
+        if (_gBuffer.Length < k)
+        {
+            _gBuffer = new double[k];
+        }
+
+        if (_tBuffer.Length < observations.Length)
+        {
+            _tBuffer = new double[observations.Length];
+            _zBuffer = new double[observations.Length];
+        }
+
+        Span<double> g = _gBuffer.AsSpan(0, k);
+        g.Clear();
         int start = _rowStart[i];
         int end = _rowStart[i + 1];
         for (int p = start; p < end; p++)
@@ -136,21 +145,26 @@ internal sealed class IncrementalFit
             }
         }
 
-        int[] observations = component.Observations;
-        var t = new double[observations.Length];
+        // t = A·g over the component's rows; spans in locals let the JIT keep everything in registers.
+        Span<double> t = _tBuffer.AsSpan(0, observations.Length);
+        ReadOnlySpan<int> rowStart = _rowStart;
+        ReadOnlySpan<int> local = _local;
+        ReadOnlySpan<double> coefficients = _coefficients;
+        ReadOnlySpan<double> gv = g;
         for (int p = 0; p < observations.Length; p++)
         {
             int l = observations[p];
+            int e1 = rowStart[l + 1];
             double sum = 0.0;
-            for (int e = _rowStart[l]; e < _rowStart[l + 1]; e++)
+            for (int e = rowStart[l]; e < e1; e++)
             {
-                sum += _coefficients[e] * g[_local[e]];
+                sum += coefficients[e] * gv[local[e]];
             }
 
             t[p] = sum;
         }
 
-        return new Probe(i, c, g, t);
+        return new Probe(i, c, _gBuffer, _tBuffer);
     }
 
     /// <summary>The largest |z| and its observation if observation i (prepared in probe) had uncertainty u.</summary>
@@ -176,6 +190,7 @@ internal sealed class IncrementalFit
                 p++;
                 double u = l == i ? uncertainty : _engine.Uncertainty(l);
                 z = ZOf(_values[l] - _fitted[l] - (factor * e * tl), u, _quadratic[l] - (factor * tl * tl));
+                _zBuffer[p - 1] = z;
                 if (l == i)
                 {
                     own = z;
@@ -198,14 +213,18 @@ internal sealed class IncrementalFit
     }
 
     /// <summary>Commits the change of observation i's uncertainty to u (one rank-one change).</summary>
-    public void Commit(Probe probe, double uncertainty, int refactorizationInterval)
+    /// <param name="probe">The prepared observation.</param>
+    /// <param name="uncertainty">Its new uncertainty.</param>
+    /// <param name="evaluated">True when the last <see cref="Evaluate"/> call was for this probe and this uncertainty (its z values are reused).</param>
+    /// <param name="refactorizationInterval">Changes after which the component is factored afresh.</param>
+    public void Commit(Probe probe, double uncertainty, bool evaluated, int refactorizationInterval)
     {
         int i = probe.Observation;
         int c = probe.Component;
         double factor = ChangeFactor(i, uncertainty);
         double e = _values[i] - _fitted[i];
         ComponentFactorization component = _engine.Components[c];
-        ManagedKernel.Axpy(factor * e, probe.G, component.Solution);
+        ManagedKernel.Axpy(factor * e, probe.G.AsSpan(0, component.Size), component.Solution);
         _engine.StoreUncertainty(i, uncertainty);
         int[] observations = component.Observations;
         for (int p = 0; p < observations.Length; p++)
@@ -214,7 +233,7 @@ internal sealed class IncrementalFit
             double tl = probe.T[p];
             _fitted[l] += factor * e * tl;
             _quadratic[l] -= factor * tl * tl;
-            _z[l] = ZOf(_values[l] - _fitted[l], _engine.Uncertainty(l), _quadratic[l]);
+            _z[l] = evaluated ? _zBuffer[p] : ZOf(_values[l] - _fitted[l], _engine.Uncertainty(l), _quadratic[l]);
         }
 
         LowRank lowRank = LowRankOf(c);
@@ -228,7 +247,7 @@ internal sealed class IncrementalFit
             return;
         }
 
-        probe.G.CopyTo(lowRank.Vectors, lowRank.Count * component.Size);
+        probe.G.AsSpan(0, component.Size).CopyTo(lowRank.Vectors.AsSpan(lowRank.Count * component.Size));
         lowRank.Coefficients[lowRank.Count] = factor;
         lowRank.Count++;
         if (lowRank.Count == lowRank.Capacity)
@@ -251,6 +270,7 @@ internal sealed class IncrementalFit
 
     private void Fold(int c)
     {
+
         ComponentFactorization component = _engine.Components[c];
         LowRank lowRank = _lowRank[c];
         _engine.Kernel.SubtractLowRank(component.Covariance, component.Size, lowRank.Vectors, lowRank.Coefficients, lowRank.Count);
@@ -286,7 +306,7 @@ internal sealed class IncrementalFit
 
     private LowRank LowRankOf(int c) => _lowRank[c] ??= new LowRank(_engine.Components[c].Size, Math.Max(1, Math.Min(_blockSize, _engine.Components[c].Size)));
 
-    /// <summary>g = G·aᵢ for a prepared observation and tₗ = aₗᵀg for the observations of its component (in component order).</summary>
+    /// <summary>g = G·aᵢ (first k entries) for a prepared observation and tₗ = aₗᵀg for the observations of its component (in component order).</summary>
     internal sealed record Probe(int Observation, int Component, double[] G, double[] T);
 
     private sealed class LowRank(int size, int capacity)

@@ -31,9 +31,9 @@ public sealed record OutlierOptions
     /// </remarks>
     public int RefactorizationInterval { get; init; } = 100_000;
 
-    /// <summary>Rank-one changes kept as a low-rank list before they are folded into the dense covariance; default 64.</summary>
+    /// <summary>Rank-one changes kept as a low-rank list before they are folded into the dense covariance; default 128.</summary>
     /// <remarks>Larger blocks make each fold more efficient but each step dearer (O(k·block) per step); must be ≥ 1.</remarks>
-    public int LowRankBlockSize { get; init; } = 64;
+    public int LowRankBlockSize { get; init; } = 128;
 
     /// <summary>Options for the underlying solves.</summary>
     public SolverOptions Solver { get; init; } = SolverOptions.Default;

@@ -106,8 +106,10 @@ public static class OutlierProcedure
             IncrementalFit.Probe probe = fit.Prepare(worst);
             double z = fit.NormalizedResidual(worst);
             double uncertainty = fit.Uncertainty(worst);
+            bool evaluated = false;
             while (true)
             {
+                evaluated = false;
                 double enlarged = uncertainty * options.InflationFactor;
                 adjustments.Add(new UncertaintyAdjustment(adjustments.Count + 1, worst, z, uncertainty, enlarged));
                 uncertainty = enlarged;
@@ -117,6 +119,7 @@ public static class OutlierProcedure
                 }
 
                 (int next, double own) = fit.Evaluate(probe, uncertainty);
+                evaluated = true;
                 if (next != worst || !(Math.Abs(own) > options.Threshold))
                 {
                     break;
@@ -125,7 +128,7 @@ public static class OutlierProcedure
                 z = own;
             }
 
-            fit.Commit(probe, uncertainty, options.RefactorizationInterval);
+            fit.Commit(probe, uncertainty, evaluated, options.RefactorizationInterval);
         }
 
         fit.FoldAll();

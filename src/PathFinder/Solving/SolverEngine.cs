@@ -238,7 +238,7 @@ internal sealed class SolverEngine
     {
         LinearAlgebraBackend.Managed => ManagedKernel.Instance,
         LinearAlgebraBackend.Native when OpenBlasKernel.IsAvailable => OpenBlasKernel.Instance,
-        LinearAlgebraBackend.Native => throw new DllNotFoundException("libopenblas.so.0 (with dpstrf_, dpotri_ and dgemm_) could not be loaded; install libopenblas0 or use the managed backend."),
+        LinearAlgebraBackend.Native => throw new DllNotFoundException("libopenblas.so.0 (with dpstrf_, dpotri_, dgemm_ and dsyrk_) could not be loaded; install libopenblas0 or use the managed backend."),
         _ => OpenBlasKernel.IsAvailable ? OpenBlasKernel.Instance : ManagedKernel.Instance,
     };
 }
