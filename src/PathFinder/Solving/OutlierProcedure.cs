@@ -24,7 +24,7 @@ namespace PathFinder.Solving;
 /// P(all |zᵢ| ≤ c) ≥ Πᵢ P(|zᵢ| ≤ c) holds for jointly normal zᵢ with any correlation (Z. Šidák, J. Amer. Statist.
 /// Assoc. 62 (1967) 626–633; from memory), and the residuals of a linear model are jointly normal, so with no gross
 /// errors the chance of even one suspect in the whole network is at most α. Examples: m = 3 000 gives
-/// z_crit ≈ 4.30, m = 30 000 gives ≈ 4.92. Adjustments of measurements never picked above z_crit are mild:
+/// z_crit ≈ 4.30, m = 30 000 gives ≈ 4.78. Adjustments of measurements never picked above z_crit are mild:
 /// they stay in <see cref="OutlierResult.Adjustments"/> but are not suspects. Because an observation is judged
 /// at the moment it is the worst (after larger discrepancies were already down-weighted), neighbours of a
 /// gross error are not blamed for it.
