@@ -169,6 +169,23 @@ internal sealed class ManagedKernel : IDenseKernel
         }
     }
 
+    public void SubtractLowRank(double[] g, int n, double[] vectors, double[] coefficients, int rank)
+    {
+        // Column by column: G[:, c] −= Σⱼ cⱼ·vⱼ[c]·vⱼ; the rank vectors stay in cache while the columns stream past.
+        for (int c = 0; c < n; c++)
+        {
+            Span<double> column = g.AsSpan(c * n, n);
+            for (int j = 0; j < rank; j++)
+            {
+                double alpha = -coefficients[j] * vectors[c + (j * n)];
+                if (alpha != 0.0)
+                {
+                    Axpy(alpha, vectors.AsSpan(j * n, n), column);
+                }
+            }
+        }
+    }
+
     internal static double Dot(ReadOnlySpan<double> x, ReadOnlySpan<double> y)
     {
         int length = x.Length;

@@ -5,7 +5,7 @@ namespace PathFinder.Solving;
 /// <summary>Dense kernel calling LAPACK in Debian's <c>libopenblas.so.0</c> directly (Fortran symbols, column-major).</summary>
 /// <remarks>
 /// MathNet's OpenBLAS provider needs a wrapper library that is not shipped here, so the Fortran entry points
-/// (<c>dpstrf_</c>, <c>dpotri_</c>) are called through P/Invoke. Fortran passes every argument by reference and
+/// (<c>dpstrf_</c>, <c>dpotri_</c>, <c>dgemm_</c>, <c>dsyrk_</c>) are called through P/Invoke. Fortran passes every argument by reference and
 /// appends a hidden length for each character argument, which is passed explicitly. Integers are 32-bit (LP64 build).
 /// </remarks>
 internal sealed class OpenBlasKernel : IDenseKernel
@@ -74,6 +74,85 @@ internal sealed class OpenBlasKernel : IDenseKernel
         }
     }
 
+    public void SubtractLowRank(double[] g, int n, double[] vectors, double[] coefficients, int rank)
+    {
+        if (rank == 0 || n == 0)
+        {
+            return;
+        }
+
+        // With all cⱼ of one sign (always so when uncertainties only grow), G − Σcⱼvⱼvⱼᵀ = G ∓ UUᵀ with
+        // U = V·diag(√|c|): one dsyrk_ on the upper triangle (n²·rank flops) and a mirror. Otherwise one dgemm_.
+        bool allNegative = true;
+        bool allPositive = true;
+        for (int j = 0; j < rank; j++)
+        {
+            allNegative &= coefficients[j] <= 0.0;
+            allPositive &= coefficients[j] >= 0.0;
+        }
+
+        var scaled = new double[n * rank];
+        int order = n;
+        int inner = rank;
+        int ld = n;
+        double beta = 1.0;
+        if (allNegative || allPositive)
+        {
+            for (int j = 0; j < rank; j++)
+            {
+                double root = Math.Sqrt(Math.Abs(coefficients[j]));
+                Scale(root, vectors.AsSpan(j * n, n), scaled.AsSpan(j * n, n));
+            }
+
+            byte uplo = (byte)'U';
+            byte trans = (byte)'N';
+            double alpha = allNegative ? 1.0 : -1.0;
+            Dsyrk(ref uplo, ref trans, ref order, ref inner, ref alpha, scaled, ref ld, ref beta, g, ref ld, 1, 1);
+            MirrorUpper(g, n);
+            return;
+        }
+
+        for (int j = 0; j < rank; j++)
+        {
+            Scale(coefficients[j], vectors.AsSpan(j * n, n), scaled.AsSpan(j * n, n));
+        }
+
+        byte transA = (byte)'N';
+        byte transB = (byte)'T';
+        int columns = n;
+        double minusOne = -1.0;
+        Dgemm(ref transA, ref transB, ref order, ref columns, ref inner, ref minusOne, scaled, ref ld, vectors, ref ld, ref beta, g, ref ld, 1, 1);
+    }
+
+    /// <summary>Copies the upper triangle onto the lower one, in cache-sized tiles.</summary>
+    private static void MirrorUpper(double[] g, int n)
+    {
+        const int Tile = 64;
+        for (int c0 = 0; c0 < n; c0 += Tile)
+        {
+            int c1 = Math.Min(n, c0 + Tile);
+            for (int r0 = c0; r0 < n; r0 += Tile)
+            {
+                int r1 = Math.Min(n, r0 + Tile);
+                for (int c = c0; c < c1; c++)
+                {
+                    for (int r = Math.Max(r0, c + 1); r < r1; r++)
+                    {
+                        g[r + (c * n)] = g[c + (r * n)];
+                    }
+                }
+            }
+        }
+    }
+
+    private static void Scale(double factor, ReadOnlySpan<double> source, Span<double> target)
+    {
+        for (int t = 0; t < source.Length; t++)
+        {
+            target[t] = factor * source[t];
+        }
+    }
+
     private static bool Probe()
     {
         if (!NativeLibrary.TryLoad(LibraryName, out IntPtr handle))
@@ -81,12 +160,24 @@ internal sealed class OpenBlasKernel : IDenseKernel
             return false;
         }
 
-        return NativeLibrary.TryGetExport(handle, "dpstrf_", out _) && NativeLibrary.TryGetExport(handle, "dpotri_", out _);
+        return NativeLibrary.TryGetExport(handle, "dpstrf_", out _) && NativeLibrary.TryGetExport(handle, "dpotri_", out _)
+            && NativeLibrary.TryGetExport(handle, "dgemm_", out _)
+            && NativeLibrary.TryGetExport(handle, "dsyrk_", out _);
     }
 
     [DllImport(LibraryName, EntryPoint = "dpstrf_", ExactSpelling = true)]
     private static extern void Dpstrf(
         ref byte uplo, ref int n, double[] a, ref int lda, int[] piv, ref int rank, ref double tol, double[] work, ref int info, nuint uploLength);
+
+    [DllImport(LibraryName, EntryPoint = "dgemm_", ExactSpelling = true)]
+    private static extern void Dgemm(
+        ref byte transA, ref byte transB, ref int m, ref int n, ref int k, ref double alpha, double[] a, ref int lda, double[] b, ref int ldb,
+        ref double beta, double[] c, ref int ldc, nuint transALength, nuint transBLength);
+
+    [DllImport(LibraryName, EntryPoint = "dsyrk_", ExactSpelling = true)]
+    private static extern void Dsyrk(
+        ref byte uplo, ref byte trans, ref int n, ref int k, ref double alpha, double[] a, ref int lda, ref double beta, double[] c, ref int ldc,
+        nuint uploLength, nuint transLength);
 
     [DllImport(LibraryName, EntryPoint = "dpotri_", ExactSpelling = true)]
     private static extern void Dpotri(ref byte uplo, ref int n, double[] a, ref int lda, ref int info, nuint uploLength);

@@ -128,6 +128,15 @@ internal sealed class SolverEngine
         component.ApplyWeightChange(local, coefficients, _rows[i].Value, newWeight - oldWeight);
     }
 
+    /// <summary>The dense kernel in use.</summary>
+    internal IDenseKernel Kernel => _kernel;
+
+    /// <summary>Records a new uncertainty for observation i without touching any factorization (the caller updates G and x̂).</summary>
+    internal void StoreUncertainty(int i, double uncertainty) => _uncertainties[i] = uncertainty;
+
+    /// <summary>Factors component c afresh from the rows and the current uncertainties.</summary>
+    internal void Refactor(int c) => _components[c].Factor(_rows, _uncertainties, _localOf, _kernel, Options);
+
     /// <summary>The fitted value aᵢᵀx̂ and the quadratic form aᵢᵀGaᵢ of observation i.</summary>
     public (double Fitted, double Quadratic) FitObservation(int i)
     {
@@ -229,7 +238,7 @@ internal sealed class SolverEngine
     {
         LinearAlgebraBackend.Managed => ManagedKernel.Instance,
         LinearAlgebraBackend.Native when OpenBlasKernel.IsAvailable => OpenBlasKernel.Instance,
-        LinearAlgebraBackend.Native => throw new DllNotFoundException("libopenblas.so.0 (with dpstrf_ and dpotri_) could not be loaded; install libopenblas0 or use the managed backend."),
+        LinearAlgebraBackend.Native => throw new DllNotFoundException("libopenblas.so.0 (with dpstrf_, dpotri_, dgemm_ and dsyrk_) could not be loaded; install libopenblas0 or use the managed backend."),
         _ => OpenBlasKernel.IsAvailable ? OpenBlasKernel.Instance : ManagedKernel.Instance,
     };
 }

@@ -1,0 +1,324 @@
+namespace PathFinder.Solving;
+
+/// <summary>Every observation's fitted value, aᵢᵀGaᵢ and normalized residual, kept current through weight changes.</summary>
+/// <remarks>
+/// <para>
+/// A weight change w → w + Δw of observation i changes the g-inverse by a rank-one term (Sherman–Morrison):
+/// G' = G − c·ggᵀ with g = Ga and c = Δw/(1 + Δw·aᵀGa), and x̂' = x̂ + c·(vᵢ − aᵢᵀx̂)·g. Instead of updating the
+/// dense G (k² work and 8k² bytes of memory traffic per change), the changes are kept as a low-rank list,
+/// G = G_f − Σⱼ cⱼgⱼgⱼᵀ, with G_f the last dense ("folded") matrix. Then
+/// g = G_f·a − Σⱼ cⱼ(gⱼᵀa)·gⱼ costs O(k·(nnz + r)), and every other observation l follows from tₗ = aₗᵀg alone:
+/// ŷₗ' = ŷₗ + c·eᵢ·tₗ and qₗ' = qₗ − c·tₗ² (O(nnz) each, O(m·nnz) in all). When r reaches the block size the list
+/// is folded into G_f with one BLAS-3 product (<see cref="IDenseKernel.SubtractLowRank"/>), which costs the same
+/// 2k² flops per change as a dense update but runs at matrix–matrix speed.
+/// </para>
+/// <para>
+/// Because tₗ does not depend on Δw, the effect of enlarging observation i once, twice, … (factor F each time) on
+/// every normalized residual can be evaluated for several Δw from one g, and a run of consecutive adjustments of
+/// the same observation is committed as one rank-one change. The result equals doing them one by one.
+/// </para>
+/// </remarks>
+internal sealed class IncrementalFit
+{
+    private readonly SolverEngine _engine;
+    private readonly double _checkability;
+    private readonly double[] _values;
+    private readonly double[] _fitted;
+    private readonly double[] _quadratic;
+    private readonly double[] _z;
+    private readonly int[] _rowStart;
+    private readonly int[] _local;
+    private readonly double[] _coefficients;
+    private readonly LowRank[] _lowRank;
+    private readonly int _blockSize;
+    private double[] _gBuffer = [];
+    private double[] _tBuffer = [];
+    private double[] _zBuffer = [];
+
+    public IncrementalFit(SolverEngine engine, int blockSize)
+    {
+        _engine = engine;
+        _checkability = engine.Options.CheckabilityTolerance;
+        _blockSize = blockSize;
+        int m = engine.ObservationCount;
+        _values = new double[m];
+        _fitted = new double[m];
+        _quadratic = new double[m];
+        _z = new double[m];
+        _rowStart = new int[m + 1];
+        for (int i = 0; i < m; i++)
+        {
+            _rowStart[i + 1] = _rowStart[i] + engine.Row(i).Row.Count;
+        }
+
+        _local = new int[_rowStart[m]];
+        _coefficients = new double[_rowStart[m]];
+        for (int i = 0; i < m; i++)
+        {
+            Observation observation = engine.Row(i);
+            _values[i] = observation.Value;
+            ReadOnlySpan<int> idx = observation.Row.Indices;
+            ReadOnlySpan<double> coef = observation.Row.Coefficients;
+            for (int p = 0; p < idx.Length; p++)
+            {
+                _local[_rowStart[i] + p] = engine.LocalIndex(idx[p]);
+                _coefficients[_rowStart[i] + p] = coef[p];
+            }
+        }
+
+        _lowRank = new LowRank[engine.Components.Count];
+        for (int c = 0; c < _lowRank.Length; c++)
+        {
+            Refresh(c);
+        }
+    }
+
+    /// <summary>The normalized residual of observation i, or NaN when it is not checkable.</summary>
+    public double NormalizedResidual(int i) => _z[i];
+
+    /// <summary>The current uncertainty of observation i.</summary>
+    public double Uncertainty(int i) => _engine.Uncertainty(i);
+
+    /// <summary>Rank-one changes committed to component c since its last fresh factorization.</summary>
+    public int ChangesSinceFactorization(int component) => _lowRank[component]?.Changes ?? 0;
+
+    /// <summary>The checkable observation with the largest |z| (first index on ties), or −1.</summary>
+    public int Worst()
+    {
+        int worst = -1;
+        double best = 0.0;
+        for (int i = 0; i < _z.Length; i++)
+        {
+            double a = Math.Abs(_z[i]);
+            if (a > best || (worst < 0 && !double.IsNaN(a)))
+            {
+                worst = i;
+                best = a;
+            }
+        }
+
+        return worst;
+    }
+
+    /// <summary>Prepares g = G·aᵢ and tₗ = aₗᵀg for every observation l of i's component.</summary>
+    /// <remarks>The probe shares buffers with the next one: it is valid until the next call.</remarks>
+    public Probe Prepare(int i)
+    {
+        int c = _engine.ComponentOfObservation(i);
+        ComponentFactorization component = _engine.Components[c];
+        LowRank lowRank = LowRankOf(c);
+        int k = component.Size;
+        int[] observations = component.Observations;
+        if (_gBuffer.Length < k)
+        {
+            _gBuffer = new double[k];
+        }
+
+        if (_tBuffer.Length < observations.Length)
+        {
+            _tBuffer = new double[observations.Length];
+            _zBuffer = new double[observations.Length];
+        }
+
+        Span<double> g = _gBuffer.AsSpan(0, k);
+        g.Clear();
+        int start = _rowStart[i];
+        int end = _rowStart[i + 1];
+        for (int p = start; p < end; p++)
+        {
+            ManagedKernel.Axpy(_coefficients[p], component.Covariance.AsSpan(_local[p] * k, k), g);
+        }
+
+        for (int j = 0; j < lowRank.Count; j++)
+        {
+            double dot = 0.0;
+            int offset = j * k;
+            for (int p = start; p < end; p++)
+            {
+                dot += _coefficients[p] * lowRank.Vectors[offset + _local[p]];
+            }
+
+            double alpha = -lowRank.Coefficients[j] * dot;
+            if (alpha != 0.0)
+            {
+                ManagedKernel.Axpy(alpha, lowRank.Vectors.AsSpan(offset, k), g);
+            }
+        }
+
+        // t = A·g over the component's rows; spans in locals let the JIT keep everything in registers.
+        Span<double> t = _tBuffer.AsSpan(0, observations.Length);
+        ReadOnlySpan<int> rowStart = _rowStart;
+        ReadOnlySpan<int> local = _local;
+        ReadOnlySpan<double> coefficients = _coefficients;
+        ReadOnlySpan<double> gv = g;
+        for (int p = 0; p < observations.Length; p++)
+        {
+            int l = observations[p];
+            int e1 = rowStart[l + 1];
+            double sum = 0.0;
+            for (int e = rowStart[l]; e < e1; e++)
+            {
+                sum += coefficients[e] * gv[local[e]];
+            }
+
+            t[p] = sum;
+        }
+
+        return new Probe(i, c, _gBuffer, _tBuffer);
+    }
+
+    /// <summary>The largest |z| and its observation if observation i (prepared in probe) had uncertainty u.</summary>
+    /// <returns>The index of the worst checkable observation after the change (first on ties) and i's own z.</returns>
+    public (int Worst, double OwnZ) Evaluate(Probe probe, double uncertainty)
+    {
+        int i = probe.Observation;
+        double factor = ChangeFactor(i, uncertainty);
+        double e = _values[i] - _fitted[i];
+        int[] observations = _engine.Components[probe.Component].Observations;
+        int worst = -1;
+        double best = 0.0;
+        double own = double.NaN;
+        int p = 0;
+
+        // Other components are unchanged; scanning in index order keeps the tie rule of Worst().
+        for (int l = 0; l < _z.Length; l++)
+        {
+            double z;
+            if (p < observations.Length && observations[p] == l)
+            {
+                double tl = probe.T[p];
+                p++;
+                double u = l == i ? uncertainty : _engine.Uncertainty(l);
+                z = ZOf(_values[l] - _fitted[l] - (factor * e * tl), u, _quadratic[l] - (factor * tl * tl));
+                _zBuffer[p - 1] = z;
+                if (l == i)
+                {
+                    own = z;
+                }
+            }
+            else
+            {
+                z = _z[l];
+            }
+
+            double a = Math.Abs(z);
+            if (a > best || (worst < 0 && !double.IsNaN(a)))
+            {
+                worst = l;
+                best = a;
+            }
+        }
+
+        return (worst, own);
+    }
+
+    /// <summary>Commits the change of observation i's uncertainty to u (one rank-one change).</summary>
+    /// <param name="probe">The prepared observation.</param>
+    /// <param name="uncertainty">Its new uncertainty.</param>
+    /// <param name="evaluated">True when the last <see cref="Evaluate"/> call was for this probe and this uncertainty (its z values are reused).</param>
+    /// <param name="refactorizationInterval">Changes after which the component is factored afresh.</param>
+    public void Commit(Probe probe, double uncertainty, bool evaluated, int refactorizationInterval)
+    {
+        int i = probe.Observation;
+        int c = probe.Component;
+        double factor = ChangeFactor(i, uncertainty);
+        double e = _values[i] - _fitted[i];
+        ComponentFactorization component = _engine.Components[c];
+        ManagedKernel.Axpy(factor * e, probe.G.AsSpan(0, component.Size), component.Solution);
+        _engine.StoreUncertainty(i, uncertainty);
+        int[] observations = component.Observations;
+        for (int p = 0; p < observations.Length; p++)
+        {
+            int l = observations[p];
+            double tl = probe.T[p];
+            _fitted[l] += factor * e * tl;
+            _quadratic[l] -= factor * tl * tl;
+            _z[l] = evaluated ? _zBuffer[p] : ZOf(_values[l] - _fitted[l], _engine.Uncertainty(l), _quadratic[l]);
+        }
+
+        LowRank lowRank = LowRankOf(c);
+        lowRank.Changes++;
+        if (lowRank.Changes >= refactorizationInterval)
+        {
+            _engine.Refactor(c);
+            lowRank.Count = 0;
+            lowRank.Changes = 0;
+            Refresh(c);
+            return;
+        }
+
+        probe.G.AsSpan(0, component.Size).CopyTo(lowRank.Vectors.AsSpan(lowRank.Count * component.Size));
+        lowRank.Coefficients[lowRank.Count] = factor;
+        lowRank.Count++;
+        if (lowRank.Count == lowRank.Capacity)
+        {
+            Fold(c);
+        }
+    }
+
+    /// <summary>Folds every pending low-rank list into the dense matrices, so the engine holds the current G.</summary>
+    public void FoldAll()
+    {
+        for (int c = 0; c < _lowRank.Length; c++)
+        {
+            if (_lowRank[c] is { Count: > 0 })
+            {
+                Fold(c);
+            }
+        }
+    }
+
+    private void Fold(int c)
+    {
+
+        ComponentFactorization component = _engine.Components[c];
+        LowRank lowRank = _lowRank[c];
+        _engine.Kernel.SubtractLowRank(component.Covariance, component.Size, lowRank.Vectors, lowRank.Coefficients, lowRank.Count);
+        lowRank.Count = 0;
+    }
+
+    /// <summary>c = Δw/(1 + Δw·qᵢ) for the change of observation i's uncertainty to u.</summary>
+    private double ChangeFactor(int i, double uncertainty)
+    {
+        double old = _engine.Uncertainty(i);
+        double deltaWeight = (1.0 / (uncertainty * uncertainty)) - (1.0 / (old * old));
+        return deltaWeight / (1.0 + (deltaWeight * _quadratic[i]));
+    }
+
+    private double ZOf(double residual, double uncertainty, double quadratic)
+    {
+        double u2 = uncertainty * uncertainty;
+        double rest = u2 - quadratic;
+        return rest > _checkability * u2 ? residual / Math.Sqrt(rest) : double.NaN;
+    }
+
+    /// <summary>Recomputes ŷ, q and z of component c's observations from the dense G and x̂.</summary>
+    private void Refresh(int c)
+    {
+        foreach (int i in _engine.Components[c].Observations)
+        {
+            (double fitted, double quadratic) = _engine.FitObservation(i);
+            _fitted[i] = fitted;
+            _quadratic[i] = quadratic;
+            _z[i] = ZOf(_values[i] - fitted, _engine.Uncertainty(i), quadratic);
+        }
+    }
+
+    private LowRank LowRankOf(int c) => _lowRank[c] ??= new LowRank(_engine.Components[c].Size, Math.Max(1, Math.Min(_blockSize, _engine.Components[c].Size)));
+
+    /// <summary>g = G·aᵢ (first k entries) for a prepared observation and tₗ = aₗᵀg for the observations of its component (in component order).</summary>
+    internal sealed record Probe(int Observation, int Component, double[] G, double[] T);
+
+    private sealed class LowRank(int size, int capacity)
+    {
+        public int Capacity { get; } = capacity;
+
+        public double[] Vectors { get; } = new double[size * capacity];
+
+        public double[] Coefficients { get; } = new double[capacity];
+
+        public int Count { get; set; }
+
+        public int Changes { get; set; }
+    }
+}
