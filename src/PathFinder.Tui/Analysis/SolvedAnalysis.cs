@@ -34,7 +34,9 @@ public sealed class SolvedAnalysis : INetworkAnalysis
                 MeasurementStatus status = check.IsSuspect ? MeasurementStatus.Suspect
                     : check.IsCheckable ? MeasurementStatus.Consistent
                     : MeasurementStatus.Unchecked;
-                measurements[check.Measurement.Id] = new MeasurementAssessment(check.Measurement.Id, status, check.NormalizedResidual, check.Predicted, check.PredictedUncertainty);
+                // The explorer shows how far each value is from what the rest predicts (after down-weighting suspects),
+                // which is what its status rests on; the as-given normalized residuals smear one gross error over its cycles.
+                measurements[check.Measurement.Id] = new MeasurementAssessment(check.Measurement.Id, status, check.PredictionZ, check.Predicted, check.PredictedUncertainty);
             }
 
             foreach (PathFinder.Analysis.SuspectReport suspect in family.Suspects)

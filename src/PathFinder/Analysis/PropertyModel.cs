@@ -88,6 +88,13 @@ public sealed class PropertyModel
                 continue;
             }
 
+            if (measurement.Equation.Terms.All(term => family.IsFixed(term.Species)))
+            {
+                // Nothing to determine: every species is fixed by convention, so the value should simply be zero.
+                warnings.Add(Diagnostic.Warning("conventional-only", measurement.Location, $"'{measurement.Id}' involves only species whose {family.SpeciesQuantity()} is zero by convention; it is left out of the analysis", "its value should be 0; drop the row or check the equation"));
+                continue;
+            }
+
             prepared.Add(Prepare(measurement, reference, heatCapacities, warnings));
             foreach (EquationTerm term in measurement.Equation.Terms)
             {

@@ -151,7 +151,8 @@ public static class SyntheticNetworkGenerator
             Append(text, "N", nitrogen);
             Append(text, "O", oxygen);
             string formula = text.ToString();
-            if (formula == "C" || !seen.Add(formula))
+            // CO2 is the combustion product the generator adds itself; a second CO2 species would make empty reactions.
+            if (formula is "C" or "CO2" || !seen.Add(formula))
             {
                 continue;
             }
