@@ -1,30 +1,59 @@
 using PathFinder.Analysis;
 using PathFinder.Chemistry;
+using PathFinder.Curation;
 using PathFinder.Data;
+using PathFinder.Diagnostics;
+using PathFinder.Thermodynamics;
 
 namespace PathFinder.Cli.Output;
 
 /// <summary>The network as every analysis command sees it: read, validated, with curation decisions applied.</summary>
 /// <param name="Read">The read result.</param>
 /// <param name="Network">The network after curation (excluded measurements removed).</param>
-/// <param name="Excluded">Measurements excluded by curation, with reasons.</param>
-public sealed record AnalysisSession(NetworkReadResult Read, ReactionNetwork Network, IReadOnlyList<string> Excluded)
+/// <param name="Excluded">Measurements excluded by the curation file, with the decisions.</param>
+public sealed record AnalysisSession(NetworkReadResult Read, ReactionNetwork Network, IReadOnlyList<ExcludedMeasurement> Excluded)
 {
-    /// <summary>Loads the network; null (with the exit code) when the command must stop.</summary>
+    /// <summary>Loads the network and its curation file; null (with the exit code) when the command must stop.</summary>
     public static AnalysisSession? Open(string path, CommandContext context, bool skipInvalid, out int exitCode)
     {
+        ArgumentNullException.ThrowIfNull(context);
         NetworkReadResult? read = NetworkLoading.Load(path, context, skipInvalid, out exitCode);
         if (read is null)
         {
             return null;
         }
 
-        return new AnalysisSession(read, read.Network, []);
+        string curationPath = CurationFile.PathFor(path);
+        CurationReadResult curation = CurationFile.Read(curationPath);
+        if (curation.HasErrors)
+        {
+            foreach (Diagnostic diagnostic in curation.Diagnostics)
+            {
+                context.Error.WriteLine(diagnostic.ToString());
+            }
+
+            context.Error.WriteLine("the curation file has errors: nothing was computed. Fix it, or move it away to analyse without curation.");
+            exitCode = ExitCodes.InvalidInput;
+            return null;
+        }
+
+        CurationResult applied = curation.Set.Apply(read.Network);
+        if (applied.Excluded.Count > 0)
+        {
+            context.Error.WriteLine($"note: {applied.Excluded.Count} measurement(s) excluded by {curationPath}: {string.Join(", ", applied.Excluded.Select(item => item.Measurement.Id))}");
+        }
+
+        foreach (string unknown in applied.UnknownIds)
+        {
+            context.Error.WriteLine($"warning: {curationPath} names measurement '{unknown}', which is not in the data");
+        }
+
+        return new AnalysisSession(read, applied.Network, applied.Excluded);
     }
 
     /// <summary>The model of one family.</summary>
     public PropertyModel Model(PropertyFamily family) => PropertyModel.Build(Network, family, Read.HeatCapacities);
 
     /// <summary>Heat capacities by species.</summary>
-    public IReadOnlyDictionary<Species, Thermodynamics.IHeatCapacity> HeatCapacities => Read.HeatCapacities;
+    public IReadOnlyDictionary<Species, IHeatCapacity> HeatCapacities => Read.HeatCapacities;
 }
