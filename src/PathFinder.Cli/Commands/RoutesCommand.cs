@@ -68,7 +68,8 @@ public sealed class RoutesCommand
         SolveReport solved = NetworkSolver.Solve(model, adjust: true);
         RouteReport report = RouteAnalysis.Find(model, target, new RouteSearchOptions { MaxSteps = maxSteps, MaxRoutes = top, TimeBudget = TimeSpan.FromSeconds(timeBudget) }, solved.Solution);
         TargetConditions? atTemperature = temperature is { } kelvin ? TargetConditions.Evaluate(session.Network, session.HeatCapacities, target, kelvin) : null;
-        RouteOutput.Write(context.Out, report, model, property, explain, atTemperature, json);
+        var suspects = solved.Suspects.Select(suspect => model.Measurements[suspect.ObservationIndex].Id).ToHashSet(StringComparer.Ordinal);
+        RouteOutput.Write(context.Out, report, model, property, explain, atTemperature, json, suspects);
         if (report.Routes.Count == 0)
         {
             string why = report.UnreachableSpecies.Count > 0

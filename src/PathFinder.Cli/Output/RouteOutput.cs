@@ -10,11 +10,12 @@ namespace PathFinder.Cli.Output;
 public static class RouteOutput
 {
     /// <summary>Writes <paramref name="report"/>.</summary>
-    public static void Write(TextWriter output, RouteReport report, PropertyModel model, ThermoProperty property, int explain, TargetConditions? conditions, bool json)
+    public static void Write(TextWriter output, RouteReport report, PropertyModel model, ThermoProperty property, int explain, TargetConditions? conditions, bool json, IReadOnlySet<string>? suspects = null)
     {
         ArgumentNullException.ThrowIfNull(output);
         ArgumentNullException.ThrowIfNull(report);
         ArgumentNullException.ThrowIfNull(model);
+        suspects ??= new HashSet<string>(StringComparer.Ordinal);
         string unit = model.Unit.Symbol;
         double gasTerm = property == ThermoProperty.InternalEnergy
             ? report.Target.GasMoleChange().ToDouble() * PhysicalConstants.GasConstant * PhysicalConstants.StandardTemperature / 1000.0
@@ -42,6 +43,7 @@ public static class RouteOutput
                     value = route.Value - gasTerm,
                     uncertainty = route.Uncertainty,
                     independent = route.IsIndependent,
+                    usesSuspects = route.Steps.Select(step => step.Measurement.Id).Where(suspects.Contains),
                     cancelled = route.Cancelled.Select(species => species.Name),
                     steps = route.Steps.Select(step => new
                     {
@@ -90,7 +92,9 @@ public static class RouteOutput
             {
                 string mark = route.IsIndependent ? "*" : " ";
                 string members = string.Join(" ", route.Steps.Select(step => step.Factor == Fractions.Fraction.One ? step.Measurement.Id : $"{step.Measurement.Id}({RationalText.Format(step.Factor)})"));
-                output.WriteLine($"  {route.Number,-3}{mark} {Text.Number(route.Value - gasTerm),12}  {Text.Number(route.Uncertainty),8}  {route.Steps.Count,5}  {members}");
+                string[] usedSuspects = route.Steps.Select(step => step.Measurement.Id).Where(suspects.Contains).ToArray();
+                string warning = usedSuspects.Length > 0 ? $"   ! uses suspect {string.Join(", ", usedSuspects)}" : "";
+                output.WriteLine($"  {route.Number,-3}{mark} {Text.Number(route.Value - gasTerm),12}  {Text.Number(route.Uncertainty),8}  {route.Steps.Count,5}  {members}{warning}");
             }
         }
 
