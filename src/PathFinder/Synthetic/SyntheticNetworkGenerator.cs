@@ -100,7 +100,9 @@ public static class SyntheticNetworkGenerator
         return new SyntheticNetwork(new ReactionNetwork($"synthetic-{options.Seed}", measurements), truth, outliers);
     }
 
-    /// <summary>Writes the network as a CSV file <c>measurements.csv</c> and its ground truth <c>truth.csv</c> into a folder.</summary>
+    /// <summary>Writes the network as a CSV file <c>measurements.csv</c> and its ground truth <c>truth.txt</c> (CSV text) into a folder.</summary>
+    /// <remarks>The truth file is not named <c>.csv</c> so that reading the folder as a network does not take it for data.
+    /// Fields are quoted where needed: reference states such as <c>C(cr,graphite)</c> contain a comma.</remarks>
     public static void Write(SyntheticNetwork network, string folder)
     {
         ArgumentNullException.ThrowIfNull(network);
@@ -110,7 +112,7 @@ public static class SyntheticNetworkGenerator
         data.AppendLine("id,equation,property,value,uncertainty,unit,temperature,source");
         foreach (Measurement measurement in network.Network.Measurements)
         {
-            data.AppendLine(string.Create(CultureInfo.InvariantCulture, $"{measurement.Id},{measurement.Equation},dH,{measurement.Value:R},{measurement.Uncertainty:R},kJ/mol,298.15,{measurement.Source}"));
+            data.AppendLine(string.Create(CultureInfo.InvariantCulture, $"{measurement.Id},{Quote(measurement.Equation.ToString())},dH,{measurement.Value:R},{measurement.Uncertainty:R},kJ/mol,298.15,{measurement.Source}"));
         }
 
         var truth = new StringBuilder();
@@ -118,7 +120,7 @@ public static class SyntheticNetworkGenerator
         truth.AppendLine("kind,name,value");
         foreach ((Species species, double value) in network.TrueFormationEnthalpy.Where(pair => network.Network.IndexOf(pair.Key) >= 0))
         {
-            truth.AppendLine(string.Create(CultureInfo.InvariantCulture, $"species,{species.Name},{value:R}"));
+            truth.AppendLine(string.Create(CultureInfo.InvariantCulture, $"species,{Quote(species.Name)},{value:R}"));
         }
 
         foreach (string id in network.OutlierIds.Order(StringComparer.Ordinal))
@@ -129,6 +131,9 @@ public static class SyntheticNetworkGenerator
         AtomicFile.WriteAllText(Path.Combine(folder, "measurements.csv"), data.ToString());
         AtomicFile.WriteAllText(Path.Combine(folder, "truth.txt"), truth.ToString());
     }
+
+    private static string Quote(string field) =>
+        field.IndexOfAny([',', '"', '\n']) >= 0 ? "\"" + field.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"" : field;
 
     private static List<Species> MakeSpecies(int count, Random random)
     {

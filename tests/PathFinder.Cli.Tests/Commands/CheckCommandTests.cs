@@ -1,0 +1,101 @@
+using System.Text.Json;
+using PathFinder.Cli.Tests.TestSupport;
+
+namespace PathFinder.Cli.Tests.Commands;
+
+public sealed class CheckCommandTests : IDisposable
+{
+    private readonly TempFolder _folder = new();
+
+    public void Dispose() => _folder.Dispose();
+
+    [Fact]
+    public void Check_Demo_ExitsOneBecauseOfC03_AndNamesItFirst()
+    {
+        CliRun run = CliRun.Of("check", RepoPaths.Demo("combustion-lab"));
+
+        Assert.Equal(ExitCodes.AnalysisProblem, run.ExitCode);
+        Assert.Contains("Result: INCONSISTENT (exit code 1)", run.Out, StringComparison.Ordinal);
+        string firstSuspect = run.Out.Split('\n').SkipWhile(line => !line.Contains("Suspects (", StringComparison.Ordinal)).Skip(1).First();
+        Assert.StartsWith("     C03", firstSuspect, StringComparison.Ordinal);
+        Assert.Contains("[group-c]", firstSuspect, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Check_Json_FollowsTheContract()
+    {
+        CliRun run = CliRun.Of("check", RepoPaths.Demo("combustion-lab"), "--json");
+
+        Assert.Equal(ExitCodes.AnalysisProblem, run.ExitCode);
+        using JsonDocument document = JsonDocument.Parse(run.Out);
+        JsonElement root = document.RootElement;
+        Assert.False(root.GetProperty("consistent").GetBoolean());
+        JsonElement suspect = root.GetProperty("suspects")[0];
+        Assert.Equal("C03", suspect.GetProperty("id").GetString());
+        Assert.Equal("group-c", suspect.GetProperty("source").GetString());
+        Assert.Equal(-47.6, suspect.GetProperty("measured").GetDouble(), 1e-9);
+        Assert.True(Math.Abs(suspect.GetProperty("normalizedResidual").GetDouble()) > 3);
+        double predicted = suspect.GetProperty("predicted").GetDouble();
+        double spread = suspect.GetProperty("predictedUncertainty").GetDouble();
+        Assert.True(spread > 0);
+
+        // The rest of the network puts the water-gas shift near ΔfH°(CO2) − ΔfH°(CO) − ΔfH°(H2O, g)
+        // = −393.51 + 110.53 + 241.826 = −41.154 kJ/mol (CODATA Key Values 1989, from memory)
+        Assert.InRange(predicted, -41.154 - (3 * spread), -41.154 + (3 * spread));
+
+        // Cycles carry their members with exact factors; sources their offset statistics
+        JsonElement[] cycles = root.GetProperty("cycles").EnumerateArray().ToArray();
+        Assert.NotEmpty(cycles);
+        Assert.Contains(cycles, cycle => cycle.GetProperty("flagged").GetBoolean() && cycle.GetProperty("members").EnumerateArray().Any(member => member.GetProperty("id").GetString() == "C03"));
+        Assert.All(cycles.SelectMany(cycle => cycle.GetProperty("members").EnumerateArray()), member => Assert.Matches("^-?[0-9]+(/[0-9]+)?$", member.GetProperty("factor").GetString()!));
+        string[] sources = root.GetProperty("sources").EnumerateArray().Select(source => source.GetProperty("name").GetString()!).ToArray();
+        Assert.Contains("group-a", sources);
+        Assert.Contains("group-c", sources);
+    }
+
+    [Fact]
+    public void Check_ConsistentHandbookNetwork_ExitsZeroWithNoSuspects()
+    {
+        // Given formation enthalpies of CO2, CO, H2O(l), H2O(g) (CODATA Key Values, Cox, Wagman, Medvedev 1989,
+        // from memory) and three reactions built from them with root-sum-square uncertainties
+        string file = _folder.Write(
+            "handbook.csv",
+            "id,equation,property,value,uncertainty,unit,temperature,source\n"
+            + "F1,CO2(g),dH,-393.51,0.13,kJ/mol,,table\n"
+            + "F2,H2O(l),dH,-285.830,0.040,kJ/mol,,table\n"
+            + "F3,H2O(g),dH,-241.826,0.040,kJ/mol,,table\n"
+            + "F4,CO(g),dH,-110.53,0.17,kJ/mol,,table\n"
+            + "R1,H2O(l) -> H2O(g),dH,44.004,0.057,kJ/mol,,flow\n"
+            + "R2,CO(g) + 1/2 O2(g) -> CO2(g),dH,-282.98,0.22,kJ/mol,,bomb\n"
+            + "R3,CO(g) + H2O(g) -> CO2(g) + H2(g),dH,-41.154,0.22,kJ/mol,,flow\n");
+
+        CliRun text = CliRun.Of("check", file);
+        CliRun json = CliRun.Of("check", file, "--json");
+
+        Assert.Equal(ExitCodes.Success, text.ExitCode);
+        Assert.Contains("Suspects: none.", text.Out, StringComparison.Ordinal);
+        Assert.Contains("Result: consistent.", text.Out, StringComparison.Ordinal);
+        Assert.Equal(ExitCodes.Success, json.ExitCode);
+        using JsonDocument document = JsonDocument.Parse(json.Out);
+        Assert.True(document.RootElement.GetProperty("consistent").GetBoolean());
+        Assert.Equal(0, document.RootElement.GetProperty("suspects").GetArrayLength());
+
+        // 7 measurements of 4 species: 3 independent cycles (m − rank)
+        JsonElement family = document.RootElement.GetProperty("families")[0];
+        Assert.Equal(4, family.GetProperty("rank").GetInt32());
+        Assert.Equal(3, family.GetProperty("independentCycles").GetInt32());
+    }
+
+    [Theory]
+    [InlineData("--threshold", "0")]
+    [InlineData("--inflation", "1")]
+    [InlineData("--max-cycle", "-2")]
+    public void Check_BadOption_ExitsTwo(string option, string value)
+    {
+        CliRun run = CliRun.Of("check", RepoPaths.Demo("combustion-lab"), option, value);
+
+        Assert.Equal(ExitCodes.InvalidInput, run.ExitCode);
+        Assert.Contains(option, run.Error, StringComparison.Ordinal);
+        Assert.Equal("", run.Out);
+    }
+}

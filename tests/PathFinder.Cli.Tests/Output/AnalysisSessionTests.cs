@@ -1,0 +1,84 @@
+using System.Text.Json;
+using PathFinder.Cli.Tests.TestSupport;
+
+namespace PathFinder.Cli.Tests.Output;
+
+/// <summary>The curation file beside the data is applied by every analysis command (through the analysis session).</summary>
+public sealed class AnalysisSessionTests : IDisposable
+{
+    private readonly TempFolder _folder = new();
+
+    public void Dispose() => _folder.Dispose();
+
+    private string CuratedDemo()
+    {
+        string demo = DemoCopy.CombustionLab(_folder);
+        File.WriteAllText(Path.Combine(demo, "curation.csv"), "id,action,reason,date\nC03,exclude,slipped,2026-01-01\n");
+        return demo;
+    }
+
+    [Fact]
+    public void Check_WithC03Excluded_IsConsistent()
+    {
+        string demo = CuratedDemo();
+
+        CliRun run = CliRun.Of("check", demo);
+
+        Assert.Equal(ExitCodes.Success, run.ExitCode);
+        Assert.Contains("Result: consistent.", run.Out, StringComparison.Ordinal);
+        Assert.Contains("1 measurement(s) excluded", run.Error, StringComparison.Ordinal);
+        Assert.Contains("C03", run.Error, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Solve_WithC03Excluded_NoLongerListsItAsSuspect()
+    {
+        string demo = CuratedDemo();
+
+        CliRun run = CliRun.Of("solve", demo, "--json");
+
+        Assert.Equal(ExitCodes.Success, run.ExitCode);
+        using JsonDocument document = JsonDocument.Parse(run.Out);
+        Assert.Equal(0, document.RootElement.GetProperty("suspects").GetArrayLength());
+        // The demo's 27 enthalpy rows (ΔH and ΔU) less C03
+        Assert.Equal(26, document.RootElement.GetProperty("measurements").GetInt32());
+    }
+
+    [Fact]
+    public void Routes_WithC03Excluded_NeverUseIt()
+    {
+        string demo = CuratedDemo();
+
+        CliRun run = CliRun.Of("routes", demo, "--target", "CO(g)", "--json", "--top", "50");
+
+        Assert.Equal(ExitCodes.Success, run.ExitCode);
+        using JsonDocument document = JsonDocument.Parse(run.Out);
+        string[] ids = document.RootElement.GetProperty("routes").EnumerateArray()
+            .SelectMany(route => route.GetProperty("steps").EnumerateArray()).Select(step => step.GetProperty("id").GetString()!).ToArray();
+        Assert.NotEmpty(ids);
+        Assert.DoesNotContain("C03", ids);
+    }
+
+    [Fact]
+    public void Draw_WithC03Excluded_CannotDrawIt()
+    {
+        string demo = CuratedDemo();
+        string file = Path.Combine(_folder.Path, "c.svg");
+
+        CliRun run = CliRun.Of("draw", demo, "--species", "CO(g)", "-o", file);
+
+        Assert.Equal(ExitCodes.Success, run.ExitCode);
+        Assert.DoesNotContain(">C03<", File.ReadAllText(file), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void BrokenCurationFile_StopsEveryCommandWithExitTwo()
+    {
+        string demo = DemoCopy.CombustionLab(_folder);
+        File.WriteAllText(Path.Combine(demo, "curation.csv"), "id,action,reason,date\nC03,banish,slipped,2026-01-01\n");
+
+        Assert.Equal(ExitCodes.InvalidInput, CliRun.Of("check", demo).ExitCode);
+        Assert.Equal(ExitCodes.InvalidInput, CliRun.Of("solve", demo).ExitCode);
+        Assert.Equal(ExitCodes.InvalidInput, CliRun.Of("routes", demo, "--target", "CO(g)").ExitCode);
+    }
+}
