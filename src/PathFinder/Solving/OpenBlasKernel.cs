@@ -41,7 +41,11 @@ internal sealed class OpenBlasKernel : IDenseKernel
         double tol = tolerance;
         var work = new double[2 * n];
         var piv = new int[n];
-        Dpstrf(ref uplo, ref order, a, ref lda, piv, ref rank, ref tol, work, ref info, 1);
+        using (var aligned = new AlignedCopy(a, n * n))
+        {
+            Dpstrf(ref uplo, ref order, ref aligned.First, ref lda, piv, ref rank, ref tol, work, ref info, 1);
+        }
+
         if (info < 0)
         {
             throw new InvalidOperationException($"dpstrf_ rejected argument {-info}.");
@@ -67,7 +71,11 @@ internal sealed class OpenBlasKernel : IDenseKernel
         int order = rank;
         int lda = n;
         int info = 0;
-        Dpotri(ref uplo, ref order, a, ref lda, ref info, 1);
+        using (var aligned = new AlignedCopy(a, n * n))
+        {
+            Dpotri(ref uplo, ref order, ref aligned.First, ref lda, ref info, 1);
+        }
+
         if (info != 0)
         {
             throw new InvalidOperationException($"dpotri_ failed with info = {info}.");
@@ -107,7 +115,12 @@ internal sealed class OpenBlasKernel : IDenseKernel
             byte uplo = (byte)'U';
             byte trans = (byte)'N';
             double alpha = allNegative ? 1.0 : -1.0;
-            Dsyrk(ref uplo, ref trans, ref order, ref inner, ref alpha, scaled, ref ld, ref beta, g, ref ld, 1, 1);
+            using (var alignedScaled = new AlignedCopy(scaled, scaled.Length))
+            using (var alignedG = new AlignedCopy(g, n * n))
+            {
+                Dsyrk(ref uplo, ref trans, ref order, ref inner, ref alpha, ref alignedScaled.First, ref ld, ref beta, ref alignedG.First, ref ld, 1, 1);
+            }
+
             MirrorUpper(g, n);
             return;
         }
@@ -121,7 +134,10 @@ internal sealed class OpenBlasKernel : IDenseKernel
         byte transB = (byte)'T';
         int columns = n;
         double minusOne = -1.0;
-        Dgemm(ref transA, ref transB, ref order, ref columns, ref inner, ref minusOne, scaled, ref ld, vectors, ref ld, ref beta, g, ref ld, 1, 1);
+        using var alignedA = new AlignedCopy(scaled, scaled.Length);
+        using var alignedB = new AlignedCopy(vectors, n * rank);
+        using var alignedC = new AlignedCopy(g, n * n);
+        Dgemm(ref transA, ref transB, ref order, ref columns, ref inner, ref minusOne, ref alignedA.First, ref ld, ref alignedB.First, ref ld, ref beta, ref alignedC.First, ref ld, 1, 1);
     }
 
     /// <summary>Copies the upper triangle onto the lower one, in cache-sized tiles.</summary>
@@ -167,18 +183,18 @@ internal sealed class OpenBlasKernel : IDenseKernel
 
     [DllImport(LibraryName, EntryPoint = "dpstrf_", ExactSpelling = true)]
     private static extern void Dpstrf(
-        ref byte uplo, ref int n, double[] a, ref int lda, int[] piv, ref int rank, ref double tol, double[] work, ref int info, nuint uploLength);
+        ref byte uplo, ref int n, ref double a, ref int lda, int[] piv, ref int rank, ref double tol, double[] work, ref int info, nuint uploLength);
 
     [DllImport(LibraryName, EntryPoint = "dgemm_", ExactSpelling = true)]
     private static extern void Dgemm(
-        ref byte transA, ref byte transB, ref int m, ref int n, ref int k, ref double alpha, double[] a, ref int lda, double[] b, ref int ldb,
-        ref double beta, double[] c, ref int ldc, nuint transALength, nuint transBLength);
+        ref byte transA, ref byte transB, ref int m, ref int n, ref int k, ref double alpha, ref double a, ref int lda, ref double b, ref int ldb,
+        ref double beta, ref double c, ref int ldc, nuint transALength, nuint transBLength);
 
     [DllImport(LibraryName, EntryPoint = "dsyrk_", ExactSpelling = true)]
     private static extern void Dsyrk(
-        ref byte uplo, ref byte trans, ref int n, ref int k, ref double alpha, double[] a, ref int lda, ref double beta, double[] c, ref int ldc,
+        ref byte uplo, ref byte trans, ref int n, ref int k, ref double alpha, ref double a, ref int lda, ref double beta, ref double c, ref int ldc,
         nuint uploLength, nuint transLength);
 
     [DllImport(LibraryName, EntryPoint = "dpotri_", ExactSpelling = true)]
-    private static extern void Dpotri(ref byte uplo, ref int n, double[] a, ref int lda, ref int info, nuint uploLength);
+    private static extern void Dpotri(ref byte uplo, ref int n, ref double a, ref int lda, ref int info, nuint uploLength);
 }
