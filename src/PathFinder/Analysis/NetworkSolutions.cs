@@ -17,8 +17,10 @@ public sealed class NetworkSolutions
     /// <param name="network">The network.</param>
     /// <param name="heatCapacities">Heat-capacity models by species (temperature corrections); may be empty.</param>
     /// <param name="adjust">Whether to run the suspect procedure before reporting (default true).</param>
-    public NetworkSolutions(ReactionNetwork network, IReadOnlyDictionary<Species, IHeatCapacity>? heatCapacities = null, bool adjust = true)
+    /// <param name="options">Options of the suspect procedure; defaults of <see cref="ConsistencyOptions"/> when omitted.</param>
+    public NetworkSolutions(ReactionNetwork network, IReadOnlyDictionary<Species, IHeatCapacity>? heatCapacities = null, bool adjust = true, ConsistencyOptions? options = null)
     {
+        Options = options ?? new ConsistencyOptions();
         ArgumentNullException.ThrowIfNull(network);
         Network = network;
         HeatCapacities = heatCapacities ?? new Dictionary<Species, IHeatCapacity>();
@@ -34,13 +36,16 @@ public sealed class NetworkSolutions
     /// <summary>Whether the suspect procedure runs before solutions are reported.</summary>
     public bool Adjusted { get; }
 
+    /// <summary>Options of the suspect procedure.</summary>
+    public ConsistencyOptions Options { get; }
+
     /// <summary>The solved family, or null when the network has no data of that family.</summary>
     public SolveReport? Report(PropertyFamily family)
     {
         if (!_reports.TryGetValue(family, out SolveReport? report))
         {
             PropertyModel model = PropertyModel.Build(Network, family, HeatCapacities);
-            report = model.Measurements.Count == 0 ? null : NetworkSolver.Solve(model, Adjusted);
+            report = model.Measurements.Count == 0 ? null : NetworkSolver.Solve(model, Adjusted, Options);
             _reports[family] = report;
         }
 
