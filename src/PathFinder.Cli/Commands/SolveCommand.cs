@@ -14,6 +14,7 @@ public sealed class SolveCommand
     private readonly Option<double> _threshold = new("--threshold") { Description = "|z| threshold of the suspect procedure (default 2).", DefaultValueFactory = _ => 2.0 };
     private readonly Option<string> _format = new("--format", "-f") { Description = "table (default), csv, json or markdown.", DefaultValueFactory = _ => "table" };
     private readonly Option<bool> _json = new("--json") { Description = "Same as --format json." };
+    private readonly Option<double?> _temperature = new("--temperature") { Description = "Also give every species' value at this temperature in K, moved with the heat-capacity data (dH: ΔfH°, needs Cp of the species and its elements; dS: S°; dG: ΔfG° from ΔH and S° data)." };
     private readonly Option<bool> _skipInvalid = new("--skip-invalid") { Description = "Use the valid rows when some rows have errors." };
 
     /// <summary>Builds the command bound to <paramref name="context"/>.</summary>
@@ -21,7 +22,7 @@ public sealed class SolveCommand
     {
         var command = new Command("solve", "Solve the network by weighted least squares: the best estimate and uncertainty of every species the data determine.")
         {
-            _network, _property, _noAdjust, _threshold, _format, _json, _skipInvalid,
+            _network, _property, _noAdjust, _threshold, _format, _json, _temperature, _skipInvalid,
         };
         _format.AcceptOnlyFromAmong("table", "csv", "json", "markdown");
         command.SetAction(parse => Run(
@@ -31,16 +32,22 @@ public sealed class SolveCommand
             parse.GetValue(_threshold),
             parse.GetValue(_json) ? "json" : parse.GetValue(_format)!,
             parse.GetValue(_skipInvalid),
-            context));
+            context,
+            parse.GetValue(_temperature)));
         return command;
     }
 
     /// <summary>Runs the solve; exit 0, or 2 for bad input.</summary>
-    public static int Run(string path, string propertyCode, bool noAdjust, double threshold, string format, bool skipInvalid, CommandContext context)
+    public static int Run(string path, string propertyCode, bool noAdjust, double threshold, string format, bool skipInvalid, CommandContext context, double? temperature = null)
     {
         ArgumentNullException.ThrowIfNull(context);
         ThermoProperty property = OptionParsing.Property(propertyCode);
         OptionParsing.Positive(threshold, "--threshold");
+        if (temperature is { } t)
+        {
+            OptionParsing.Temperature(t);
+        }
+
         AnalysisSession? session = AnalysisSession.Open(path, context, skipInvalid, out int exitCode);
         if (session is null)
         {
@@ -48,14 +55,16 @@ public sealed class SolveCommand
         }
 
         PropertyFamily family = PropertyFamilies.FamilyOf(property);
-        PropertyModel model = session.Model(family);
-        if (model.Measurements.Count == 0)
+        var solutions = new NetworkSolutions(session.Network, session.HeatCapacities, adjust: !noAdjust, new ConsistencyOptions { Threshold = threshold });
+        SolveReport report = solutions.Report(family)
+            ?? throw new UserInputException($"the network has no {family.ResultProperty().Code()} data to solve");
+        TemperatureTable? atTemperature = temperature is { } kelvin ? TemperatureTable.Evaluate(solutions, family, kelvin) : null;
+        if (temperature is not null && atTemperature is null)
         {
-            throw new UserInputException($"the network has no {family.ResultProperty().Code()} data to solve");
+            context.Error.WriteLine("note: ΔfG° at another temperature needs ΔH data; none given");
         }
 
-        SolveReport report = NetworkSolver.Solve(model, adjust: !noAdjust, new ConsistencyOptions { Threshold = threshold });
-        SolveOutput.Write(context.Out, report, format);
+        SolveOutput.Write(context.Out, report, format, atTemperature);
         return ExitCodes.Success;
     }
 }

@@ -33,4 +33,8 @@ public static class OptionParsing
     /// <summary>Requires a positive finite number.</summary>
     public static double Positive(double value, string option) =>
         double.IsFinite(value) && value > 0 ? value : throw new UserInputException($"{option} must be a positive number");
+
+    /// <summary>Requires a temperature in kelvin above 0 and at most 10000.</summary>
+    public static double Temperature(double kelvin, string option = "--temperature") =>
+        double.IsFinite(kelvin) && kelvin > 0 && kelvin <= 10000 ? kelvin : throw new UserInputException($"{option} must be in kelvin, above 0 and at most 10000");
 }

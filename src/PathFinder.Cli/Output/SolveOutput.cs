@@ -8,8 +8,8 @@ namespace PathFinder.Cli.Output;
 /// <summary>Writes a solve report as a text table, CSV, Markdown or JSON.</summary>
 public static class SolveOutput
 {
-    /// <summary>Writes the report in <paramref name="format"/> (table, csv, json, markdown).</summary>
-    public static void Write(TextWriter output, SolveReport report, string format)
+    /// <summary>Writes the report in <paramref name="format"/> (table, csv, json, markdown), with the values at another temperature when given.</summary>
+    public static void Write(TextWriter output, SolveReport report, string format, TemperatureTable? atTemperature = null)
     {
         ArgumentNullException.ThrowIfNull(output);
         ArgumentNullException.ThrowIfNull(report);
@@ -36,15 +36,24 @@ public static class SolveOutput
                     relativeOnly = report.RelativeGroups,
                     suspects = report.Suspects.Select(suspect => report.Model.Measurements[suspect.ObservationIndex].Id),
                     adjustments = report.Adjustments.Count,
+                    atTemperature = atTemperature is null ? null : TemperatureOutput.Json(atTemperature, atTemperature.Family.Unit().Symbol),
                     caution = Text.Caution,
                 });
                 return;
             case "csv":
                 var csv = new StringBuilder();
-                csv.AppendLine(CultureInfo.InvariantCulture, $"species,{Code(report)},uncertainty,unit,measurements");
+                string extraHeader = atTemperature is null ? "" : $",{CsvCode(atTemperature.Family)}_at_T,T";
+                csv.AppendLine(CultureInfo.InvariantCulture, $"species,{Code(report)},uncertainty,unit,measurements{extraHeader}");
                 foreach (SpeciesEstimate estimate in determined)
                 {
-                    csv.AppendLine(CultureInfo.InvariantCulture, $"{Quote(estimate.Species.Name)},{estimate.Value:R},{estimate.Uncertainty:R},{unit},{estimate.Measurements}");
+                    string extra = "";
+                    if (atTemperature is not null)
+                    {
+                        double? moved = atTemperature.Species.FirstOrDefault(row => row.Species.Equals(estimate.Species))?.AtTemperature?.Value;
+                        extra = string.Create(CultureInfo.InvariantCulture, $",{(moved is { } value ? value.ToString("R", CultureInfo.InvariantCulture) : "")},{atTemperature.Temperature:R}");
+                    }
+
+                    csv.AppendLine(CultureInfo.InvariantCulture, $"{Quote(estimate.Species.Name)},{estimate.Value:R},{estimate.Uncertainty:R},{unit},{estimate.Measurements}{extra}");
                 }
 
                 output.Write(csv.ToString());
@@ -58,6 +67,7 @@ public static class SolveOutput
                 }
 
                 output.WriteLine();
+                WriteAtTemperature(output, atTemperature);
                 WriteFooter(output, report);
                 return;
             default:
@@ -72,10 +82,27 @@ public static class SolveOutput
                 }
 
                 output.WriteLine();
+                WriteAtTemperature(output, atTemperature);
                 WriteFooter(output, report);
                 return;
         }
     }
+
+    private static void WriteAtTemperature(TextWriter output, TemperatureTable? table)
+    {
+        if (table is not null)
+        {
+            TemperatureOutput.WriteText(output, table, table.Family.Unit().Symbol);
+            output.WriteLine();
+        }
+    }
+
+    private static string CsvCode(PropertyFamily family) => family switch
+    {
+        PropertyFamily.Enthalpy => "dfH",
+        PropertyFamily.GibbsEnergy => "dfG",
+        _ => "S",
+    };
 
     private static void WriteFooter(TextWriter output, SolveReport report)
     {

@@ -33,15 +33,28 @@ public sealed record TargetConditions(
     {
         ArgumentNullException.ThrowIfNull(network);
         ArgumentNullException.ThrowIfNull(heatCapacities);
+        return Evaluate(new NetworkSolutions(network, heatCapacities), target, temperature);
+    }
+
+    /// <summary>Evaluates <paramref name="target"/> at <paramref name="temperature"/> with solutions already made (or made once and reused).</summary>
+    public static TargetConditions Evaluate(NetworkSolutions solutions, ChemicalEquation target, double temperature)
+    {
+        ArgumentNullException.ThrowIfNull(solutions);
         ArgumentNullException.ThrowIfNull(target);
+        if (!double.IsFinite(temperature) || temperature <= 0.0)
+        {
+            throw new ArgumentOutOfRangeException(nameof(temperature), temperature, "The temperature must be finite and positive, in K.");
+        }
+
+        IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities = solutions.HeatCapacities;
         const double reference = PhysicalConstants.StandardTemperature;
         var notes = new List<string>();
-        UncertainValue? enthalpy = Estimate(network, heatCapacities, PropertyFamily.Enthalpy, target);
-        UncertainValue? entropy = Estimate(network, heatCapacities, PropertyFamily.Entropy, target);
+        UncertainValue? enthalpy = solutions.Estimate(PropertyFamily.Enthalpy, target);
+        UncertainValue? entropy = solutions.Estimate(PropertyFamily.Entropy, target);
         notes.Add(enthalpy is null ? "ΔrH°(298.15 K): not determined by the ΔH/ΔU data" : "ΔrH°(298.15 K): network least-squares estimate");
         if (entropy is null)
         {
-            UncertainValue? gibbs = Estimate(network, heatCapacities, PropertyFamily.GibbsEnergy, target);
+            UncertainValue? gibbs = solutions.Estimate(PropertyFamily.GibbsEnergy, target);
             if (enthalpy is { } h && gibbs is { } g)
             {
                 entropy = GibbsRelations.Entropy(new UncertainValue(h.Value * 1000, h.StandardUncertainty * 1000), new UncertainValue(g.Value * 1000, g.StandardUncertainty * 1000), reference);
@@ -97,29 +110,5 @@ public sealed record TargetConditions(
         EquilibriumConstant k = GibbsRelations.EquilibriumConstant(gibbsJoules, temperature);
         var gibbsAtT = new UncertainValue(gibbsJoules.Value / 1000.0, gibbsJoules.StandardUncertainty / 1000.0);
         return new TargetConditions(temperature, enthalpyAtT, entropyAtT, gibbsAtT, k, notes);
-    }
-
-    private static UncertainValue? Estimate(ReactionNetwork network, IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities, PropertyFamily family, ChemicalEquation target)
-    {
-        PropertyModel model = PropertyModel.Build(network, family, heatCapacities);
-        if (model.Measurements.Count == 0)
-        {
-            return null;
-        }
-
-        Algebra.SparseVector vector = model.VectorOf(target, out IReadOnlyList<Species> missing);
-        if (missing.Count > 0)
-        {
-            return null;
-        }
-
-        if (vector.IsZero)
-        {
-            return new UncertainValue(0.0, 0.0);
-        }
-
-        LeastSquaresSolution solution = NetworkSolver.Solve(model, adjust: true).Solution;
-        DerivedEstimate estimate = solution.Estimate(PropertyModel.RowOf(vector));
-        return estimate.IsEstimable ? new UncertainValue(estimate.Value, estimate.StandardUncertainty) : null;
     }
 }

@@ -9,15 +9,17 @@ namespace PathFinder.Tests.Data;
 public sealed class DemoNetworkTests
 {
     [Fact]
-    public void CombustionLab_IsValidWith29Measurements()
+    public void CombustionLab_IsValidWith38Measurements()
     {
         NetworkReadResult result = NetworkReader.Read(RepoPaths.Demo("combustion-lab"));
 
         Assert.Empty(result.Errors);
-        Assert.Equal(29, result.Network.Measurements.Count);
-        Assert.Equal(3, result.Files.Count);
+        Assert.Equal(38, result.Network.Measurements.Count);
+        Assert.Equal(4, result.Files.Count);
+        Assert.NotNull(result.HeatCapacityFile);
+        Assert.Empty(result.Diagnostics);
         Assert.NotNull(result.SpeciesFile);
-        Assert.Equal(["group-a", "group-b", "group-c"], result.Network.Sources);
+        Assert.Equal(["group-a", "group-b", "group-c", "group-d"], result.Network.Sources);
     }
 
     [Fact]
