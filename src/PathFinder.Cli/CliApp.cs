@@ -21,6 +21,8 @@ public static class CliApp
             new SolveCommand().Build(context),
             new DrawCommand().Build(context),
             new ExploreCommand().Build(context),
+            new TraceCommand().Build(context),
+            new PlanCommand().Build(context),
         };
 
         ParseResult parse = root.Parse(args);
