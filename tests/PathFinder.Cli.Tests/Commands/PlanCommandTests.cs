@@ -6,7 +6,7 @@ namespace PathFinder.Cli.Tests.Commands;
 
 public sealed class PlanCommandTests
 {
-    private static CliRun Plan(params string[] args) => CommandRun.Of(context => new PlanCommand().Build(context), ["plan", .. args]);
+    private static CliRun Plan(params string[] args) => CliRun.Of(["plan", .. args]);
 
     [Fact]
     public void Plan_DemoTargetRanksRemeasurementsAndCandidates()

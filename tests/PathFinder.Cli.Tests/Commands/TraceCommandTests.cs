@@ -6,7 +6,7 @@ namespace PathFinder.Cli.Tests.Commands;
 
 public sealed class TraceCommandTests
 {
-    private static CliRun Trace(params string[] args) => CommandRun.Of(context => new TraceCommand().Build(context), ["trace", .. args]);
+    private static CliRun Trace(params string[] args) => CliRun.Of(["trace", .. args]);
 
     [Fact]
     public void Trace_DemoTargetListsSourcesAndMeasurementsAndExitsZero()
