@@ -1,4 +1,3 @@
-using System.Globalization;
 using Microsoft.Msagl.Core;
 using Microsoft.Msagl.Core.Geometry;
 using Microsoft.Msagl.Core.Geometry.Curves;
@@ -54,11 +53,10 @@ public static class NetworkDiagramRenderer
 
         if (diagram.Nodes.Count > options.MaxNodes)
         {
-            return NetworkDiagramResult.Refused(string.Create(
-                CultureInfo.InvariantCulture,
+            return NetworkDiagramResult.Refused(
                 $"The network has {diagram.Nodes.Count} nodes; diagrams are limited to {options.MaxNodes} nodes " +
                 "(beyond that the layout takes seconds and the picture is unreadable). Draw a narrower focus instead: " +
-                "one route to the target, one cycle, or the depth-1 neighbourhood of a species."));
+                "one route to the target, one cycle, or the depth-1 neighbourhood of a species.");
         }
 
         cancellationToken.ThrowIfCancellationRequested();
