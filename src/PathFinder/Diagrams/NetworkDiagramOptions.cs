@@ -11,9 +11,9 @@ public sealed record NetworkDiagramOptions
     /// Measured with DiagramBenchmark (Release build, 2-core machine; neighbourhoods in a generated network of 2,000
     /// species and 30,000 measurements, about 2 edges per node; least CPU time of three runs): 0.1–0.3 s for 130–145
     /// nodes, 0.1–0.8 s for 210–245, 0.4–1.1 s for 315–325 and 1.7–2.5 s for 400–440. So up to 300 nodes are laid out
-    /// within 2 s; beyond that the
-    /// layout grows quickly (about 20 s for 2,000 nodes) and the drawing, tens of thousands of units tall, is unreadable
-    /// anyway. Above the limit rendering is refused with a message suggesting a narrower focus.
+    /// within 2 s; beyond that the layout grows quickly (about 20 s for 2,000 nodes) and the drawing, tens of thousands
+    /// of units tall, is unreadable anyway. Above the limit rendering is refused with a message suggesting a narrower
+    /// focus.
     /// </remarks>
     public int MaxNodes { get; init; } = DefaultMaxNodes;
 
