@@ -21,7 +21,7 @@ public sealed class DrawCommand
     private readonly Option<int> _depth = new("--depth", "-d") { Description = "Neighbourhood depth in measurement steps (default 1).", DefaultValueFactory = _ => 1 };
     private readonly Option<string> _property = new("--property", "-p") { Description = "dH (default), dG, dS or dU.", DefaultValueFactory = _ => "dH" };
     private readonly Option<int> _maxSteps = new("--max-steps") { Description = "Longest route searched (default 6).", DefaultValueFactory = _ => 6 };
-    private readonly Option<int> _maxNodes = new("--max-nodes") { Description = "Refuse network diagrams with more nodes than this (default 400).", DefaultValueFactory = _ => NetworkDiagramOptions.DefaultMaxNodes };
+    private readonly Option<int> _maxNodes = new("--max-nodes") { Description = $"Refuse network diagrams with more nodes than this (default {NetworkDiagramOptions.DefaultMaxNodes}; larger layouts are slow and unreadable).", DefaultValueFactory = _ => NetworkDiagramOptions.DefaultMaxNodes };
     private readonly Option<string> _output = new("--output", "-o") { Description = "The SVG file to write.", Required = true };
     private readonly Option<bool> _skipInvalid = new("--skip-invalid") { Description = "Use the valid rows when some rows have errors." };
 

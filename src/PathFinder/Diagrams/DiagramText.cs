@@ -28,6 +28,34 @@ internal static class DiagramText
         return isZero ? magnitude : (value < 0.0 ? Minus + magnitude : "+" + magnitude);
     }
 
+    /// <summary>The decimals to print an uncertainty with: <paramref name="decimals"/>, or more while the uncertainty is
+    /// below one unit of the last decimal (0.04 with 1 decimal gets 2 decimals), so its first significant digit shows.</summary>
+    /// <remarks>At most 4 decimals; the value beside it should use the same count, as in "−285.83 ± 0.04".</remarks>
+    public static int DecimalsFor(double uncertainty, int decimals)
+    {
+        int d = Math.Max(decimals, 0);
+        double u = Math.Abs(uncertainty);
+        if (!double.IsFinite(u) || u <= 0.0)
+        {
+            return d;
+        }
+
+        while (d < 4 && u < Math.Pow(10.0, -d) * (1.0 - 1e-9))
+        {
+            d++;
+        }
+
+        return d;
+    }
+
+    /// <summary>A signed value and its uncertainty with matching decimals: <c>+44.0 ± 0.2</c>, <c>−285.83 ± 0.04</c>.</summary>
+    /// <remarks>Uses <paramref name="decimals"/>, or more when the uncertainty needs them (<see cref="DecimalsFor"/>).</remarks>
+    public static string WithUncertainty(double value, double uncertainty, int decimals)
+    {
+        int d = DecimalsFor(uncertainty, decimals);
+        return $"{Signed(value, d)} ± {Fixed(uncertainty, d)}";
+    }
+
     /// <summary>An unsigned magnitude with a fixed number of decimals.</summary>
     public static string Fixed(double value, int decimals) =>
         Math.Abs(value).ToString("F" + decimals.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);

@@ -137,6 +137,39 @@ public static class FormulaMarkup
     /// <summary>The text as it reads on screen (markers removed, charge minus as U+2212), for widths and tooltips.</summary>
     public static string ToPlainText(string text) => string.Concat(Tokenize(text).Select(t => t.Text));
 
+    /// <summary>The text with subscripts and charges written as Unicode sub- and superscript characters (<c>O₂</c>, <c>SO₄²⁻</c>).</summary>
+    /// <remarks>For one-line text without markup support, such as titles. A run containing a character with no Unicode
+    /// sub- or superscript form is left on the baseline.</remarks>
+    public static string ToUnicodeText(string text)
+    {
+        var sb = new StringBuilder(text.Length);
+        foreach (FormulaToken token in Tokenize(text))
+        {
+            string map = token.Role switch
+            {
+                FormulaTextRole.Subscript => SubscriptDigits,
+                FormulaTextRole.Superscript => SuperscriptChars,
+                _ => string.Empty,
+            };
+            string from = token.Role == FormulaTextRole.Superscript ? "0123456789+−" : "0123456789";
+            if (map.Length == 0 || token.Text.Any(c => !from.Contains(c, StringComparison.Ordinal)))
+            {
+                sb.Append(token.Text);
+                continue;
+            }
+
+            foreach (char c in token.Text)
+            {
+                sb.Append(map[from.IndexOf(c, StringComparison.Ordinal)]);
+            }
+        }
+
+        return sb.ToString();
+    }
+
+    private const string SubscriptDigits = "₀₁₂₃₄₅₆₇₈₉";
+    private const string SuperscriptChars = "⁰¹²³⁴⁵⁶⁷⁸⁹⁺⁻";
+
     private static bool IsCoefficientChar(char c) => char.IsDigit(c) || c is '.' or '/' || VulgarFractions.Contains(c);
 
     private static string Charge(string s) => s.Replace('-', '−');

@@ -4,6 +4,8 @@ namespace PathFinder.Diagrams;
 public sealed record LevelDiagramOptions
 {
     /// <summary>Decimals printed for values (default 1, i.e. 0.1 kJ/mol).</summary>
+    /// <remarks>A value printed with an uncertainty gets more decimals when the uncertainty would otherwise round to
+    /// zero: "−285.83 ± 0.04", not "−285.8 ± 0.0".</remarks>
     public int Decimals { get; init; } = 1;
 
     /// <summary>Height of the value span on the energy axis, in SVG units (default 340).</summary>

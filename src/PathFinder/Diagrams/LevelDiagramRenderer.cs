@@ -25,7 +25,7 @@ public static class LevelDiagramRenderer
         string[] lines =
         [
             "target: " + route.TargetLabel,
-            $"{route.Quantity} = {DiagramText.Signed(total, options.Decimals)} ± {DiagramText.Fixed(route.TargetUncertainty, options.Decimals)} {route.Unit}",
+            $"{route.Quantity} = {DiagramText.WithUncertainty(total, route.TargetUncertainty, options.Decimals)} {route.Unit}",
         ];
         ladder.DrawFinal(LevelArrowKind.Overall, lines, DiagramStyle.Blue, 2.6, null, badge: false, firstLineIsFormula: true);
         return ladder.Finish(null);
@@ -43,7 +43,7 @@ public static class LevelDiagramRenderer
         string[] lines =
         [
             closes ? "closes within uncertainty" : "does not close",
-            $"residual {DiagramText.Signed(cycle.Residual, options.Decimals)} ± {DiagramText.Fixed(cycle.ResidualUncertainty, options.Decimals)} {cycle.Unit}",
+            $"residual {DiagramText.WithUncertainty(cycle.Residual, cycle.ResidualUncertainty, options.Decimals)} {cycle.Unit}",
             $"z = {zText} (limit ±{DiagramText.Fixed(options.ZThreshold, 1)})",
         ];
         ladder.DrawFinal(LevelArrowKind.Gap, lines, closes ? DiagramStyle.Green : DiagramStyle.Vermillion, closes ? 2.0 : 2.6, closes ? null : "6 3", badge: !closes, firstLineIsFormula: false);
@@ -135,8 +135,8 @@ public static class LevelDiagramRenderer
 
                 EnthalpyStep step = steps[k];
                 pendingLabel = step.Label;
-                pendingValue = DiagramText.Signed(step.Value, options.Decimals)
-                    + (step.Uncertainty is { } u ? $" ± {DiagramText.Fixed(u, options.Decimals)}" : string.Empty) + " " + unit;
+                pendingValue = (step.Uncertainty is { } u ? DiagramText.WithUncertainty(step.Value, u, options.Decimals) : DiagramText.Signed(step.Value, options.Decimals))
+                    + " " + unit;
                 _scene.Line(new DiagramPoint(x, y), new DiagramPoint(x + 18.0, y), DiagramStyle.Faint, 1.0, "2 2");
                 x += 18.0;
             }

@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text;
+using System.Text.RegularExpressions;
 using Fractions;
 using PathFinder.Analysis;
 using PathFinder.Chemistry;
@@ -11,7 +12,7 @@ namespace PathFinder.Figures;
 
 /// <summary>Turns analysis results (routes, cycles, neighbourhoods) into diagram models for <see cref="PathFinder.Diagrams"/>.</summary>
 /// <remarks>The CLI's <c>draw</c> command and the terminal explorer's export both use these, so both draw the same pictures.</remarks>
-public static class FigureBuilder
+public static partial class FigureBuilder
 {
     /// <summary>The network diagram of one route: its measurements highlighted, joined to the target through the species.</summary>
     public static NetworkDiagram RouteNetwork(RouteReport report, ExplainedRoute route, string unit, FigureMarks? marks = null)
@@ -22,10 +23,10 @@ public static class FigureBuilder
         builder.AddTarget(report.Target, route.Value, route.Uncertainty);
         foreach (RouteStep step in route.Steps)
         {
-            builder.AddMeasurement(step.Measurement.Measurement, step.Measurement.Value, highlighted: true, includeReferences: true);
+            builder.AddMeasurement(step.Measurement, highlighted: true, includeReferences: true);
         }
 
-        return builder.Build($"Route {route.Number} to {report.Target}");
+        return builder.Build($"Route {route.Number} to {TitleText(report.Target)}");
     }
 
     /// <summary>The network diagram of all listed routes to a target, the best one highlighted.</summary>
@@ -38,10 +39,10 @@ public static class FigureBuilder
         var bestIds = new HashSet<string>(best?.Steps.Select(step => step.Measurement.Id) ?? [], StringComparer.Ordinal);
         foreach (RouteStep step in report.Routes.SelectMany(route => route.Steps).DistinctBy(step => step.Measurement.Id))
         {
-            builder.AddMeasurement(step.Measurement.Measurement, step.Measurement.Value, bestIds.Contains(step.Measurement.Id), includeReferences: false);
+            builder.AddMeasurement(step.Measurement, bestIds.Contains(step.Measurement.Id), includeReferences: false);
         }
 
-        return builder.Build($"Routes to {report.Target} (best route highlighted)");
+        return builder.Build($"Routes to {TitleText(report.Target)} (best route highlighted)");
     }
 
     /// <summary>The network diagram of one cycle, its measurements highlighted.</summary>
@@ -51,11 +52,11 @@ public static class FigureBuilder
         var builder = new Builder(marks ?? FigureMarks.None, family.Unit().Symbol, family);
         foreach ((PreparedMeasurement measurement, Fraction _) in cycle.Members)
         {
-            builder.AddMeasurement(measurement.Measurement, measurement.Value, highlighted: true, includeReferences: true);
+            builder.AddMeasurement(measurement, highlighted: true, includeReferences: true);
         }
 
         string verdict = cycle.Flagged ? "does not close" : "closes";
-        return builder.Build(string.Create(CultureInfo.InvariantCulture, $"Cycle {cycle.Number}: {verdict} (z = {cycle.Z:+0.0;-0.0})"));
+        return builder.Build($"Cycle {cycle.Number}: {CombinationText(cycle)} {verdict} (z = {DiagramText.Signed(cycle.Z, 1)})");
     }
 
     /// <summary>The sub-network within <paramref name="depth"/> steps of some species.</summary>
@@ -75,11 +76,11 @@ public static class FigureBuilder
             Measurement measurement = vertex.Measurement!;
             if (PropertyFamilies.FamilyOf(measurement.Property) == family)
             {
-                builder.AddMeasurement(measurement, measurement.Value, highlighted: false, includeReferences: false);
+                builder.AddMeasurement(measurement, measurement.Property.Symbol(), measurement.Value, measurement.Uncertainty, highlighted: false, includeReferences: false);
             }
         }
 
-        return builder.Build($"Within {depth} step{(depth == 1 ? "" : "s")} of {string.Join(", ", centres.Select(species => species.Name))}");
+        return builder.Build($"Within {depth} step{(depth == 1 ? "" : "s")} of {string.Join(", ", centres.Select(species => FormulaMarkup.ToUnicodeText(species.Name)))}");
     }
 
     /// <summary>The enthalpy-level (Hess ladder) diagram of a route.</summary>
@@ -90,7 +91,7 @@ public static class FigureBuilder
         var start = report.Target.Terms.Where(term => term.Coefficient < Fraction.Zero).ToDictionary(term => term.Species, term => -term.Coefficient);
         (string startState, List<EnthalpyStep> steps) = Ladder(start, route.Steps.Select(step => (Label(step), step.Equation, step.Value, step.Uncertainty)).ToList());
         string symbol = report.Family.ResultProperty().Symbol();
-        return new EnthalpyRoute($"Route {route.Number}: {report.Target}", report.Target.ToString(), startState, steps, route.Uncertainty, symbol, report.Family.Unit().Symbol);
+        return new EnthalpyRoute($"Route {route.Number}: {TitleText(report.Target)}", EquationText(report.Target), startState, steps, route.Uncertainty, symbol, report.Family.Unit().Symbol);
     }
 
     /// <summary>The closure ladder of a cycle: the same picture, ending in the gap where it fails to close.</summary>
@@ -101,17 +102,74 @@ public static class FigureBuilder
         {
             ChemicalEquation scaled = member.Measurement.Equation.Scale(member.Factor);
             double c = member.Factor.ToDouble();
-            string label = $"{RationalText.Format(member.Factor)} × {member.Measurement.Id}";
+            string label = Usage(member.Measurement.Id, member.Factor);
             return (label, scaled, c * member.Measurement.Value, Math.Abs(c) * member.Measurement.Uncertainty);
         }).ToList();
         ChemicalEquation first = members[0].scaled;
         var start = first.Terms.Where(term => term.Coefficient < Fraction.Zero).ToDictionary(term => term.Species, term => -term.Coefficient);
         (string startState, List<EnthalpyStep> steps) = Ladder(start, members);
-        return new CycleClosure($"Cycle {cycle.Number}", startState, steps, cycle.Uncertainty, cycle.Z, family.ResultProperty().Symbol(), family.Unit().Symbol);
+        return new CycleClosure($"Cycle {cycle.Number}: {CombinationText(cycle)}", startState, steps, cycle.Uncertainty, cycle.Z, family.ResultProperty().Symbol(), family.Unit().Symbol);
     }
 
-    private static string Label(RouteStep step) =>
-        step.Factor == Fraction.One ? step.Measurement.Id : $"{RationalText.Format(step.Factor)} × {step.Measurement.Id}";
+    /// <summary>A step as the trade writes it: "A08", "B04 reversed", "A03 reversed, × 1/3" (the wording of <see cref="RouteStep.Operation"/>).</summary>
+    private static string Label(RouteStep step) => step.Factor == Fraction.One ? step.Measurement.Id : $"{step.Measurement.Id} {step.Operation}";
+
+    /// <summary>The same wording for a cycle member, which has a factor but no <see cref="RouteStep"/>.</summary>
+    private static string Usage(string id, Fraction factor)
+    {
+        Fraction magnitude = factor < Fraction.Zero ? -factor : factor;
+        string scale = magnitude == Fraction.One ? "" : $"× {RationalText.Format(magnitude)}";
+        return (factor < Fraction.Zero, scale.Length > 0) switch
+        {
+            (false, false) => id,
+            (true, false) => $"{id} reversed",
+            (false, true) => $"{id} {scale}",
+            _ => $"{id} reversed, {scale}",
+        };
+    }
+
+    /// <summary>A cycle as a signed combination of its measurements, e.g. "A02 + B04 − A08 + 3 C03".</summary>
+    private static string CombinationText(CycleCheck cycle)
+    {
+        var text = new StringBuilder();
+        foreach ((PreparedMeasurement measurement, Fraction factor) in cycle.Members)
+        {
+            bool negative = factor < Fraction.Zero;
+            Fraction magnitude = negative ? -factor : factor;
+            text.Append(text.Length == 0 ? (negative ? DiagramText.Minus.ToString() : "") : (negative ? $" {DiagramText.Minus} " : " + "));
+            if (magnitude != Fraction.One)
+            {
+                text.Append(Vulgar(RationalText.Format(magnitude))).Append(' ');
+            }
+
+            text.Append(measurement.Id);
+        }
+
+        return text.ToString();
+    }
+
+    /// <summary>An equation in diagram markup: arrow "→" and common fractions as "½", subscripts left to the renderer.</summary>
+    private static string EquationText(ChemicalEquation equation) =>
+        Coefficients().Replace(equation.ToString().Replace(" -> ", " → ", StringComparison.Ordinal), match => Vulgar(match.Value));
+
+    /// <summary>An equation for one-line titles: as <see cref="EquationText"/>, with Unicode sub- and superscripts ("O₂", "Cl⁻").</summary>
+    private static string TitleText(ChemicalEquation equation) => FormulaMarkup.ToUnicodeText(EquationText(equation));
+
+    /// <summary>"½" for "1/2" and the other fractions with a single-character form; anything else unchanged.</summary>
+    private static string Vulgar(string fraction) => fraction switch
+    {
+        "1/2" => "½",
+        "1/3" => "⅓",
+        "2/3" => "⅔",
+        "1/4" => "¼",
+        "3/4" => "¾",
+        "1/6" => "⅙",
+        "5/6" => "⅚",
+        _ => fraction,
+    };
+
+    [GeneratedRegex(@"(?<![\w/])\d+/\d+(?= )")]
+    private static partial Regex Coefficients();
 
     /// <summary>Orders the steps so intermediate states are physical, adding spectators (such as O2) that must be present from the start.</summary>
     private static (string Start, List<EnthalpyStep> Steps) Ladder(Dictionary<Species, Fraction> start, List<(string Label, ChemicalEquation Equation, double Value, double Uncertainty)> items)
@@ -206,7 +264,7 @@ public static class FigureBuilder
 
             if (amount != Fraction.One)
             {
-                text.Append(RationalText.Format(amount)).Append(' ');
+                text.Append(Vulgar(RationalText.Format(amount))).Append(' ');
             }
 
             text.Append(species.Name);
@@ -226,7 +284,7 @@ public static class FigureBuilder
         {
             string symbol = family.ResultProperty().Symbol();
             string sub = double.IsFinite(value)
-                ? string.Create(CultureInfo.InvariantCulture, $"{symbol} = {value:0.##} ± {uncertainty:0.##} {unit}")
+                ? $"{symbol} = {DiagramText.WithUncertainty(value, uncertainty, 2)} {unit}"
                 : $"{symbol} = ?";
             _ids.Add("target");
             _nodes.Add(NetworkNode.Target("target", sub, NetworkNodeFlags.Highlighted));
@@ -235,8 +293,8 @@ public static class FigureBuilder
                 string id = AddSpecies(term.Species, highlighted: true);
                 Fraction amount = term.Coefficient < Fraction.Zero ? -term.Coefficient : term.Coefficient;
                 _edges.Add(term.Coefficient < Fraction.Zero
-                    ? new NetworkEdge(id, "target", RationalText.Format(amount))
-                    : new NetworkEdge("target", id, RationalText.Format(amount)));
+                    ? new NetworkEdge(id, "target", Vulgar(RationalText.Format(amount)))
+                    : new NetworkEdge("target", id, Vulgar(RationalText.Format(amount))));
             }
         }
 
@@ -257,7 +315,15 @@ public static class FigureBuilder
             return id;
         }
 
-        public void AddMeasurement(Measurement measurement, double value, bool highlighted, bool includeReferences)
+        /// <summary>Adds a measurement as analysed: its value converted to the family's property (ΔU → ΔH), said so in the label.</summary>
+        public void AddMeasurement(PreparedMeasurement prepared, bool highlighted, bool includeReferences)
+        {
+            string symbol = family.ResultProperty().Symbol();
+            string given = prepared.Measurement.Property.Symbol();
+            AddMeasurement(prepared.Measurement, given == symbol ? symbol : $"{symbol} (from {given})", prepared.Value, prepared.Uncertainty, highlighted, includeReferences);
+        }
+
+        public void AddMeasurement(Measurement measurement, string symbol, double value, double uncertainty, bool highlighted, bool includeReferences)
         {
             string id = "m:" + measurement.Id;
             if (!_ids.Add(id))
@@ -276,8 +342,7 @@ public static class FigureBuilder
                 flags |= NetworkNodeFlags.Excluded;
             }
 
-            string symbol = measurement.Property.Symbol();
-            string sub = string.Create(CultureInfo.InvariantCulture, $"{symbol} = {value:0.##} ± {measurement.Uncertainty:0.##}");
+            string sub = $"{symbol} = {DiagramText.WithUncertainty(value, uncertainty, 2)}";
             _nodes.Add(NetworkNode.Measurement(measurement.Id, sub, flags) with { Id = id });
             foreach (EquationTerm term in measurement.Equation.Terms)
             {
@@ -289,8 +354,8 @@ public static class FigureBuilder
                 string species = AddSpecies(term.Species, highlighted);
                 Fraction amount = term.Coefficient < Fraction.Zero ? -term.Coefficient : term.Coefficient;
                 _edges.Add(term.Coefficient < Fraction.Zero
-                    ? new NetworkEdge(species, id, RationalText.Format(amount))
-                    : new NetworkEdge(id, species, RationalText.Format(amount)));
+                    ? new NetworkEdge(species, id, Vulgar(RationalText.Format(amount)))
+                    : new NetworkEdge(id, species, Vulgar(RationalText.Format(amount))));
             }
         }
 

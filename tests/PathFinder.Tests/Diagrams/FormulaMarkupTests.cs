@@ -65,4 +65,14 @@ public class FormulaMarkupTests
     {
         Assert.Equal("SO4 2−(aq)".Replace(" ", string.Empty, StringComparison.Ordinal), FormulaMarkup.ToPlainText("SO4^2-(aq)"));
     }
+
+    [Theory]
+    [InlineData("½ O2(g) → CO2(g)", "½ O₂(g) → CO₂(g)")]
+    [InlineData("SO4^2-(aq)", "SO₄²⁻(aq)")]
+    [InlineData("Cl-(aq) + H+(aq)", "Cl⁻(aq) + H⁺(aq)")]
+    [InlineData("Route 1 to CO(g)", "Route 1 to CO(g)")]
+    public void ToUnicodeText_WritesSubscriptsAndChargesAsUnicodeCharacters(string markup, string expected)
+    {
+        Assert.Equal(expected, FormulaMarkup.ToUnicodeText(markup));
+    }
 }

@@ -131,7 +131,7 @@ public class NetworkDiagramRendererTests
 
         Assert.False(result.IsRendered);
         Assert.Null(result.Diagram);
-        Assert.Contains("limited to 400 nodes", result.RefusalMessage, StringComparison.Ordinal);
+        Assert.Contains($"limited to {NetworkDiagramOptions.DefaultMaxNodes} nodes", result.RefusalMessage, StringComparison.Ordinal);
         Assert.Contains("narrower focus", result.RefusalMessage, StringComparison.Ordinal);
     }
 
