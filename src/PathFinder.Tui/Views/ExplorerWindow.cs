@@ -57,6 +57,7 @@ internal sealed class ExplorerWindow : Window
     private readonly TableView _suspects = NewTable();
     private readonly TableView _cycles = NewTable();
 
+    private readonly object? _statusTimer;
     private Screen _current = Screen.Measurements;
 
     public ExplorerWindow(IApplication app, ExplorerViewModel vm)
@@ -81,6 +82,16 @@ internal sealed class ExplorerWindow : Window
 
         _vm.Changed += (_, _) => RefreshAll();
         _app.Keyboard.KeyDown += OnAppKeyDown;
+        // While background work runs, the status line counts the seconds (the only redraw the timer causes).
+        _statusTimer = _app.AddTimeout(TimeSpan.FromMilliseconds(500), () =>
+        {
+            if (_vm.IsBusy)
+            {
+                _status.Text = _vm.StatusText;
+            }
+
+            return true;
+        });
         // Focus can only move once the window is running; until then the first field would keep it.
         Initialized += (_, _) => FocusCurrentScreen();
         IsRunningChanged += (_, _) => FocusCurrentScreen();
@@ -96,6 +107,10 @@ internal sealed class ExplorerWindow : Window
         if (disposing)
         {
             _app.Keyboard.KeyDown -= OnAppKeyDown;
+            if (_statusTimer is not null)
+            {
+                _app.RemoveTimeout(_statusTimer);
+            }
             foreach (View screen in _screens.Values.Where(screen => screen.SuperView is null))
             {
                 screen.Dispose();
@@ -450,10 +465,21 @@ internal sealed class ExplorerWindow : Window
 
     private static void Select(TableView table, int row) => table.Value = new TableSelection(new Point(0, row));
 
-    private static void SetTable(TableView table, IReadOnlyList<string> headers, IReadOnlyList<IReadOnlyList<string>> rows)
+    /// <summary>Shows <paramref name="rows"/> in <paramref name="table"/>, keeping the selected position.</summary>
+    /// <param name="table">The table view.</param>
+    /// <param name="headers">Column headers.</param>
+    /// <param name="rows">The rows; when it is the list already shown (same instance), nothing is rebuilt.</param>
+    /// <param name="cells">Formats one row (called only for rows drawn).</param>
+    /// <param name="reuse">Whether the cells of an unchanged list may be kept (false when they depend on other state).</param>
+    private static void SetRows<T>(TableView table, IReadOnlyList<string> headers, IReadOnlyList<T> rows, Func<T, int, IReadOnlyList<string>> cells, bool reuse = true)
     {
+        if (reuse && table.Table is RowsTableSource<T> shown && ReferenceEquals(shown.RowList, rows))
+        {
+            return;
+        }
+
         int selected = table.Value?.SelectedCell.Y ?? 0;
-        table.Table = new TextTableSource(headers, rows);
+        table.Table = new RowsTableSource<T>(headers, rows, cells);
         if (rows.Count > 0)
         {
             Select(table, Math.Clamp(selected, 0, rows.Count - 1));
@@ -467,12 +493,12 @@ internal sealed class ExplorerWindow : Window
         Title = $"PathFinder explorer - {_vm.Title}";
         _status.Text = _vm.StatusText;
         RefreshMeasurements();
-        SetTable(_species, SpeciesViewModel.Headers, _vm.Species.Rows.Select(SpeciesViewModel.Cells).ToArray());
-        SetTable(_sources, SourcesViewModel.Headers, _vm.Sources.Rows.Select(_vm.Sources.Cells).ToArray());
+        SetRows(_species, SpeciesViewModel.Headers, _vm.Species.Rows, (row, _) => SpeciesViewModel.Cells(row));
+        SetRows(_sources, SourcesViewModel.Headers, _vm.Sources.Rows, (row, _) => _vm.Sources.Cells(row), reuse: false);
         ShowSourceDetails();
         RefreshTarget();
         RefreshConsistency();
-        SetTable(_curation, CurationLogViewModel.Headers, _vm.CurationLog.Rows.Select(_vm.CurationLog.Cells).ToArray());
+        SetRows(_curation, CurationLogViewModel.Headers, _vm.CurationLog.Rows, (row, _) => _vm.CurationLog.Cells(row), reuse: false);
         string problems = _vm.CurationDiagnostics.Count == 0 ? "" : $"  {_vm.CurationDiagnostics.Count} problem(s) in the file: {_vm.CurationDiagnostics[0]}";
         _curationInfo.Text = $"Decisions file: {_vm.CurationPath} ({(_vm.HasUnsavedChanges ? "UNSAVED changes, Ctrl+S saves" : "saved")})\n" +
             $"{_vm.Curated.Excluded.Count} measurement(s) excluded now.{problems}";
@@ -481,7 +507,7 @@ internal sealed class ExplorerWindow : Window
 
     private void RefreshMeasurements()
     {
-        SetTable(_measurements, MeasurementsViewModel.Headers, _vm.Measurements.Rows.Select(row => row.Cells).ToArray());
+        SetRows(_measurements, MeasurementsViewModel.Headers, _vm.Measurements.Rows, (row, _) => row.Cells);
         _sort.Text = $"{_vm.Measurements.Rows.Count} shown, {_vm.Measurements.SortText}";
         ShowMeasurementDetails();
     }
@@ -492,7 +518,12 @@ internal sealed class ExplorerWindow : Window
     {
         int row = _sources.Value?.SelectedCell.Y ?? -1;
         SourceReport? report = row >= 0 && row < _vm.Sources.Rows.Count ? _vm.Sources.Rows[row] : null;
-        _sourceDetails.Text = string.Join("\n", _vm.Sources.Details(report));
+        IReadOnlyList<string> lines = _vm.Sources.Details(report);
+        // Only what fits is drawn; a big source can have thousands of warnings (export or `validate` lists them all).
+        const int shown = 4;
+        _sourceDetails.Text = lines.Count <= shown + 1
+            ? string.Join("\n", lines)
+            : string.Join("\n", lines.Take(shown).Append($"… and {lines.Count - shown} more line(s); `pathfinder validate` lists every warning"));
     }
 
     private void RefreshTarget()
@@ -502,7 +533,7 @@ internal sealed class ExplorerWindow : Window
         _targetCaret.Text = hasError && _vm.Target.ErrorOffset is { } offset ? new string(' ', Math.Max(0, offset)) + "^ here" : "";
         _targetError.Text = hasError ? $"INVALID: {_vm.Target.Error}" : "";
 
-        SetTable(_routes, TargetViewModel.Headers, _vm.Target.Routes.Select((route, i) => TargetViewModel.Cells(i, route)).ToArray());
+        SetRows(_routes, TargetViewModel.Headers, _vm.Target.Routes, (route, i) => TargetViewModel.Cells(i, route));
         IReadOnlyList<string> choices = _vm.Target.SpeciesChoices;
         if (_speciesPick.Source is null || _speciesPick.Source.Count != choices.Count)
         {
@@ -515,7 +546,7 @@ internal sealed class ExplorerWindow : Window
     private void RefreshConsistency()
     {
         _consistencySummary.Text = _vm.Consistency.Summary;
-        SetTable(_suspects, ConsistencyViewModel.SuspectHeaders, _vm.Consistency.Suspects.Select(_vm.Consistency.Cells).ToArray());
-        SetTable(_cycles, ConsistencyViewModel.CycleHeaders, _vm.Consistency.Cycles.Select(pair => ConsistencyViewModel.Cells(pair.Number, pair.Cycle)).ToArray());
+        SetRows(_suspects, ConsistencyViewModel.SuspectHeaders, _vm.Consistency.Suspects, (row, _) => _vm.Consistency.Cells(row));
+        SetRows(_cycles, ConsistencyViewModel.CycleHeaders, _vm.Consistency.Cycles, (pair, _) => ConsistencyViewModel.Cells(pair.Number, pair.Cycle));
     }
 }
