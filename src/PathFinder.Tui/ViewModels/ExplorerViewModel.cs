@@ -174,9 +174,10 @@ public sealed class ExplorerViewModel
         }
     }
 
-    /// <summary>Exports <paramref name="table"/> (or, for a .svg path, a diagram through the analysis) to <paramref name="path"/>.</summary>
-    /// <returns>A one-line message saying what was written, or why not.</returns>
-    public string Export(string path, TableSnapshot table, string? focusMeasurementId = null)
+    /// <summary>Exports <paramref name="table"/> (or, for a .svg path, a diagram of <paramref name="focus"/> through the analysis) to <paramref name="path"/>.</summary>
+    /// <remarks>A diagram is laid out in the background (it can take seconds); its outcome then appears in the status line.</remarks>
+    /// <returns>A one-line message saying what was written, or why not, or that the diagram is being drawn.</returns>
+    public string Export(string path, TableSnapshot table, DiagramFocus? focus = null)
     {
         ArgumentNullException.ThrowIfNull(table);
         if (string.IsNullOrWhiteSpace(path))
@@ -195,7 +196,28 @@ public sealed class ExplorerViewModel
         {
             if (format == ExportFormat.Svg)
             {
-                return Analysis is null ? Say("the analysis is not ready yet") : Say(Analysis.ExportDiagram(path, focusMeasurementId));
+                if (Analysis is not { } analysis)
+                {
+                    return Say("the analysis is not ready yet");
+                }
+
+                string target = path;
+                DiagramFocus what = focus ?? DiagramFocus.Network;
+                RunInBackground(
+                    "drawing " + Path.GetFileName(target),
+                    _ =>
+                    {
+                        try
+                        {
+                            return analysis.ExportDiagram(target, what);
+                        }
+                        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
+                        {
+                            return $"could not export: {exception.Message}";
+                        }
+                    },
+                    message => _message = message);
+                return Say($"drawing {target} in the background…");
             }
 
             AtomicFile.WriteAllText(path, TableExporter.Format(table, format.Value));

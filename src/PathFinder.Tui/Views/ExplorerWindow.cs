@@ -434,20 +434,43 @@ internal sealed class ExplorerWindow : Window
 
     private void Export()
     {
-        (TableSnapshot table, string? focus) = _current switch
-        {
-            Screen.Species => (_vm.Species.Snapshot(), null),
-            Screen.Sources => (_vm.Sources.Snapshot(), null),
-            Screen.Target => (_vm.Target.Snapshot(), null),
-            Screen.Consistency => (_vm.Consistency.Snapshot(), SelectedSuspect()?.MeasurementId),
-            Screen.Curation => (_vm.CurationLog.Snapshot(), null),
-            _ => (_vm.Measurements.Snapshot(), SelectedMeasurement()?.Measurement.Id),
-        };
+        (TableSnapshot table, DiagramFocus focus, string drawing) = ExportChoice();
         string suggestion = Path.Combine(Path.GetDirectoryName(Path.GetFullPath(_vm.NetworkPath)) ?? ".", $"{table.Title.ToLowerInvariant()}.csv");
-        string? path = Dialogs.AskText(_app, $"Export {table.Title}", "File path: .csv, .json or .md writes this table; .svg writes a diagram (if available).", suggestion);
+        string? path = Dialogs.AskText(_app, $"Export {table.Title}", $"File path: .csv, .json or .md writes this table; .svg draws {drawing}.", suggestion);
         if (path is not null)
         {
             _vm.Export(path, table, focus);
+        }
+    }
+
+    /// <summary>The table of the current screen and what a diagram exported from here shows.</summary>
+    private (TableSnapshot Table, DiagramFocus Focus, string Drawing) ExportChoice()
+    {
+        switch (_current)
+        {
+            case Screen.Species:
+                return (_vm.Species.Snapshot(), DiagramFocus.Network, "the whole network");
+            case Screen.Sources:
+                return (_vm.Sources.Snapshot(), DiagramFocus.Network, "the whole network");
+            case Screen.Curation:
+                return (_vm.CurationLog.Snapshot(), DiagramFocus.Network, "the whole network");
+            case Screen.Target:
+                int route = _routes.Value?.SelectedCell.Y ?? -1;
+                return route >= 0 && route < _vm.Target.Routes.Count
+                    ? (_vm.Target.Snapshot(), new DiagramFocus(Route: _vm.Target.Routes[route]), $"route {route + 1} (network and levels)")
+                    : (_vm.Target.Snapshot(), DiagramFocus.Network, "the whole network (no route selected)");
+            case Screen.Consistency when _cycles.HasFocus:
+                int cycle = _cycles.Value?.SelectedCell.Y ?? -1;
+                IReadOnlyList<(int Number, CycleReport Cycle)> cycles = _vm.Consistency.Cycles;
+                return cycle >= 0 && cycle < cycles.Count
+                    ? (_vm.Consistency.CycleSnapshot(), new DiagramFocus(Cycle: cycles[cycle].Cycle), $"cycle {cycles[cycle].Number} (network and closure)")
+                    : (_vm.Consistency.CycleSnapshot(), DiagramFocus.Network, "the whole network");
+            case Screen.Consistency:
+                string? suspect = SelectedSuspect()?.MeasurementId;
+                return (_vm.Consistency.Snapshot(), new DiagramFocus(MeasurementId: suspect), suspect is null ? "the whole network" : $"the neighbourhood of {suspect}");
+            default:
+                string? id = SelectedMeasurement()?.Measurement.Id;
+                return (_vm.Measurements.Snapshot(), new DiagramFocus(MeasurementId: id), id is null ? "the whole network" : $"the neighbourhood of {id}");
         }
     }
 
