@@ -43,7 +43,7 @@ public static class ExplorerBenchmark
                 Seed = seed,
                 OutlierFraction = 0.02,
             });
-            SyntheticNetworkGenerator.Write(synthetic, folder);
+            WriteNetwork(synthetic, folder);
             output.WriteLine(string.Create(inv, $"explorer: {species} species, {measurements} measurements, seed {seed}; window 100x30, ansi driver (headless)"));
             var timings = new Timings();
             Drive(folder, timings, output);
@@ -76,6 +76,7 @@ public static class ExplorerBenchmark
         var watch = Stopwatch.StartNew();
         var vm = new ExplorerViewModel(folder, SolvedAnalysis.Analyzer, dispatcher);
         timings.Add("open: read network, first rows (UI thread)", watch.Elapsed.TotalMilliseconds, double.NaN);
+        output.WriteLine($"  opened: {vm.Title}");
         var analysisClock = Stopwatch.StartNew();
         using ExplorerWindow window = ExplorerApp.CreateWindow(app, vm);
         watch.Restart();
@@ -184,6 +185,24 @@ public static class ExplorerBenchmark
         }
 
         app.End(token!);
+    }
+
+    /// <summary>Writes the network as one CSV file, quoting the equations.</summary>
+    /// <remarks>
+    /// <c>SyntheticNetworkGenerator.Write</c> leaves the equation unquoted, so every row with C(cr,graphite) splits into
+    /// nine fields and is rejected on reading (25 038 of 30 000 rows at seed 1); until that is fixed the benchmark writes its own file.
+    /// </remarks>
+    private static void WriteNetwork(SyntheticNetwork synthetic, string folder)
+    {
+        Directory.CreateDirectory(folder);
+        var data = new System.Text.StringBuilder();
+        data.AppendLine("id,equation,property,value,uncertainty,unit,temperature,source");
+        foreach (Measurement m in synthetic.Network.Measurements)
+        {
+            data.AppendLine(string.Create(CultureInfo.InvariantCulture, $"{m.Id},\"{m.Equation}\",dH,{m.Value:R},{m.Uncertainty:R},kJ/mol,298.15,{m.Source}"));
+        }
+
+        File.WriteAllText(Path.Combine(folder, "measurements.csv"), data.ToString());
     }
 
     private static void Press(IApplication app, Timings timings, string name, Key key) => Time(app, timings, name, () => app.InjectKey(key));
