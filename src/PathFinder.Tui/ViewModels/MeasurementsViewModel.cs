@@ -89,7 +89,8 @@ public sealed class MeasurementsViewModel
         Measurement m = row.Measurement;
         var lines = new List<string>
         {
-            $"{m.Id}  {Quantities.ThermoProperties.Code(m.Property)} = {Display.ValueWithUncertainty(m.Value, m.Uncertainty)} {Quantities.ThermoProperties.CanonicalUnit(m.Property)}  at {Display.Number(m.Temperature, 2)} K  [{m.Location}]",
+            $"{m.Id}  {Quantities.ThermoProperties.Code(m.Property)} = {Display.ValueWithUncertainty(m.Value, m.Uncertainty)} {Quantities.ThermoProperties.CanonicalUnit(m.Property)}  at {Display.Number(m.Temperature, 2)} K  from {m.Source}",
+            $"  {m.Location}",
             $"status {row.StatusText}; r {Display.Z(row.Assessment?.NormalizedResidual)}; rest of network predicts {Display.ValueWithUncertainty(row.Assessment?.LeaveOneOutValue, row.Assessment?.LeaveOneOutUncertainty)}",
         };
         if (row.ExclusionReason is not null)

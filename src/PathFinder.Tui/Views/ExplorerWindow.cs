@@ -213,7 +213,7 @@ internal sealed class ExplorerWindow : Window
     {
         var screen = new View { X = 0, Y = 0, Width = Dim.Fill(), Height = Dim.Fill(), CanFocus = true };
         var suspectsFrame = new FrameView { Title = "Suspects (Enter: its cycles, Ctrl+G: measurement, Ctrl+J: source)", X = 0, Y = 1, Width = Dim.Fill(), Height = Dim.Percent(45) };
-        var cyclesFrame = new FrameView { Title = "Cycles", X = 0, Y = Pos.Bottom(suspectsFrame), Width = Dim.Fill(), Height = Dim.Fill() };
+        var cyclesFrame = new FrameView { Title = "Cycles (Tab here; Ctrl+X .svg draws the selected one)", X = 0, Y = Pos.Bottom(suspectsFrame), Width = Dim.Fill(), Height = Dim.Fill() };
         _suspects.Height = Dim.Fill();
         _cycles.Height = Dim.Fill();
         suspectsFrame.Add(_suspects);
@@ -535,7 +535,14 @@ internal sealed class ExplorerWindow : Window
         ShowMeasurementDetails();
     }
 
-    private void ShowMeasurementDetails() => _measurementDetails.Text = string.Join("\n", _vm.Measurements.Details(SelectedMeasurement()));
+    private void ShowMeasurementDetails() => _measurementDetails.Text = string.Join("\n", _vm.Measurements.Details(SelectedMeasurement()).Select(Fit));
+
+    /// <summary>Cuts a detail line to the screen width with "…", so one long line never wraps over the next.</summary>
+    private string Fit(string line)
+    {
+        int width = Math.Max(20, _app.Screen.Width - 2);
+        return line.Length <= width ? line : string.Concat(line.AsSpan(0, width - 1), "…");
+    }
 
     private void ShowSourceDetails()
     {
@@ -545,8 +552,8 @@ internal sealed class ExplorerWindow : Window
         // Only what fits is drawn; a big source can have thousands of warnings (export or `validate` lists them all).
         const int shown = 4;
         _sourceDetails.Text = lines.Count <= shown + 1
-            ? string.Join("\n", lines)
-            : string.Join("\n", lines.Take(shown).Append($"… and {lines.Count - shown} more line(s); `pathfinder validate` lists every warning"));
+            ? string.Join("\n", lines.Select(Fit))
+            : string.Join("\n", lines.Take(shown).Select(Fit).Append($"… and {lines.Count - shown} more line(s); `pathfinder validate` lists every warning"));
     }
 
     private void RefreshTarget()
