@@ -42,7 +42,8 @@ public interface INetworkAnalysis
     /// <param name="cancellationToken">Cancels a long search.</param>
     TargetReport FindRoutes(ChemicalEquation target, ThermoProperty property, int maxRoutes, CancellationToken cancellationToken);
 
-    /// <summary>Writes an SVG diagram of the network (or of the neighbourhood of <paramref name="focusMeasurementId"/>) to <paramref name="path"/>.</summary>
+    /// <summary>Writes SVG diagrams of <paramref name="focus"/> (a route, a cycle, a neighbourhood or the network) to <paramref name="path"/>.</summary>
+    /// <remarks>May take seconds (graph layout): call it off the UI thread. A route or cycle also gets its level diagram beside <paramref name="path"/>.</remarks>
     /// <returns>A one-line message saying what was written, or why nothing was.</returns>
-    string ExportDiagram(string path, string? focusMeasurementId);
+    string ExportDiagram(string path, DiagramFocus focus);
 }

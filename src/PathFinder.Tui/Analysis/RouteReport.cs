@@ -4,4 +4,11 @@ namespace PathFinder.Tui.Analysis;
 /// <param name="Steps">The steps in order.</param>
 /// <param name="Value">Σ fᵢ·xᵢ in the canonical unit; null when not computed.</param>
 /// <param name="Uncertainty">√(Σ fᵢ²·uᵢ²); null when not computed.</param>
-public sealed record RouteReport(IReadOnlyList<RouteStep> Steps, double? Value, double? Uncertainty);
+/// <param name="Cancelled">Names of the intermediates: species that appear in the steps but cancel in the sum; null when not computed.</param>
+/// <param name="Sum">The sum of the scaled step equations as text (it equals the target); null when not computed.</param>
+public sealed record RouteReport(
+    IReadOnlyList<RouteStep> Steps,
+    double? Value,
+    double? Uncertainty,
+    IReadOnlyList<string>? Cancelled = null,
+    string? Sum = null);

@@ -1,4 +1,5 @@
 using System.Globalization;
+using System.Runtime.CompilerServices;
 using PathFinder.Analysis;
 using PathFinder.Chemistry;
 using PathFinder.Data;
@@ -17,6 +18,8 @@ public sealed class SolvedAnalysis : INetworkAnalysis
 {
     private readonly NetworkReadResult _data;
     private readonly ConsistencyReport _report;
+    private readonly Dictionary<CycleReport, (CycleCheck Check, PropertyFamily Family)> _cycleSources = new(ReferenceEqualityComparer.Instance);
+    private readonly ConditionalWeakTable<RouteReport, RouteSource> _routeSources = [];
 
     private SolvedAnalysis(ReactionNetwork network, NetworkReadResult data, ConsistencyReport report)
     {
@@ -45,13 +48,18 @@ public sealed class SolvedAnalysis : INetworkAnalysis
                 suspects.Add(new SuspectReport(suspect.Measurement.Id, suspect.NormalizedResidual, suspect.Predicted, suspect.PredictedUncertainty, reason));
             }
 
-            cycles.AddRange(family.Cycles.Select(cycle => new CycleReport(
-                cycle.Members.Select(member => member.Measurement.Id).ToArray(),
-                cycle.Members.Select(member => RationalText.Format(member.Factor)).ToArray(),
-                cycle.Residual,
-                cycle.Uncertainty,
-                double.IsFinite(cycle.Z) ? cycle.Z : null,
-                cycle.Flagged)));
+            foreach (CycleCheck cycle in family.Cycles)
+            {
+                var shown = new CycleReport(
+                    cycle.Members.Select(member => member.Measurement.Id).ToArray(),
+                    cycle.Members.Select(member => RationalText.Format(member.Factor)).ToArray(),
+                    cycle.Residual,
+                    cycle.Uncertainty,
+                    double.IsFinite(cycle.Z) ? cycle.Z : null,
+                    cycle.Flagged);
+                cycles.Add(shown);
+                _cycleSources[shown] = (cycle, family.Family);
+            }
 
             SolveReport solved = NetworkSolver.Report(family.Model, family.Adjusted, adjusted: true, family.Adjustments, []);
             ThermoProperty property = family.Family == PropertyFamily.Entropy ? ThermoProperty.AbsoluteEntropy : family.Family.ResultProperty();
@@ -125,10 +133,18 @@ public sealed class SolvedAnalysis : INetworkAnalysis
             target,
             new RouteSearchOptions { MaxRoutes = maxRoutes, TimeBudget = TimeSpan.FromSeconds(10), CancellationToken = cancellationToken },
             solved.Adjusted);
-        var routes = report.Routes.Select(route => new RouteReport(
-            route.Steps.Select(step => new RouteStep(step.Measurement.Id, RationalText.Format(step.Factor), step.Equation.ToString(), step.Value)).ToArray(),
-            route.Value,
-            route.Uncertainty)).ToArray();
+        var routes = report.Routes.Select(route =>
+        {
+            var shown = new RouteReport(
+                route.Steps.Select(step => new RouteStep(step.Measurement.Id, RationalText.Format(step.Factor), step.Equation.ToString(), step.Value)).ToArray(),
+                route.Value,
+                route.Uncertainty,
+                route.Cancelled.Select(species => species.Name).ToArray(),
+                route.Sum.ToString());
+            // Kept so a diagram of exactly this route can be drawn later (the table lives as long as the route shown).
+            _routeSources.AddOrUpdate(shown, new RouteSource(report, route));
+            return shown;
+        }).ToArray();
         string message = report.UnreachableSpecies.Count > 0
             ? $"no {family.ResultProperty().Code()} measurement contains {string.Join(", ", report.UnreachableSpecies.Select(species => species.Name))}"
             : string.Create(CultureInfo.InvariantCulture, $"{report.RoutesFound} route(s); {(report.Complete ? $"complete up to {report.MaxSteps} steps" : "incomplete: " + report.IncompleteReason)}; {report.IndependentRoutes} independent");
@@ -136,16 +152,46 @@ public sealed class SolvedAnalysis : INetworkAnalysis
     }
 
     /// <inheritdoc/>
-    public string ExportDiagram(string path, string? focusMeasurementId)
+    public string ExportDiagram(string path, DiagramFocus focus)
     {
         ArgumentNullException.ThrowIfNull(path);
+        ArgumentNullException.ThrowIfNull(focus);
         var marks = new FigureMarks(
             Suspects.Select(suspect => suspect.MeasurementId).ToHashSet(StringComparer.Ordinal),
             new HashSet<string>(StringComparer.Ordinal));
+        if (focus.Route is not null)
+        {
+            if (!_routeSources.TryGetValue(focus.Route, out RouteSource? source))
+            {
+                return "that route is from an older analysis: search again, then export";
+            }
+
+            string unit = source.Report.Family.Unit().Symbol;
+            return Write(
+                path,
+                FigureBuilder.RouteNetwork(source.Report, source.Route, unit, marks),
+                LevelDiagramRenderer.RenderRoute(FigureBuilder.RouteLevels(source.Report, source.Route)).Diagram,
+                "levels");
+        }
+
+        if (focus.Cycle is not null)
+        {
+            if (!_cycleSources.TryGetValue(focus.Cycle, out (CycleCheck Check, PropertyFamily Family) cycle))
+            {
+                return "that cycle is from an older analysis";
+            }
+
+            return Write(
+                path,
+                FigureBuilder.CycleNetwork(cycle.Check, cycle.Family, marks),
+                LevelDiagramRenderer.RenderCycle(FigureBuilder.CycleLevels(cycle.Check, cycle.Family)).Diagram,
+                "closure");
+        }
+
         NetworkGraph graph = NetworkGraph.Build(Network);
         Species[] centres;
         PropertyFamily family = PropertyFamily.Enthalpy;
-        if (focusMeasurementId is not null && Network.TryGetMeasurement(focusMeasurementId, out Measurement measurement))
+        if (focus.MeasurementId is not null && Network.TryGetMeasurement(focus.MeasurementId, out Measurement measurement))
         {
             centres = measurement.Equation.Terms.Select(term => term.Species).Where(species => !ReferenceStates.HasZeroFormationProperties(species)).ToArray();
             family = PropertyFamilies.FamilyOf(measurement.Property);
@@ -155,16 +201,38 @@ public sealed class SolvedAnalysis : INetworkAnalysis
             centres = Network.Species.Where(species => !ReferenceStates.HasZeroFormationProperties(species)).ToArray();
         }
 
-        NetworkDiagram diagram = FigureBuilder.Neighbourhood(graph, centres, 1, family, marks);
-        NetworkDiagramResult result = NetworkDiagramRenderer.Render(diagram);
-        if (!result.IsRendered)
+        return Write(path, FigureBuilder.Neighbourhood(graph, centres, 1, family, marks), null, "");
+    }
+
+    /// <summary>Renders <paramref name="network"/> to <paramref name="path"/> and <paramref name="levels"/> beside it as <c>name-suffix.svg</c>.</summary>
+    private static string Write(string path, NetworkDiagram network, SvgDiagram? levels, string suffix)
+    {
+        var written = new List<string>();
+        string? refusal = null;
+        NetworkDiagramResult result = NetworkDiagramRenderer.Render(network);
+        if (result.IsRendered)
         {
-            return result.RefusalMessage ?? "the diagram could not be drawn";
+            result.Diagram!.Save(path);
+            written.Add($"{path} (network)");
+        }
+        else
+        {
+            refusal = result.RefusalMessage ?? "the network diagram could not be drawn";
         }
 
-        result.Diagram!.Save(path);
-        return $"wrote {path}";
+        if (levels is not null)
+        {
+            string levelsPath = Path.Combine(Path.GetDirectoryName(path) ?? "", $"{Path.GetFileNameWithoutExtension(path)}-{suffix}.svg");
+            levels.Save(levelsPath);
+            written.Add($"{levelsPath} ({suffix})");
+        }
+
+        string wrote = written.Count > 0 ? "wrote " + string.Join(" and ", written) : "";
+        return refusal is null ? wrote : written.Count > 0 ? $"{wrote}; network diagram refused: {refusal}" : refusal;
     }
+
+    /// <summary>The core report and route behind a route shown.</summary>
+    private sealed record RouteSource(PathFinder.Analysis.RouteReport Report, ExplainedRoute Route);
 
     private static SourceReport SourceOf(ReactionNetwork network, IReadOnlyList<Diagnostic> diagnostics, ConsistencyReport report, string source)
     {

@@ -7,6 +7,10 @@ public sealed class ConsistencyViewModel
 {
     private readonly ExplorerViewModel _owner;
 
+    private (int Number, CycleReport Cycle)[]? _cycles;
+    private INetworkAnalysis? _cyclesOf;
+    private string? _cyclesFilter;
+
     internal ConsistencyViewModel(ExplorerViewModel owner) => _owner = owner;
 
     /// <summary>Headers of the suspects table.</summary>
@@ -22,11 +26,25 @@ public sealed class ConsistencyViewModel
     public IReadOnlyList<SuspectReport> Suspects => _owner.Analysis?.Suspects ?? [];
 
     /// <summary>The cycles shown (all, or those through <see cref="CycleFilter"/>), with their number in the full list.</summary>
-    public IReadOnlyList<(int Number, CycleReport Cycle)> Cycles =>
-        (_owner.Analysis?.Cycles ?? [])
-            .Select((cycle, i) => (Number: i + 1, Cycle: cycle))
-            .Where(pair => CycleFilter is null || pair.Cycle.MeasurementIds.Contains(CycleFilter, StringComparer.Ordinal))
-            .ToArray();
+    /// <remarks>The list is kept until the analysis or the filter changes, so the table is not rebuilt per keystroke.</remarks>
+    public IReadOnlyList<(int Number, CycleReport Cycle)> Cycles
+    {
+        get
+        {
+            INetworkAnalysis? analysis = _owner.Analysis;
+            if (_cycles is null || !ReferenceEquals(_cyclesOf, analysis) || _cyclesFilter != CycleFilter)
+            {
+                _cycles = (analysis?.Cycles ?? [])
+                    .Select((cycle, i) => (Number: i + 1, Cycle: cycle))
+                    .Where(pair => CycleFilter is null || pair.Cycle.MeasurementIds.Contains(CycleFilter, StringComparer.Ordinal))
+                    .ToArray();
+                _cyclesOf = analysis;
+                _cyclesFilter = CycleFilter;
+            }
+
+            return _cycles;
+        }
+    }
 
     /// <summary>A one-line summary, e.g. "2 of 5 cycles flagged, 1 suspect" or that nothing was analysed.</summary>
     public string Summary

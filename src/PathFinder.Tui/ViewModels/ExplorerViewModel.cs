@@ -17,7 +17,8 @@ public sealed class ExplorerViewModel
     private readonly NetworkAnalyzer _analyzer;
     private readonly IUiDispatcher _dispatcher;
     private readonly Func<DateOnly> _today;
-    private readonly HashSet<string> _running = new(StringComparer.Ordinal);
+    private readonly Dictionary<string, long> _running = new(StringComparer.Ordinal);
+    private readonly Func<long> _clock;
     private readonly List<Task> _tasks = [];
     private CancellationTokenSource? _analysisCancel;
     private int _analysisVersion;
@@ -30,6 +31,7 @@ public sealed class ExplorerViewModel
         _analyzer = analyzer ?? throw new ArgumentNullException(nameof(analyzer));
         _dispatcher = dispatcher ?? throw new ArgumentNullException(nameof(dispatcher));
         _today = today ?? (() => DateOnly.FromDateTime(DateTime.Now));
+        _clock = System.Diagnostics.Stopwatch.GetTimestamp;
         NetworkPath = networkPath;
         Data = NetworkReader.Read(networkPath);
         CurationPath = CurationFile.PathFor(networkPath);
@@ -107,7 +109,7 @@ public sealed class ExplorerViewModel
     {
         get
         {
-            string work = IsBusy ? $"computing: {string.Join(", ", _running)}…" : Analysis is null ? "no analysis yet" : "ready";
+            string work = IsBusy ? $"computing: {string.Join(", ", _running.Select(Elapsed))}…" : Analysis is null ? "no analysis yet" : "ready";
             string excluded = $"{Curated.Excluded.Count} excluded";
             string unsaved = HasUnsavedChanges ? "UNSAVED (Ctrl+S saves)" : "saved";
             string message = _message.Length > 0 ? $" | {_message}" : "";
@@ -139,7 +141,7 @@ public sealed class ExplorerViewModel
             return Fail($"{id} is already excluded");
         }
 
-        ApplyCuration(Curation.Exclude(id, reason, _today()), $"excluded {id}");
+        ApplyCuration(Curation.Exclude(id, reason, _today()), id, $"excluded {id}");
         return "";
     }
 
@@ -152,7 +154,7 @@ public sealed class ExplorerViewModel
             return Fail($"{id} is not excluded");
         }
 
-        ApplyCuration(Curation.Include(id, reason ?? "", _today()), $"re-included {id}");
+        ApplyCuration(Curation.Include(id, reason ?? "", _today()), id, $"re-included {id}");
         return "";
     }
 
@@ -172,9 +174,10 @@ public sealed class ExplorerViewModel
         }
     }
 
-    /// <summary>Exports <paramref name="table"/> (or, for a .svg path, a diagram through the analysis) to <paramref name="path"/>.</summary>
-    /// <returns>A one-line message saying what was written, or why not.</returns>
-    public string Export(string path, TableSnapshot table, string? focusMeasurementId = null)
+    /// <summary>Exports <paramref name="table"/> (or, for a .svg path, a diagram of <paramref name="focus"/> through the analysis) to <paramref name="path"/>.</summary>
+    /// <remarks>A diagram is laid out in the background (it can take seconds); its outcome then appears in the status line.</remarks>
+    /// <returns>A one-line message saying what was written, or why not, or that the diagram is being drawn.</returns>
+    public string Export(string path, TableSnapshot table, DiagramFocus? focus = null)
     {
         ArgumentNullException.ThrowIfNull(table);
         if (string.IsNullOrWhiteSpace(path))
@@ -193,7 +196,28 @@ public sealed class ExplorerViewModel
         {
             if (format == ExportFormat.Svg)
             {
-                return Analysis is null ? Say("the analysis is not ready yet") : Say(Analysis.ExportDiagram(path, focusMeasurementId));
+                if (Analysis is not { } analysis)
+                {
+                    return Say("the analysis is not ready yet");
+                }
+
+                string target = path;
+                DiagramFocus what = focus ?? DiagramFocus.Network;
+                RunInBackground(
+                    "drawing " + Path.GetFileName(target),
+                    _ =>
+                    {
+                        try
+                        {
+                            return analysis.ExportDiagram(target, what);
+                        }
+                        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
+                        {
+                            return $"could not export: {exception.Message}";
+                        }
+                    },
+                    message => _message = message);
+                return Say($"drawing {target} in the background…");
             }
 
             AtomicFile.WriteAllText(path, TableExporter.Format(table, format.Value));
@@ -215,19 +239,40 @@ public sealed class ExplorerViewModel
         IsAnalysisStale = true;
         ReactionNetwork network = Curated.Network;
         NetworkReadResult data = Data;
+        CurationSet curation = Curation;
         RunInBackground(
             "analysis",
-            _ => _analyzer(network, data, cancel.Token),
-            analysis =>
+            token =>
+            {
+                INetworkAnalysis analysis = _analyzer(network, data, cancel.Token);
+                // The rows and their search keys are made here too, so the UI thread only swaps them in.
+                MeasurementRow[] rows = BuildRows(data.Network, curation, analysis);
+                foreach (MeasurementRow row in rows)
+                {
+                    token.ThrowIfCancellationRequested();
+                    _ = row.SearchKey;
+                }
+
+                return (analysis, rows, curation);
+            },
+            result =>
             {
                 if (version != _analysisVersion)
                 {
                     return;
                 }
 
-                Analysis = analysis;
+                Analysis = result.analysis;
                 IsAnalysisStale = false;
-                Measurements.Refresh();
+                // A decision made while this analysis ran is already in Curation; rebuild the rows from it then.
+                if (ReferenceEquals(result.curation, Curation))
+                {
+                    Measurements.SetAllRows(result.rows);
+                }
+                else
+                {
+                    Measurements.Refresh();
+                }
             },
             null,
             cancel.Token);
@@ -264,12 +309,12 @@ public sealed class ExplorerViewModel
         ArgumentNullException.ThrowIfNull(work);
         ArgumentNullException.ThrowIfNull(apply);
         string label = what;
-        for (int i = 2; _running.Contains(label); i++)
+        for (int i = 2; _running.ContainsKey(label); i++)
         {
             label = $"{what} ({i})";
         }
 
-        _running.Add(label);
+        _running.Add(label, _clock());
         RaiseChanged();
         var completion = new TaskCompletionSource(TaskCreationOptions.RunContinuationsAsynchronously);
         lock (_tasks)
@@ -310,24 +355,44 @@ public sealed class ExplorerViewModel
     }
 
     /// <summary>The rows of every measurement (excluded ones too), in data order.</summary>
-    internal IEnumerable<MeasurementRow> AllMeasurementRows()
+    internal IEnumerable<MeasurementRow> AllMeasurementRows() => BuildRows(Data.Network, Curation, Analysis);
+
+    /// <summary>The row of one measurement under the current curation and analysis.</summary>
+    internal MeasurementRow RowOf(Measurement measurement) => RowOf(measurement, Curation, Analysis?.Measurements);
+
+    /// <summary>The time since <see cref="System.Diagnostics.Stopwatch.GetTimestamp"/> gave <paramref name="start"/>, as "label 3 s".</summary>
+    private string Elapsed(KeyValuePair<string, long> running)
     {
-        IReadOnlyDictionary<string, MeasurementAssessment>? assessments = Analysis?.Measurements;
-        foreach (Measurement measurement in Data.Network.Measurements)
-        {
-            CurationDecision? decision = Curation.CurrentDecision(measurement.Id);
-            string? reason = decision is { Action: CurationAction.Exclude } ? decision.Reason : null;
-            MeasurementAssessment? assessment = reason is null && assessments is not null && assessments.TryGetValue(measurement.Id, out MeasurementAssessment? found) ? found : null;
-            yield return new MeasurementRow(measurement, assessment, reason);
-        }
+        TimeSpan elapsed = System.Diagnostics.Stopwatch.GetElapsedTime(running.Value, _clock());
+        return string.Create(System.Globalization.CultureInfo.InvariantCulture, $"{running.Key} {elapsed.TotalSeconds:0} s");
     }
 
-    private void ApplyCuration(CurationSet curation, string message)
+    private static MeasurementRow[] BuildRows(ReactionNetwork network, CurationSet curation, INetworkAnalysis? analysis)
+    {
+        IReadOnlyDictionary<string, MeasurementAssessment>? assessments = analysis?.Measurements;
+        var rows = new MeasurementRow[network.Measurements.Count];
+        for (int i = 0; i < rows.Length; i++)
+        {
+            rows[i] = RowOf(network.Measurements[i], curation, assessments);
+        }
+
+        return rows;
+    }
+
+    private static MeasurementRow RowOf(Measurement measurement, CurationSet curation, IReadOnlyDictionary<string, MeasurementAssessment>? assessments)
+    {
+        CurationDecision? decision = curation.CurrentDecision(measurement.Id);
+        string? reason = decision is { Action: CurationAction.Exclude } ? decision.Reason : null;
+        MeasurementAssessment? assessment = reason is null && assessments is not null && assessments.TryGetValue(measurement.Id, out MeasurementAssessment? found) ? found : null;
+        return new MeasurementRow(measurement, assessment, reason);
+    }
+
+    private void ApplyCuration(CurationSet curation, string id, string message)
     {
         Curation = curation;
         Curated = curation.Apply(Data.Network);
         _message = message;
-        Measurements.Refresh();
+        Measurements.RefreshRow(id);
         Recompute();
     }
 

@@ -5,6 +5,11 @@ public sealed class MeasurementsViewModel
 {
     private readonly ExplorerViewModel _owner;
 
+    private readonly Dictionary<(int Column, bool Descending), MeasurementRow[]> _sorted = [];
+    private MeasurementRow[] _all = [];
+    private string? _filteredBy;
+    private MeasurementRow[]? _filteredOrder;
+
     internal MeasurementsViewModel(ExplorerViewModel owner) => _owner = owner;
 
     /// <summary>The index of the normalized residual column (sorted by magnitude, missing values last).</summary>
@@ -35,7 +40,7 @@ public sealed class MeasurementsViewModel
     public void SetFilter(string text)
     {
         Filter = text ?? "";
-        Refresh();
+        Apply();
     }
 
     /// <summary>Sorts by <paramref name="column"/>; sorting by the same column again reverses the order.</summary>
@@ -48,7 +53,7 @@ public sealed class MeasurementsViewModel
 
         SortDescending = column == SortColumn && !SortDescending;
         SortColumn = column;
-        Refresh();
+        Apply();
     }
 
     /// <summary>Moves the sort to the next column (wrapping to data order).</summary>
@@ -56,11 +61,22 @@ public sealed class MeasurementsViewModel
     {
         SortColumn = SortColumn + 1 >= Headers.Count ? -1 : SortColumn + 1;
         SortDescending = false;
-        Refresh();
+        Apply();
     }
 
     /// <summary>The position of the row with <paramref name="id"/> in <see cref="Rows"/>, or -1.</summary>
-    public int IndexOf(string id) => Rows.ToList().FindIndex(row => row.Measurement.Id == id);
+    public int IndexOf(string id)
+    {
+        for (int i = 0; i < Rows.Count; i++)
+        {
+            if (Rows[i].Measurement.Id == id)
+            {
+                return i;
+            }
+        }
+
+        return -1;
+    }
 
     /// <summary>Detail lines for a row: the equation as written, unit, temperature, location, notes, analysis, exclusion.</summary>
     public IReadOnlyList<string> Details(MeasurementRow? row)
@@ -73,7 +89,8 @@ public sealed class MeasurementsViewModel
         Measurement m = row.Measurement;
         var lines = new List<string>
         {
-            $"{m.Id}  {Quantities.ThermoProperties.Code(m.Property)} = {Display.ValueWithUncertainty(m.Value, m.Uncertainty)} {Quantities.ThermoProperties.CanonicalUnit(m.Property)}  at {Display.Number(m.Temperature, 2)} K  [{m.Location}]",
+            $"{m.Id}  {Quantities.ThermoProperties.Code(m.Property)} = {Display.ValueWithUncertainty(m.Value, m.Uncertainty)} {Quantities.ThermoProperties.CanonicalUnit(m.Property)}  at {Display.Number(m.Temperature, 2)} K  from {m.Source}",
+            $"  {m.Location}",
             $"status {row.StatusText}; r {Display.Z(row.Assessment?.NormalizedResidual)}; rest of network predicts {Display.ValueWithUncertainty(row.Assessment?.LeaveOneOutValue, row.Assessment?.LeaveOneOutUncertainty)}",
         };
         if (row.ExclusionReason is not null)
@@ -92,35 +109,112 @@ public sealed class MeasurementsViewModel
     /// <summary>The table as shown (for export).</summary>
     public TableSnapshot Snapshot() => new("Measurements", Headers, Rows.Select(row => row.Cells).ToArray());
 
-    internal void Refresh()
+    /// <summary>Rebuilds every row from the data, the curation and the analysis, then filters and sorts again.</summary>
+    internal void Refresh() => SetAllRows(_owner.AllMeasurementRows().ToArray());
+
+    /// <summary>Replaces every row (built off the UI thread after an analysis), then filters and sorts again.</summary>
+    internal void SetAllRows(MeasurementRow[] rows)
     {
-        IEnumerable<MeasurementRow> rows = _owner.AllMeasurementRows();
-        if (Filter.Trim().Length > 0)
+        _all = rows;
+        _sorted.Clear();
+        _filteredBy = null;
+        Apply();
+    }
+
+    /// <summary>Rebuilds the one row of <paramref name="id"/> (after a curation decision), keeping every other row and the sort caches.</summary>
+    internal void RefreshRow(string id)
+    {
+        int at = Array.FindIndex(_all, row => row.Measurement.Id == id);
+        if (at < 0)
         {
-            string filter = Filter.Trim();
-            rows = rows.Where(row => row.Cells.Any(cell => cell.Contains(filter, StringComparison.OrdinalIgnoreCase))
-                || row.Measurement.EquationText.Contains(filter, StringComparison.OrdinalIgnoreCase));
+            Refresh();
+            return;
         }
 
-        if (SortColumn >= 0)
+        MeasurementRow updated = _owner.RowOf(_all[at].Measurement);
+        var all = (MeasurementRow[])_all.Clone();
+        all[at] = updated;
+        _all = all;
+        // The status column changes for this row: sorted orders by it must be rebuilt; the others only swap the row.
+        foreach ((int Column, bool Descending) key in _sorted.Keys.ToArray())
         {
-            Comparison<MeasurementRow> compare = Comparer(SortColumn);
-            var list = rows.ToList();
-            // A stable sort keeps data order among equal keys.
-            list = SortDescending
-                ? list.Select((row, i) => (row, i)).OrderBy(p => p.row, Comparer<MeasurementRow>.Create((a, b) => compare(b, a))).ThenBy(p => p.i).Select(p => p.row).ToList()
-                : list.Select((row, i) => (row, i)).OrderBy(p => p.row, Comparer<MeasurementRow>.Create(compare)).ThenBy(p => p.i).Select(p => p.row).ToList();
-            rows = list;
+            if (key.Column is 1 or ResidualColumn)
+            {
+                _sorted.Remove(key);
+            }
+            else
+            {
+                _sorted[key] = _sorted[key].Select(row => ReferenceEquals(row.Measurement, updated.Measurement) ? updated : row).ToArray();
+            }
         }
 
-        Rows = rows.ToArray();
+        _filteredBy = null;
+        Apply();
+    }
+
+    /// <summary>Filters the sorted rows; a filter that extends the previous one only searches the rows already shown.</summary>
+    private void Apply()
+    {
+        MeasurementRow[] ordered = Ordered();
+        string filter = Filter.Trim().ToLowerInvariant();
+        if (filter.Length == 0)
+        {
+            Rows = ordered;
+            _filteredBy = null;
+            return;
+        }
+
+        IReadOnlyList<MeasurementRow> candidates = _filteredBy is { } previous && ReferenceEquals(_filteredOrder, ordered) && filter.Contains(previous, StringComparison.Ordinal)
+            ? Rows
+            : ordered;
+        var shown = new List<MeasurementRow>();
+        foreach (MeasurementRow row in candidates)
+        {
+            if (row.Matches(filter))
+            {
+                shown.Add(row);
+            }
+        }
+
+        Rows = shown;
+        _filteredBy = filter;
+        _filteredOrder = ordered;
+    }
+
+    /// <summary>Every row in the current sort order, sorted once per column and direction and cached until the rows change.</summary>
+    private MeasurementRow[] Ordered()
+    {
+        if (SortColumn < 0)
+        {
+            return _all;
+        }
+
+        if (_sorted.TryGetValue((SortColumn, SortDescending), out MeasurementRow[]? cached))
+        {
+            return cached;
+        }
+
+        Comparison<MeasurementRow> compare = Comparer(SortColumn);
+        int[] order = Enumerable.Range(0, _all.Length).ToArray();
+        MeasurementRow[] all = _all;
+        // Ties keep data order in both directions (a stable sort), so reversing is not just reading backwards.
+        Array.Sort(order, SortDescending
+            ? (a, b) => compare(all[b], all[a]) is var c && c != 0 ? c : a.CompareTo(b)
+            : (a, b) => compare(all[a], all[b]) is var c && c != 0 ? c : a.CompareTo(b));
+        MeasurementRow[] sorted = order.Select(i => all[i]).ToArray();
+        _sorted[(SortColumn, SortDescending)] = sorted;
+        return sorted;
     }
 
     private static Comparison<MeasurementRow> Comparer(int column) => column switch
     {
-        ValueColumn => (a, b) => a.Measurement.Value.CompareTo(b.Measurement.Value),
+        0 => (a, b) => string.CompareOrdinal(a.Measurement.Id, b.Measurement.Id),
+        1 => (a, b) => string.CompareOrdinal(a.StatusText, b.StatusText),
         ResidualColumn => (a, b) => Magnitude(a).CompareTo(Magnitude(b)),
-        _ => (a, b) => string.Compare(a.Cells[column], b.Cells[column], StringComparison.Ordinal),
+        3 => (a, b) => string.CompareOrdinal(Quantities.ThermoProperties.Code(a.Measurement.Property), Quantities.ThermoProperties.Code(b.Measurement.Property)),
+        ValueColumn => (a, b) => a.Measurement.Value.CompareTo(b.Measurement.Value),
+        5 => (a, b) => string.CompareOrdinal(a.Measurement.Source, b.Measurement.Source),
+        _ => (a, b) => string.CompareOrdinal(a.Cells[column], b.Cells[column]),
     };
 
     // Missing residuals sort below every real one.

@@ -24,11 +24,21 @@ public sealed class SpeciesViewModel
         [
             estimate.Species.Name,
             estimate.Species.Key,
-            "f" + estimate.Property.Code(),
+            PropertyName(estimate.Property),
             Display.ValueWithUncertainty(estimate.Value, estimate.Uncertainty),
             Display.Count(estimate.MeasurementCount),
         ];
     }
+
+    /// <summary>The name of an estimated property with its unit, e.g. "ΔfH° kJ/mol" or "S° J/(mol·K)".</summary>
+    public static string PropertyName(ThermoProperty property) => property switch
+    {
+        ThermoProperty.Enthalpy => $"ΔfH° {property.CanonicalUnit().Symbol}",
+        ThermoProperty.GibbsEnergy => $"ΔfG° {property.CanonicalUnit().Symbol}",
+        ThermoProperty.InternalEnergy => $"ΔfU° {property.CanonicalUnit().Symbol}",
+        ThermoProperty.Entropy => $"ΔfS° {property.CanonicalUnit().Symbol}",
+        _ => $"{property.Symbol()} {property.CanonicalUnit().Symbol}",
+    };
 
     /// <summary>The table as shown (for export).</summary>
     public TableSnapshot Snapshot() => new("Species", Headers, Rows.Select(Cells).ToArray());

@@ -138,19 +138,50 @@ public sealed class TargetViewModel
         int n = 1;
         foreach (RouteStep step in route.Steps)
         {
-            string measured = _owner.Data.Network.TryGetMeasurement(step.MeasurementId, out Measurement m)
-                ? Display.ValueWithUncertainty(m.Value, m.Uncertainty)
-                : Display.NotAvailable;
-            lines.Add($"{n}. {step.Factor} × {step.MeasurementId} (measured {measured})");
-            lines.Add($"   {step.Equation}");
-            lines.Add($"   contributes {Display.Number(step.TransformedValue, 2)}");
+            Measurement? m = _owner.Data.Network.TryGetMeasurement(step.MeasurementId, out Measurement found) ? found : null;
+            string measured = Display.ValueWithUncertainty(m?.Value, m?.Uncertainty);
+            lines.Add($"{n}. {step.Factor} × {step.MeasurementId}: {Transform(step.Factor)} (measured {measured})");
+            if (m is not null)
+            {
+                lines.Add($"   as measured: {m.Equation}");
+            }
+
+            lines.Add($"   as used:     {step.Equation}");
+            lines.Add($"   contributes {Display.Number(step.TransformedValue, 2)} {unit}");
             n++;
         }
 
         lines.Add("");
-        lines.Add($"Sum: {Display.ValueWithUncertainty(route.Value, route.Uncertainty)} {unit}");
+        if (route.Cancelled is { } cancelled)
+        {
+            lines.Add(cancelled.Count == 0
+                ? "Cancelling intermediates: none"
+                : $"Cancelling intermediates: {string.Join(", ", cancelled)} (appear on both sides and drop out)");
+        }
+
+        if (route.Sum is { } sum)
+        {
+            lines.Add($"Sum of the steps: {sum}");
+        }
+
+        lines.Add($"Sum of the values: {Display.ValueWithUncertainty(route.Value, route.Uncertainty)} {unit}");
         lines.Add($"Network estimate: {Display.ValueWithUncertainty(Report.NetworkValue, Report.NetworkUncertainty)} {unit}");
         return lines;
+    }
+
+    /// <summary>What a factor does to a measured reaction, in words: "as measured", "reversed", "scaled by 2", "reversed and scaled by 1/2".</summary>
+    public static string Transform(string factor)
+    {
+        ArgumentNullException.ThrowIfNull(factor);
+        bool reversed = factor.StartsWith('-');
+        string size = reversed ? factor[1..] : factor;
+        return (reversed, size == "1") switch
+        {
+            (false, true) => "as measured",
+            (true, true) => "reversed",
+            (false, false) => $"scaled by {size}",
+            (true, false) => $"reversed and scaled by {size}",
+        };
     }
 
     /// <summary>The routes table as shown (for export).</summary>

@@ -28,10 +28,19 @@ internal static class Dialogs
         int height = Math.Min(lines.Count + 7, Math.Max(8, (app.Screen.Height) - 2));
         int width = Math.Min(Math.Max(lines.Select(line => line.Length).DefaultIfEmpty(20).Max() + 8, 40), Math.Max(40, app.Screen.Width - 2));
         using var dialog = new Dialog { Title = title, Width = width, Height = height };
-        // A list, so long texts scroll with the arrow keys at 80×24.
-        var text = new ListView { X = 1, Y = 0, Width = Dim.Fill(1), Height = Dim.Fill(2) };
-        text.SetSource(new ObservableCollection<string>(lines));
-        dialog.Add(text);
+        if (lines.Count + 7 <= height)
+        {
+            // It fits: a plain label (a list view left its last line undrawn until the first key press).
+            dialog.Add(new Label { X = 1, Y = 0, Width = Dim.Fill(1), Height = Dim.Fill(2), Text = string.Join("\n", lines) });
+        }
+        else
+        {
+            // A list, so long texts scroll with the arrow keys at 80×24.
+            var text = new ListView { X = 1, Y = 0, Width = Dim.Fill(1), Height = Dim.Fill(2) };
+            text.SetSource(new ObservableCollection<string>(lines));
+            dialog.Add(text);
+        }
+
         dialog.AddButton(new Button { Text = "_Close" });
         app.Run(dialog);
     }

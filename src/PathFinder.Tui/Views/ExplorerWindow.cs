@@ -57,6 +57,7 @@ internal sealed class ExplorerWindow : Window
     private readonly TableView _suspects = NewTable();
     private readonly TableView _cycles = NewTable();
 
+    private readonly object? _statusTimer;
     private Screen _current = Screen.Measurements;
 
     public ExplorerWindow(IApplication app, ExplorerViewModel vm)
@@ -81,6 +82,16 @@ internal sealed class ExplorerWindow : Window
 
         _vm.Changed += (_, _) => RefreshAll();
         _app.Keyboard.KeyDown += OnAppKeyDown;
+        // While background work runs, the status line counts the seconds (the only redraw the timer causes).
+        _statusTimer = _app.AddTimeout(TimeSpan.FromMilliseconds(500), () =>
+        {
+            if (_vm.IsBusy)
+            {
+                _status.Text = _vm.StatusText;
+            }
+
+            return true;
+        });
         // Focus can only move once the window is running; until then the first field would keep it.
         Initialized += (_, _) => FocusCurrentScreen();
         IsRunningChanged += (_, _) => FocusCurrentScreen();
@@ -96,6 +107,10 @@ internal sealed class ExplorerWindow : Window
         if (disposing)
         {
             _app.Keyboard.KeyDown -= OnAppKeyDown;
+            if (_statusTimer is not null)
+            {
+                _app.RemoveTimeout(_statusTimer);
+            }
             foreach (View screen in _screens.Values.Where(screen => screen.SuperView is null))
             {
                 screen.Dispose();
@@ -198,7 +213,7 @@ internal sealed class ExplorerWindow : Window
     {
         var screen = new View { X = 0, Y = 0, Width = Dim.Fill(), Height = Dim.Fill(), CanFocus = true };
         var suspectsFrame = new FrameView { Title = "Suspects (Enter: its cycles, Ctrl+G: measurement, Ctrl+J: source)", X = 0, Y = 1, Width = Dim.Fill(), Height = Dim.Percent(45) };
-        var cyclesFrame = new FrameView { Title = "Cycles", X = 0, Y = Pos.Bottom(suspectsFrame), Width = Dim.Fill(), Height = Dim.Fill() };
+        var cyclesFrame = new FrameView { Title = "Cycles (Tab here; Ctrl+X .svg draws the selected one)", X = 0, Y = Pos.Bottom(suspectsFrame), Width = Dim.Fill(), Height = Dim.Fill() };
         _suspects.Height = Dim.Fill();
         _cycles.Height = Dim.Fill();
         suspectsFrame.Add(_suspects);
@@ -419,20 +434,43 @@ internal sealed class ExplorerWindow : Window
 
     private void Export()
     {
-        (TableSnapshot table, string? focus) = _current switch
-        {
-            Screen.Species => (_vm.Species.Snapshot(), null),
-            Screen.Sources => (_vm.Sources.Snapshot(), null),
-            Screen.Target => (_vm.Target.Snapshot(), null),
-            Screen.Consistency => (_vm.Consistency.Snapshot(), SelectedSuspect()?.MeasurementId),
-            Screen.Curation => (_vm.CurationLog.Snapshot(), null),
-            _ => (_vm.Measurements.Snapshot(), SelectedMeasurement()?.Measurement.Id),
-        };
+        (TableSnapshot table, DiagramFocus focus, string drawing) = ExportChoice();
         string suggestion = Path.Combine(Path.GetDirectoryName(Path.GetFullPath(_vm.NetworkPath)) ?? ".", $"{table.Title.ToLowerInvariant()}.csv");
-        string? path = Dialogs.AskText(_app, $"Export {table.Title}", "File path: .csv, .json or .md writes this table; .svg writes a diagram (if available).", suggestion);
+        string? path = Dialogs.AskText(_app, $"Export {table.Title}", $"File path: .csv, .json or .md writes this table; .svg draws {drawing}.", suggestion);
         if (path is not null)
         {
             _vm.Export(path, table, focus);
+        }
+    }
+
+    /// <summary>The table of the current screen and what a diagram exported from here shows.</summary>
+    private (TableSnapshot Table, DiagramFocus Focus, string Drawing) ExportChoice()
+    {
+        switch (_current)
+        {
+            case Screen.Species:
+                return (_vm.Species.Snapshot(), DiagramFocus.Network, "the whole network");
+            case Screen.Sources:
+                return (_vm.Sources.Snapshot(), DiagramFocus.Network, "the whole network");
+            case Screen.Curation:
+                return (_vm.CurationLog.Snapshot(), DiagramFocus.Network, "the whole network");
+            case Screen.Target:
+                int route = _routes.Value?.SelectedCell.Y ?? -1;
+                return route >= 0 && route < _vm.Target.Routes.Count
+                    ? (_vm.Target.Snapshot(), new DiagramFocus(Route: _vm.Target.Routes[route]), $"route {route + 1} (network and levels)")
+                    : (_vm.Target.Snapshot(), DiagramFocus.Network, "the whole network (no route selected)");
+            case Screen.Consistency when _cycles.HasFocus:
+                int cycle = _cycles.Value?.SelectedCell.Y ?? -1;
+                IReadOnlyList<(int Number, CycleReport Cycle)> cycles = _vm.Consistency.Cycles;
+                return cycle >= 0 && cycle < cycles.Count
+                    ? (_vm.Consistency.CycleSnapshot(), new DiagramFocus(Cycle: cycles[cycle].Cycle), $"cycle {cycles[cycle].Number} (network and closure)")
+                    : (_vm.Consistency.CycleSnapshot(), DiagramFocus.Network, "the whole network");
+            case Screen.Consistency:
+                string? suspect = SelectedSuspect()?.MeasurementId;
+                return (_vm.Consistency.Snapshot(), new DiagramFocus(MeasurementId: suspect), suspect is null ? "the whole network" : $"the neighbourhood of {suspect}");
+            default:
+                string? id = SelectedMeasurement()?.Measurement.Id;
+                return (_vm.Measurements.Snapshot(), new DiagramFocus(MeasurementId: id), id is null ? "the whole network" : $"the neighbourhood of {id}");
         }
     }
 
@@ -450,10 +488,21 @@ internal sealed class ExplorerWindow : Window
 
     private static void Select(TableView table, int row) => table.Value = new TableSelection(new Point(0, row));
 
-    private static void SetTable(TableView table, IReadOnlyList<string> headers, IReadOnlyList<IReadOnlyList<string>> rows)
+    /// <summary>Shows <paramref name="rows"/> in <paramref name="table"/>, keeping the selected position.</summary>
+    /// <param name="table">The table view.</param>
+    /// <param name="headers">Column headers.</param>
+    /// <param name="rows">The rows; when it is the list already shown (same instance), nothing is rebuilt.</param>
+    /// <param name="cells">Formats one row (called only for rows drawn).</param>
+    /// <param name="reuse">Whether the cells of an unchanged list may be kept (false when they depend on other state).</param>
+    private static void SetRows<T>(TableView table, IReadOnlyList<string> headers, IReadOnlyList<T> rows, Func<T, int, IReadOnlyList<string>> cells, bool reuse = true)
     {
+        if (reuse && table.Table is RowsTableSource<T> shown && ReferenceEquals(shown.RowList, rows))
+        {
+            return;
+        }
+
         int selected = table.Value?.SelectedCell.Y ?? 0;
-        table.Table = new TextTableSource(headers, rows);
+        table.Table = new RowsTableSource<T>(headers, rows, cells);
         if (rows.Count > 0)
         {
             Select(table, Math.Clamp(selected, 0, rows.Count - 1));
@@ -467,12 +516,12 @@ internal sealed class ExplorerWindow : Window
         Title = $"PathFinder explorer - {_vm.Title}";
         _status.Text = _vm.StatusText;
         RefreshMeasurements();
-        SetTable(_species, SpeciesViewModel.Headers, _vm.Species.Rows.Select(SpeciesViewModel.Cells).ToArray());
-        SetTable(_sources, SourcesViewModel.Headers, _vm.Sources.Rows.Select(_vm.Sources.Cells).ToArray());
+        SetRows(_species, SpeciesViewModel.Headers, _vm.Species.Rows, (row, _) => SpeciesViewModel.Cells(row));
+        SetRows(_sources, SourcesViewModel.Headers, _vm.Sources.Rows, (row, _) => _vm.Sources.Cells(row), reuse: false);
         ShowSourceDetails();
         RefreshTarget();
         RefreshConsistency();
-        SetTable(_curation, CurationLogViewModel.Headers, _vm.CurationLog.Rows.Select(_vm.CurationLog.Cells).ToArray());
+        SetRows(_curation, CurationLogViewModel.Headers, _vm.CurationLog.Rows, (row, _) => _vm.CurationLog.Cells(row), reuse: false);
         string problems = _vm.CurationDiagnostics.Count == 0 ? "" : $"  {_vm.CurationDiagnostics.Count} problem(s) in the file: {_vm.CurationDiagnostics[0]}";
         _curationInfo.Text = $"Decisions file: {_vm.CurationPath} ({(_vm.HasUnsavedChanges ? "UNSAVED changes, Ctrl+S saves" : "saved")})\n" +
             $"{_vm.Curated.Excluded.Count} measurement(s) excluded now.{problems}";
@@ -481,18 +530,30 @@ internal sealed class ExplorerWindow : Window
 
     private void RefreshMeasurements()
     {
-        SetTable(_measurements, MeasurementsViewModel.Headers, _vm.Measurements.Rows.Select(row => row.Cells).ToArray());
+        SetRows(_measurements, MeasurementsViewModel.Headers, _vm.Measurements.Rows, (row, _) => row.Cells);
         _sort.Text = $"{_vm.Measurements.Rows.Count} shown, {_vm.Measurements.SortText}";
         ShowMeasurementDetails();
     }
 
-    private void ShowMeasurementDetails() => _measurementDetails.Text = string.Join("\n", _vm.Measurements.Details(SelectedMeasurement()));
+    private void ShowMeasurementDetails() => _measurementDetails.Text = string.Join("\n", _vm.Measurements.Details(SelectedMeasurement()).Select(Fit));
+
+    /// <summary>Cuts a detail line to the screen width with "…", so one long line never wraps over the next.</summary>
+    private string Fit(string line)
+    {
+        int width = Math.Max(20, _app.Screen.Width - 2);
+        return line.Length <= width ? line : string.Concat(line.AsSpan(0, width - 1), "…");
+    }
 
     private void ShowSourceDetails()
     {
         int row = _sources.Value?.SelectedCell.Y ?? -1;
         SourceReport? report = row >= 0 && row < _vm.Sources.Rows.Count ? _vm.Sources.Rows[row] : null;
-        _sourceDetails.Text = string.Join("\n", _vm.Sources.Details(report));
+        IReadOnlyList<string> lines = _vm.Sources.Details(report);
+        // Only what fits is drawn; a big source can have thousands of warnings (export or `validate` lists them all).
+        const int shown = 4;
+        _sourceDetails.Text = lines.Count <= shown + 1
+            ? string.Join("\n", lines.Select(Fit))
+            : string.Join("\n", lines.Take(shown).Select(Fit).Append($"… and {lines.Count - shown} more line(s); `pathfinder validate` lists every warning"));
     }
 
     private void RefreshTarget()
@@ -502,7 +563,7 @@ internal sealed class ExplorerWindow : Window
         _targetCaret.Text = hasError && _vm.Target.ErrorOffset is { } offset ? new string(' ', Math.Max(0, offset)) + "^ here" : "";
         _targetError.Text = hasError ? $"INVALID: {_vm.Target.Error}" : "";
 
-        SetTable(_routes, TargetViewModel.Headers, _vm.Target.Routes.Select((route, i) => TargetViewModel.Cells(i, route)).ToArray());
+        SetRows(_routes, TargetViewModel.Headers, _vm.Target.Routes, (route, i) => TargetViewModel.Cells(i, route));
         IReadOnlyList<string> choices = _vm.Target.SpeciesChoices;
         if (_speciesPick.Source is null || _speciesPick.Source.Count != choices.Count)
         {
@@ -515,7 +576,7 @@ internal sealed class ExplorerWindow : Window
     private void RefreshConsistency()
     {
         _consistencySummary.Text = _vm.Consistency.Summary;
-        SetTable(_suspects, ConsistencyViewModel.SuspectHeaders, _vm.Consistency.Suspects.Select(_vm.Consistency.Cells).ToArray());
-        SetTable(_cycles, ConsistencyViewModel.CycleHeaders, _vm.Consistency.Cycles.Select(pair => ConsistencyViewModel.Cells(pair.Number, pair.Cycle)).ToArray());
+        SetRows(_suspects, ConsistencyViewModel.SuspectHeaders, _vm.Consistency.Suspects, (row, _) => _vm.Consistency.Cells(row));
+        SetRows(_cycles, ConsistencyViewModel.CycleHeaders, _vm.Consistency.Cycles, (pair, _) => ConsistencyViewModel.Cells(pair.Number, pair.Cycle));
     }
 }

@@ -170,36 +170,92 @@ public sealed class ExplorerViewModelTests : IDisposable
         Assert.Equal(2 + 2 + vm.Measurements.Rows.Count, lines.Length);
         Assert.Contains("unknown export type", vm.Export(Path.Combine(_demo.Folder, "x.txt"), vm.Measurements.Snapshot()), StringComparison.Ordinal);
         string svg = Path.Combine(_demo.Folder, "x.svg");
-        Assert.StartsWith("wrote", vm.Export(svg, vm.Measurements.Snapshot()), StringComparison.Ordinal);
+        Assert.Contains("in the background", vm.Export(svg, vm.Measurements.Snapshot()), StringComparison.Ordinal);
+        await vm.WhenIdleAsync();
+        Assert.Contains("wrote", vm.StatusText, StringComparison.Ordinal);
         Assert.Equal("svg", System.Xml.Linq.XDocument.Load(svg).Root!.Name.LocalName);
     }
 
     [Fact]
-    public async Task A_newer_analysis_supersedes_an_older_one_that_finishes_later()
+    public async Task A_route_explanation_names_the_reversed_step_the_cancelling_intermediate_and_the_sum()
     {
-        // Given an analyzer whose first run blocks until released
-        using var release = new ManualResetEventSlim(false);
-        int calls = 0;
-        NetworkAnalyzer slowFirst = (network, diagnostics, token) =>
-        {
-            if (Interlocked.Increment(ref calls) == 1)
-            {
-                release.Wait(TimeSpan.FromSeconds(10));
-            }
-
-            return SolvedAnalysis.Create(network, diagnostics, token);
-        };
-        ExplorerViewModel vm = Open(slowFirst);
-        Assert.True(vm.IsBusy);
-        Assert.Contains("computing", vm.StatusText, StringComparison.Ordinal);
-
-        // When a curation change starts a second analysis and then the first one finishes
-        vm.Exclude("A01", "test");
-        release.Set();
+        // Given the demo, where CO(g) is formed by burning graphite to CO2 (A01) and reversing CO combustion (A08)
+        ExplorerViewModel vm = Open();
         await vm.WhenIdleAsync();
 
-        // Then the analysis shown is the newer one (without A01)
-        Assert.False(vm.Analysis!.Network.TryGetMeasurement("A01", out _));
-        Assert.False(vm.IsAnalysisStale);
+        // When the formation of CO(g) is the target
+        Assert.True(vm.Target.Submit("CO(g)"));
+        await vm.WhenIdleAsync();
+
+        // Then that route's explanation says A08 is reversed, CO2(g) cancels, and the sum is the formation of CO(g)
+        int index = vm.Target.Routes.ToList().FindIndex(r => r.Steps.Select(step => step.MeasurementId).Order().SequenceEqual(["A01", "A08"]));
+        Assert.True(index >= 0, "route A01 - A08 not found");
+        IReadOnlyList<string> lines = vm.Target.Explain(index);
+        Assert.Contains(lines, line => line.Contains("A08: reversed", StringComparison.Ordinal));
+        Assert.Contains("Cancelling intermediates: CO2(g)", lines.Single(line => line.StartsWith("Cancelling", StringComparison.Ordinal)), StringComparison.Ordinal);
+        string sum = lines.Single(line => line.StartsWith("Sum of the steps:", StringComparison.Ordinal));
+        Assert.EndsWith("-> CO(g)", sum, StringComparison.Ordinal);
+        Assert.Contains(lines, line => line.StartsWith("Network estimate:", StringComparison.Ordinal));
+    }
+
+    [Theory]
+    [InlineData("1", "as measured")]
+    [InlineData("-1", "reversed")]
+    [InlineData("2", "scaled by 2")]
+    [InlineData("-1/2", "reversed and scaled by 1/2")]
+    public void A_factor_is_described_in_words(string factor, string words) =>
+        Assert.Equal(words, TargetViewModel.Transform(factor));
+
+    [Fact]
+    public async Task Exporting_a_route_or_a_cycle_as_svg_writes_its_network_and_its_level_diagram()
+    {
+        ExplorerViewModel vm = Open();
+        await vm.WhenIdleAsync();
+        Assert.True(vm.Target.Submit("CO(g)"));
+        await vm.WhenIdleAsync();
+        string route = Path.Combine(_demo.Folder, "route.svg");
+        string cycle = Path.Combine(_demo.Folder, "cycle.svg");
+
+        vm.Export(route, vm.Target.Snapshot(), new DiagramFocus(Route: vm.Target.Routes[0]));
+        await vm.WhenIdleAsync();
+        vm.Export(cycle, vm.Consistency.CycleSnapshot(), new DiagramFocus(Cycle: vm.Consistency.Cycles[0].Cycle));
+        await vm.WhenIdleAsync();
+
+        foreach (string file in new[] { route, Path.Combine(_demo.Folder, "route-levels.svg"), cycle, Path.Combine(_demo.Folder, "cycle-closure.svg") })
+        {
+            Assert.Equal("svg", System.Xml.Linq.XDocument.Load(file).Root!.Name.LocalName);
+        }
+    }
+
+    [Fact]
+    public async Task Typing_a_filter_one_key_at_a_time_shows_the_same_rows_as_filtering_from_scratch()
+    {
+        // Given the rows sorted by source and one exclusion made while a filter is typed
+        ExplorerViewModel vm = Open();
+        await vm.WhenIdleAsync();
+        vm.Measurements.SortBy(5);
+        string[] typed = ["g", "gr", "gro", "grou", "group", "group-", "group-c", "group-", "group-b", "", "C0", "C03"];
+
+        foreach (string filter in typed)
+        {
+            // When the filter grows, shrinks or changes (and once a row changes under it)
+            vm.Measurements.SetFilter(filter);
+            if (filter == "group-")
+            {
+                vm.Exclude("B02", "test");
+                await vm.WhenIdleAsync();
+            }
+
+            // Then the rows are exactly a brute-force filter of freshly built rows in the same (stable) order
+            string[] expected = vm.AllMeasurementRows()
+                .OrderBy(r => r.Measurement.Source, StringComparer.Ordinal)
+                .Where(r => r.Cells.Any(cell => cell.Contains(filter, StringComparison.OrdinalIgnoreCase)) || r.Measurement.EquationText.Contains(filter, StringComparison.OrdinalIgnoreCase))
+                .Select(r => r.Measurement.Id)
+                .ToArray();
+            Assert.Equal(expected, vm.Measurements.Rows.Select(r => r.Measurement.Id).ToArray());
+        }
+
+        Assert.Equal(["C03"], vm.Measurements.Rows.Select(r => r.Measurement.Id));
+        Assert.Equal("excluded", vm.AllMeasurementRows().Single(r => r.Measurement.Id == "B02").StatusText);
     }
 }

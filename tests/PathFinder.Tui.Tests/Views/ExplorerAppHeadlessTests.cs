@@ -138,6 +138,100 @@ public sealed class ExplorerAppHeadlessTests : IDisposable
         Assert.Contains("Ctrl+E", screens["help"], StringComparison.Ordinal);
     }
 
+    [Fact]
+    public void A_suspect_leads_to_its_cycles_and_source_and_excluding_it_re_solves_the_numbers_on_screen()
+    {
+        // Given the explorer on the demo network at 80×24, on the consistency screen
+        var screens = new Dictionary<string, string>();
+        string? before = null;
+        using (IApplication app = Application.Create(new VirtualTimeProvider()))
+        {
+            app.Init(DriverRegistry.Names.ANSI);
+            app.Driver!.SetScreenSize(80, 24);
+            ExplorerViewModel vm = ExplorerApp.CreateViewModel(app, _demo.Folder, SolvedAnalysis.Analyzer);
+            using ExplorerWindow window = ExplorerApp.CreateWindow(app, vm);
+            var steps = new Queue<(string Name, Func<bool> Ready, Action Act)>();
+            steps.Enqueue(("ready", () => !vm.IsBusy && vm.Analysis is not null, () => app.InjectKey(Key.F6)));
+            steps.Enqueue(("consistency", () => window.CurrentScreen == Screen.Consistency, () =>
+            {
+                app.LayoutAndDraw();
+                screens["before"] = ScreenText(app);
+                before = vm.Consistency.Summary;
+                // When the user opens the first suspect's cycles, then jumps to its source
+                app.InjectKey(Key.Enter);
+            }));
+            steps.Enqueue(("its cycles", () => vm.Consistency.CycleFilter is not null, () =>
+            {
+                app.LayoutAndDraw();
+                screens["cycles"] = ScreenText(app);
+                app.InjectKey(Key.J.WithCtrl);
+            }));
+            steps.Enqueue(("its source", () => window.CurrentScreen == Screen.Sources, () =>
+            {
+                app.LayoutAndDraw();
+                screens["source"] = ScreenText(app);
+                app.InjectKey(Key.F6);
+            }));
+            // And excludes the suspect from the consistency screen with a reason
+            steps.Enqueue(("back", () => window.CurrentScreen == Screen.Consistency, () => app.InjectKey(Key.E.WithCtrl)));
+            steps.Enqueue(("dialog", () => app.TopRunnableView is Dialog, () =>
+            {
+                screens["dialog"] = ScreenText(app);
+                foreach (char c in "transcription error")
+                {
+                    app.InjectKey(new Key(c));
+                }
+
+                app.InjectKey(Key.Enter);
+            }));
+            steps.Enqueue(("re-solved", () => ReferenceEquals(app.TopRunnableView, window) && !vm.IsBusy && vm.HasUnsavedChanges && !vm.IsAnalysisStale, () =>
+            {
+                app.LayoutAndDraw();
+                screens["after"] = ScreenText(app);
+                app.InjectKey(Key.S.WithCtrl);
+            }));
+            steps.Enqueue(("saved", () => !vm.HasUnsavedChanges, () => app.InjectKey(Key.Q.WithCtrl)));
+            RunScript(app, window, steps);
+        }
+
+        // Then the suspect row, its cycles and its source were shown (read from the demo data: C03 of group-c)
+        Assert.Contains("│C03", screens["before"], StringComparison.Ordinal);
+        Assert.Contains("1 suspect(s)", screens["before"], StringComparison.Ordinal);
+        Assert.Contains("showing cycles through C03", screens["cycles"], StringComparison.Ordinal);
+        Assert.Contains("FLAGGED", screens["cycles"], StringComparison.Ordinal);
+        Assert.Contains("group-c:", screens["source"], StringComparison.Ordinal);
+        Assert.Contains("Exclude C03", screens["dialog"], StringComparison.Ordinal);
+
+        // And after excluding it the re-solved analysis is on screen: no suspect left, fewer flagged cycles
+        Assert.Contains("0 suspect(s)", screens["after"], StringComparison.Ordinal);
+        Assert.DoesNotContain("│C03", screens["after"], StringComparison.Ordinal);
+        Assert.Contains("UNSAVED", screens["after"], StringComparison.Ordinal);
+        Assert.NotNull(before);
+        string flaggedBefore = before!.Split(';')[0];
+        Assert.DoesNotContain(flaggedBefore, screens["after"], StringComparison.Ordinal);
+
+        // And when the network is opened again, the saved exclusion holds and the analysis has no suspect
+        using (IApplication app = Application.Create(new VirtualTimeProvider()))
+        {
+            app.Init(DriverRegistry.Names.ANSI);
+            app.Driver!.SetScreenSize(80, 24);
+            ExplorerViewModel vm = ExplorerApp.CreateViewModel(app, _demo.Folder, SolvedAnalysis.Analyzer);
+            using ExplorerWindow window = ExplorerApp.CreateWindow(app, vm);
+            var steps = new Queue<(string Name, Func<bool> Ready, Action Act)>();
+            steps.Enqueue(("ready", () => !vm.IsBusy && vm.Analysis is not null, () => app.InjectKey(Key.F6)));
+            steps.Enqueue(("consistency", () => window.CurrentScreen == Screen.Consistency, () =>
+            {
+                app.LayoutAndDraw();
+                screens["reopened"] = ScreenText(app);
+                app.InjectKey(Key.Q.WithCtrl);
+            }));
+            RunScript(app, window, steps);
+        }
+
+        Assert.Contains("0 suspect(s)", screens["reopened"], StringComparison.Ordinal);
+        Assert.Contains("1 excluded, saved", screens["reopened"], StringComparison.Ordinal);
+    }
+
     private static void RunScript(IApplication app, ExplorerWindow window, Queue<(string Name, Func<bool> Ready, Action Act)> steps)
     {
         var clock = Stopwatch.StartNew();
