@@ -72,7 +72,7 @@ public sealed class FigureBuilderTests : IDisposable
         // and ends at CO with the spectator back
         Dictionary<string, Fraction> start = State(levels.StartState);
         Assert.Equal(Fraction.One, start[KeyOf("O2(g)")]);
-        Assert.Equal(["G1", "-1 × G2"], levels.Steps.Select(step => step.Label));
+        Assert.Equal(["G1", "G2 reversed"], levels.Steps.Select(step => step.Label));
         Assert.Equal(new Dictionary<string, Fraction> { [KeyOf("CO2(g)")] = Fraction.One }, State(levels.Steps[0].StateAfter));
         Assert.Equal(-110.53, levels.TargetValue, 1e-9);
     }
@@ -145,14 +145,27 @@ public sealed class FigureBuilderTests : IDisposable
         Dictionary<string, Fraction> before = State(startState);
         foreach (EnthalpyStep step in steps)
         {
-            string id = step.Label.Split(' ')[^1];
+            string id = step.Label.Split(' ')[0];
             Dictionary<string, Fraction> after = State(step.StateAfter);
             Assert.Equal(Amounts(equationById[id]), Difference(after, before));
             before = after;
         }
     }
 
-    /// <summary>Reads a state text such as <c>1/2 O2(g) + CO(g)</c> (positive amounts only, as drawn).</summary>
+    /// <summary>"1/2" for "½" and the other one-character fractions the diagrams print.</summary>
+    private static string FromVulgar(string text) => text switch
+    {
+        "½" => "1/2",
+        "⅓" => "1/3",
+        "⅔" => "2/3",
+        "¼" => "1/4",
+        "¾" => "3/4",
+        "⅙" => "1/6",
+        "⅚" => "5/6",
+        _ => text,
+    };
+
+    /// <summary>Reads a state text such as <c>½ O2(g) + CO(g)</c> (positive amounts only, as drawn).</summary>
     private static Dictionary<string, Fraction> State(string text)
     {
         var state = new Dictionary<string, Fraction>(StringComparer.Ordinal);
@@ -164,7 +177,7 @@ public sealed class FigureBuilderTests : IDisposable
         foreach (string part in text.Split(" + "))
         {
             string[] words = part.Split(' ', 2);
-            if (words.Length == 2 && RationalText.TryParse(words[0], out Fraction amount))
+            if (words.Length == 2 && RationalText.TryParse(FromVulgar(words[0]), out Fraction amount))
             {
                 state[KeyOf(words[1])] = amount;
             }
