@@ -40,6 +40,8 @@ public sealed class ValidateCommand
                 valid = !result.HasErrors,
                 files = result.Files,
                 speciesFile = result.SpeciesFile,
+                heatCapacityFile = result.HeatCapacityFile,
+                heatCapacitySpecies = result.HeatCapacities.Keys.Select(species => species.Name),
                 summary = new
                 {
                     measurements = summary.MeasurementCount,
@@ -61,6 +63,11 @@ public sealed class ValidateCommand
         if (result.SpeciesFile is not null)
         {
             output.WriteLine($"  species file   {result.SpeciesFile}");
+        }
+
+        if (result.HeatCapacityFile is not null)
+        {
+            output.WriteLine($"  heat capacity  {result.HeatCapacityFile} ({result.HeatCapacities.Count} species)");
         }
 
         output.WriteLine($"  species        {summary.SpeciesCount}");
