@@ -100,7 +100,8 @@ public static class SyntheticNetworkGenerator
         return new SyntheticNetwork(new ReactionNetwork($"synthetic-{options.Seed}", measurements), truth, outliers);
     }
 
-    /// <summary>Writes the network as a CSV file <c>measurements.csv</c> and its ground truth <c>truth.csv</c> into a folder.</summary>
+    /// <summary>Writes the network as a CSV file <c>measurements.csv</c> and its ground truth <c>truth.txt</c> into a folder.</summary>
+    /// <remarks>Equations are quoted: reference states such as C(cr,graphite) contain a comma.</remarks>
     public static void Write(SyntheticNetwork network, string folder)
     {
         ArgumentNullException.ThrowIfNull(network);
@@ -110,7 +111,7 @@ public static class SyntheticNetworkGenerator
         data.AppendLine("id,equation,property,value,uncertainty,unit,temperature,source");
         foreach (Measurement measurement in network.Network.Measurements)
         {
-            data.AppendLine(string.Create(CultureInfo.InvariantCulture, $"{measurement.Id},{measurement.Equation},dH,{measurement.Value:R},{measurement.Uncertainty:R},kJ/mol,298.15,{measurement.Source}"));
+            data.AppendLine(string.Create(CultureInfo.InvariantCulture, $"{measurement.Id},\"{measurement.Equation}\",dH,{measurement.Value:R},{measurement.Uncertainty:R},kJ/mol,298.15,{measurement.Source}"));
         }
 
         var truth = new StringBuilder();
