@@ -65,15 +65,19 @@ public static class CheckSolveBenchmark
         var context = new CommandContext(TextWriter.Null, TextWriter.Null);
 
         MemoryProbe.ResetPeak();
+        TimeSpan cpu = Cpu();
         double solveCold = Time(() => Expect(SolveCommand.Run(folder, "dH", noAdjust: true, threshold: 2.0, format: "table", skipInvalid: false, context), ExitCodes.Success));
         double solvePeak = MemoryProbe.PeakMegabytes();
-        Line(output, $"  solve --no-adjust, cold (first run, JIT included): {solveCold * 1000:F0} ms; peak resident {solvePeak:F0} MB{ResetNote()}");
+        double solveCpu = (Cpu() - cpu).TotalSeconds;
+        Line(output, $"  solve --no-adjust, cold (first run, JIT included): {solveCold * 1000:F0} ms (CPU {solveCpu * 1000:F0} ms); peak resident {solvePeak:F0} MB{ResetNote()}; load average {LoadAverage():F1}");
 
         MemoryProbe.ResetPeak();
+        cpu = Cpu();
         int checkExit = -1;
         double checkCold = Time(() => checkExit = CheckCommand.Run(folder, threshold: 2.0, inflation: 2.0, maxCycle: 6, showCycles: 10, json: false, skipInvalid: false, context));
         double checkPeak = MemoryProbe.PeakMegabytes();
-        Line(output, $"  check, cold (first run): {checkCold * 1000:F0} ms (exit {checkExit}); peak resident {checkPeak:F0} MB{ResetNote()}");
+        double checkCpu = (Cpu() - cpu).TotalSeconds;
+        Line(output, $"  check, cold (first run): {checkCold * 1000:F0} ms (CPU {checkCpu * 1000:F0} ms, exit {checkExit}); peak resident {checkPeak:F0} MB{ResetNote()}; load average {LoadAverage():F1}");
 
         double solveWarm = Time(() => SolveCommand.Run(folder, "dH", noAdjust: true, threshold: 2.0, format: "table", skipInvalid: false, context));
         double checkWarm = Time(() => CheckCommand.Run(folder, threshold: 2.0, inflation: 2.0, maxCycle: 6, showCycles: 10, json: false, skipInvalid: false, context));
@@ -83,6 +87,7 @@ public static class CheckSolveBenchmark
 
         figures.Add(Figure.Seconds("solve --no-adjust, all uncertainties, CSV read included", solveCold, 1.5));
         figures.Add(Figure.Seconds("check (cycles + suspects), CSV read included", checkCold, 3.0));
+        figures.Add(Figure.Info("  same, process CPU time (less sensitive to a loaded machine)", string.Create(CultureInfo.InvariantCulture, $"solve {solveCpu:0.000} s, check {checkCpu:0.000} s")));
         figures.Add(Figure.Megabytes("peak memory of solve", solvePeak, 500));
         figures.Add(Figure.Megabytes("peak memory of check", checkPeak, 500));
         return figures;
@@ -91,40 +96,77 @@ public static class CheckSolveBenchmark
     private static void Breakdown(TextWriter output, string folder, CommandContext context)
     {
         var options = new ConsistencyOptions();
-        var watch = Stopwatch.StartNew();
+        var clock = new StageClock();
         AnalysisSession session = AnalysisSession.Open(folder, context, skipInvalid: false, out _) ?? throw new InvalidOperationException("the generated data did not load");
-        double read = Lap(watch);
+        string read = clock.Lap();
         PropertyModel model = session.Model(PropertyFamily.Enthalpy);
-        double build = Lap(watch);
+        string build = clock.Lap();
         ObservationSystem system = model.ToObservationSystem();
-        double toSystem = Lap(watch);
+        string toSystem = clock.Lap();
         LeastSquaresSolution asGiven = WeightedLeastSquares.Solve(system);
-        double solve = Lap(watch);
+        string solve = clock.Lap();
         SolveReport solveReport = NetworkSolver.Report(model, asGiven, adjusted: false, [], []);
         SolveOutput.Write(TextWriter.Null, solveReport, "table");
-        double solveOutput = Lap(watch);
+        string solveOutput = clock.Lap();
         OutlierResult outliers = OutlierProcedure.Run(system, new OutlierOptions { Threshold = options.Threshold, InflationFactor = options.InflationFactor });
-        double suspects = Lap(watch);
+        string suspects = clock.Lap();
         RouteNetwork routes = model.ToRouteNetwork();
-        double routeNetwork = Lap(watch);
+        string routeNetwork = clock.Lap();
         CycleSearchResult cycles = FindCycles.In(routes, new CycleSearchOptions { MaxSize = options.MaxCycleSize, MaxCycles = options.MaxCycles, TimeBudget = options.CycleTimeBudget });
-        double cycleSearch = Lap(watch);
+        string cycleSearch = clock.Lap();
         ConsistencyReport report = ConsistencyCheck.Run(session.Network, session.HeatCapacities, options);
-        double wholeAnalysis = Lap(watch);
+        string wholeAnalysis = clock.Lap();
         CheckOutput.WriteText(TextWriter.Null, report, 10);
-        double checkOutput = Lap(watch);
+        string checkOutput = clock.Lap();
 
-        Line(output, $"  breakdown (warm, steps of the commands run one by one):");
-        Line(output, $"    read CSV + curation            {read * 1000,7:F0} ms ({session.Network.Measurements.Count} measurements)");
-        Line(output, $"    model build                    {build * 1000,7:F0} ms ({model.Unknowns.Count} unknowns)");
-        Line(output, $"    observation system             {toSystem * 1000,7:F0} ms");
-        Line(output, $"    solve incl. all uncertainties  {solve * 1000,7:F0} ms (backend {asGiven.BackendUsed}, {asGiven.ComponentCount} components, Birge ratio {asGiven.BirgeRatio:F2})");
-        Line(output, $"    solve report + table output    {solveOutput * 1000,7:F0} ms");
-        Line(output, $"    suspect procedure              {suspects * 1000,7:F0} ms ({outliers.Adjustments.Count} adjustments, {outliers.Suspects.Count} suspects, its own initial factorization included)");
-        Line(output, $"    route network for cycles       {routeNetwork * 1000,7:F0} ms");
-        Line(output, $"    cycle search (budget {options.CycleTimeBudget.TotalSeconds:F0} s)      {cycleSearch * 1000,7:F0} ms ({cycles.CyclesFound} cycles found, cut {cycles.Cut}, {cycles.IndependentCycleCount} independent)");
-        Line(output, $"    ConsistencyCheck.Run as a whole {wholeAnalysis * 1000,6:F0} ms (model + solve + suspects + cycles + cross check)");
-        Line(output, $"    check text output              {checkOutput * 1000,7:F0} ms");
+        Line(output, $"  breakdown (warm, steps of the commands run one by one; wall time, then process CPU time over all threads):");
+        Line(output, $"    read CSV + curation               {read} ({session.Network.Measurements.Count} measurements)");
+        Line(output, $"    model build                       {build} ({model.Unknowns.Count} unknowns)");
+        Line(output, $"    observation system                {toSystem}");
+        Line(output, $"    solve incl. all uncertainties     {solve} (backend {asGiven.BackendUsed}, {asGiven.ComponentCount} components, Birge ratio {asGiven.BirgeRatio:F2})");
+        Line(output, $"    solve report + table output       {solveOutput}");
+        Line(output, $"    suspect procedure                 {suspects} ({outliers.Adjustments.Count} adjustments, {outliers.Suspects.Count} suspects; its own initial factorization included)");
+        Line(output, $"    route network for cycles          {routeNetwork}");
+        Line(output, $"    cycle search (budget {options.CycleTimeBudget.TotalSeconds:F0} s)         {cycleSearch} ({cycles.CyclesFound} cycles found, cut {cycles.Cut}, {cycles.IndependentCycleCount} independent)");
+        Line(output, $"    ConsistencyCheck.Run as a whole   {wholeAnalysis} (model + solve + suspects + cycles + cross check)");
+        Line(output, $"    check text output                 {checkOutput}");
+    }
+
+    /// <summary>Wall and process CPU time between laps.</summary>
+    private sealed class StageClock
+    {
+        private readonly Stopwatch _watch = Stopwatch.StartNew();
+        private TimeSpan _cpu = Cpu();
+
+        public string Lap()
+        {
+            double wall = _watch.Elapsed.TotalMilliseconds;
+            TimeSpan cpu = Cpu();
+            double used = (cpu - _cpu).TotalMilliseconds;
+            _cpu = cpu;
+            _watch.Restart();
+            return string.Create(CultureInfo.InvariantCulture, $"{wall,7:F0} ms (CPU {used,6:F0} ms)");
+        }
+    }
+
+    /// <summary>The process's CPU time over all threads so far.</summary>
+    internal static TimeSpan Cpu()
+    {
+        using Process process = Process.GetCurrentProcess();
+        return process.TotalProcessorTime;
+    }
+
+    /// <summary>The 1-minute load average, or NaN where it cannot be read (the machine is shared; figures inflate with load).</summary>
+    internal static double LoadAverage()
+    {
+        try
+        {
+            return double.Parse(File.ReadAllText("/proc/loadavg").Split(' ')[0], CultureInfo.InvariantCulture);
+        }
+        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException or FormatException)
+        {
+            return double.NaN;
+        }
     }
 
     private static void Expect(int actual, int expected)
@@ -142,13 +184,6 @@ public static class CheckSolveBenchmark
         var watch = Stopwatch.StartNew();
         action();
         return watch.Elapsed.TotalSeconds;
-    }
-
-    private static double Lap(Stopwatch watch)
-    {
-        double seconds = watch.Elapsed.TotalSeconds;
-        watch.Restart();
-        return seconds;
     }
 
     private static void Line(TextWriter output, FormattableString text) => output.WriteLine(text.ToString(CultureInfo.InvariantCulture));
