@@ -33,23 +33,29 @@ public static class RouteEndToEndBenchmark
         MemoryProbe.ResetPeak();
         var first = new List<double>();
         var top = new List<double>();
+        var firstCpu = new List<double>();
+        var topCpu = new List<double>();
         foreach (ChemicalEquation target in chosen)
         {
-            (RouteReport firstReport, double firstSeconds) = Find(model, target, new RouteSearchOptions { MaxSteps = 6, MaxRoutes = 1, StopAfter = 1, TimeBudget = TimeSpan.FromSeconds(10) });
-            (RouteReport topReport, double topSeconds) = Find(model, target, new RouteSearchOptions { MaxSteps = 4, MaxRoutes = 20, TimeBudget = TimeSpan.FromSeconds(10) });
+            (RouteReport firstReport, double firstSeconds, double firstCpuSeconds) = Find(model, target, new RouteSearchOptions { MaxSteps = 6, MaxRoutes = 1, StopAfter = 1, TimeBudget = TimeSpan.FromSeconds(10) });
+            (RouteReport topReport, double topSeconds, double topCpuSeconds) = Find(model, target, new RouteSearchOptions { MaxSteps = 4, MaxRoutes = 20, TimeBudget = TimeSpan.FromSeconds(10) });
             first.Add(firstSeconds);
             top.Add(topSeconds);
+            firstCpu.Add(firstCpuSeconds);
+            topCpu.Add(topCpuSeconds);
             Line(output, $"  {target,-58} first route {firstSeconds * 1000,6:F0} ms ({Steps(firstReport)}); top 20 ≤ 4 steps {topSeconds * 1000,6:F0} ms ({topReport.RoutesFound} routes found, cut {topReport.Cut}, best ±{Best(topReport)})");
         }
 
         double peak = MemoryProbe.PeakMegabytes();
-        Line(output, $"  first route: mean {first.Average() * 1000:F0} ms, worst {first.Max() * 1000:F0} ms; top 20 ≤ 4 steps: mean {top.Average() * 1000:F0} ms, worst {top.Max() * 1000:F0} ms");
+        Line(output, $"  first route: mean {first.Average() * 1000:F0} ms, worst {first.Max() * 1000:F0} ms; top 20 ≤ 4 steps: mean {top.Average() * 1000:F0} ms, worst {top.Max() * 1000:F0} ms (wall)");
+        Line(output, $"  process CPU time: first route mean {firstCpu.Average() * 1000:F0} ms, worst {firstCpu.Max() * 1000:F0} ms; top 20 mean {topCpu.Average() * 1000:F0} ms, worst {topCpu.Max() * 1000:F0} ms; load average {CheckSolveBenchmark.LoadAverage():F1}");
         Line(output, $"  peak resident memory during the searches: {peak:F0} MB{(MemoryProbe.CanReset ? " (peak reset after generating the network)" : " (process-wide peak)")}; now {MemoryProbe.CurrentMegabytes():F0} MB");
         string size = string.Create(CultureInfo.InvariantCulture, $"{species}/{measurements}");
         return
         [
             Figure.Seconds($"first route, formation target, {size} (worst of {chosen.Length})", first.Max(), 0.5),
             Figure.Seconds($"top 20 routes ≤ 4 steps, {size} (worst of {chosen.Length})", top.Max(), 2.0),
+            Figure.Info("  same two, process CPU time (mean / worst)", string.Create(CultureInfo.InvariantCulture, $"first {firstCpu.Average():0.000} / {firstCpu.Max():0.000} s, top 20 {topCpu.Average():0.000} / {topCpu.Max():0.000} s")),
             Figure.Megabytes($"peak memory of route search, {size}", peak, 300),
         ];
     }
@@ -81,7 +87,7 @@ public static class RouteEndToEndBenchmark
             foreach (ChemicalEquation target in chosen)
             {
                 first.Add(Find(model, target, new RouteSearchOptions { MaxSteps = 6, MaxRoutes = 1, StopAfter = 1, TimeBudget = TimeSpan.FromSeconds(10) }).Seconds);
-                (RouteReport report, double seconds) = Find(model, target, new RouteSearchOptions { MaxSteps = 4, MaxRoutes = 20, TimeBudget = TimeSpan.FromSeconds(10) });
+                (RouteReport report, double seconds, _) = Find(model, target, new RouteSearchOptions { MaxSteps = 4, MaxRoutes = 20, TimeBudget = TimeSpan.FromSeconds(10) });
                 top.Add(seconds);
                 found.Add(report.RoutesFound);
             }
@@ -111,7 +117,7 @@ public static class RouteEndToEndBenchmark
             int cut = 0;
             foreach (ChemicalEquation target in sweepTargets)
             {
-                (RouteReport report, double seconds) = Find(largest, target, new RouteSearchOptions { MaxSteps = steps, MaxRoutes = 20, TimeBudget = budget });
+                (RouteReport report, double seconds, _) = Find(largest, target, new RouteSearchOptions { MaxSteps = steps, MaxRoutes = 20, TimeBudget = budget });
                 times.Add(seconds);
                 found.Add(report.RoutesFound);
                 cut += report.Cut.HasFlag(SearchCut.TimeBudget) ? 1 : 0;
@@ -143,11 +149,12 @@ public static class RouteEndToEndBenchmark
             .ToArray();
     }
 
-    private static (RouteReport Report, double Seconds) Find(PropertyModel model, ChemicalEquation target, RouteSearchOptions options)
+    private static (RouteReport Report, double Seconds, double CpuSeconds) Find(PropertyModel model, ChemicalEquation target, RouteSearchOptions options)
     {
+        TimeSpan cpu = CheckSolveBenchmark.Cpu();
         var watch = Stopwatch.StartNew();
         RouteReport report = RouteAnalysis.Find(model, target, options);
-        return (report, watch.Elapsed.TotalSeconds);
+        return (report, watch.Elapsed.TotalSeconds, (CheckSolveBenchmark.Cpu() - cpu).TotalSeconds);
     }
 
     private static string Steps(RouteReport report) => report.Routes.Count > 0 ? $"{report.Routes[0].Steps.Count} steps" : "no route";
