@@ -23,6 +23,7 @@ public static class CliApp
             new ExploreCommand().Build(context),
             new TraceCommand().Build(context),
             new PlanCommand().Build(context),
+            new GenerateCommand().Build(context),
         };
 
         ParseResult parse = root.Parse(args);

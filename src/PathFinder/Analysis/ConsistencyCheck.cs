@@ -42,7 +42,8 @@ public static class ConsistencyCheck
         IReadOnlyList<UncertaintyAdjustment> adjustments = [];
         if (options.RunSuspectProcedure)
         {
-            OutlierResult outliers = OutlierProcedure.Run(system, new OutlierOptions { Threshold = options.Threshold, InflationFactor = options.InflationFactor });
+            // Start from the solution just computed: the procedure copies its factorization instead of redoing it.
+            OutlierResult outliers = OutlierProcedure.Run(asGiven, new OutlierOptions { Threshold = options.Threshold, InflationFactor = options.InflationFactor });
             adjusted = outliers.Solution;
             outlierSuspects = outliers.Suspects;
             adjustments = outliers.Adjustments;

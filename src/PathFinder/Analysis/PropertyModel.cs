@@ -25,6 +25,7 @@ public sealed class PropertyModel
     public const double TemperatureTolerance = 0.01;
 
     private readonly Dictionary<Species, int> _unknownIndex;
+    private readonly Lazy<RouteNetwork> _routeNetwork;
 
     private PropertyModel(
         PropertyFamily family,
@@ -40,6 +41,7 @@ public sealed class PropertyModel
         Measurements = measurements;
         Vectors = vectors;
         Warnings = warnings;
+        _routeNetwork = new Lazy<RouteNetwork>(() => RouteNetwork.Create(Vectors, Measurements.Select(item => item.Value).ToArray(), Measurements.Select(item => item.Uncertainty).ToArray()));
         _unknownIndex = new Dictionary<Species, int>();
         for (int i = 0; i < unknowns.Count; i++)
         {
@@ -169,8 +171,8 @@ public sealed class PropertyModel
     }
 
     /// <summary>The network for route and cycle search over this model.</summary>
-    public RouteNetwork ToRouteNetwork() =>
-        RouteNetwork.Create(Vectors, Measurements.Select(item => item.Value).ToArray(), Measurements.Select(item => item.Uncertainty).ToArray());
+    /// <remarks>Built on first use and then shared (the model and the route network are both immutable), so a second search to another target starts at once.</remarks>
+    public RouteNetwork ToRouteNetwork() => _routeNetwork.Value;
 
     private static SparseVector ToVector(ChemicalEquation equation, PropertyFamily family, Dictionary<Species, int> index)
     {

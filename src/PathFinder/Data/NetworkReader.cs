@@ -55,9 +55,10 @@ public static class NetworkReader
 
         var measurements = new List<Measurement>();
         var firstById = new Dictionary<string, SourceLocation>(StringComparer.Ordinal);
+        var equations = new Dictionary<string, ParsedEquation>(StringComparer.Ordinal);
         foreach (string file in files)
         {
-            ReadFile(file, catalog, measurements, firstById, diagnostics);
+            ReadFile(file, catalog, equations, measurements, firstById, diagnostics);
         }
 
         AddNetworkWarnings(measurements, catalog, heatCapacities, diagnostics);
@@ -99,7 +100,7 @@ public static class NetworkReader
         return models;
     }
 
-    private static void ReadFile(string file, SpeciesCatalog catalog, List<Measurement> measurements, Dictionary<string, SourceLocation> firstById, List<Diagnostic> diagnostics)
+    private static void ReadFile(string file, SpeciesCatalog catalog, Dictionary<string, ParsedEquation> equations, List<Measurement> measurements, Dictionary<string, SourceLocation> firstById, List<Diagnostic> diagnostics)
     {
         CsvTable? table = CsvTable.Read(file, file, diagnostics);
         if (table is null)
@@ -135,7 +136,7 @@ public static class NetworkReader
                 duplicate = true;
             }
 
-            Measurement? measurement = ReadRow(row, table, columns, catalog, defaultSource, diagnostics);
+            Measurement? measurement = ReadRow(row, table, columns, catalog, equations, defaultSource, diagnostics);
             if (measurement is not null && !duplicate)
             {
                 measurements.Add(measurement);
@@ -143,7 +144,7 @@ public static class NetworkReader
         }
     }
 
-    private static Measurement? ReadRow(CsvRow row, CsvTable table, Dictionary<string, int> columns, SpeciesCatalog catalog, string defaultSource, List<Diagnostic> diagnostics)
+    private static Measurement? ReadRow(CsvRow row, CsvTable table, Dictionary<string, int> columns, SpeciesCatalog catalog, Dictionary<string, ParsedEquation> equations, string defaultSource, List<Diagnostic> diagnostics)
     {
         int before = diagnostics.Count;
         if (row.Fields.Count > table.Header.Count)
@@ -169,7 +170,7 @@ public static class NetworkReader
             diagnostics.Add(Diagnostic.Error("unknown-property", row.LocationOf(columns["property"], "property"), $"unknown property '{propertyText}'", $"use one of {string.Join(", ", ThermoProperties.Codes)}"));
         }
 
-        ChemicalEquation? equation = ReadEquation(row, columns["equation"], catalog, propertyKnown ? property : null, diagnostics);
+        ChemicalEquation? equation = ReadEquation(row, columns["equation"], catalog, equations, propertyKnown ? property : null, diagnostics);
 
         EnergyUnit unit = propertyKnown ? property.CanonicalUnit() : EnergyUnit.KilojoulePerMole;
         string unitText = row.FieldOrEmpty(columns["unit"]);
@@ -263,7 +264,7 @@ public static class NetworkReader
         };
     }
 
-    private static ChemicalEquation? ReadEquation(CsvRow row, int column, SpeciesCatalog catalog, ThermoProperty? property, List<Diagnostic> diagnostics)
+    private static ChemicalEquation? ReadEquation(CsvRow row, int column, SpeciesCatalog catalog, Dictionary<string, ParsedEquation> equations, ThermoProperty? property, List<Diagnostic> diagnostics)
     {
         string raw = column < row.Fields.Count ? row.Fields[column] : "";
         int leading = raw.Length - raw.TrimStart().Length;
@@ -291,14 +292,22 @@ public static class NetworkReader
             return ChemicalEquation.FromTerms([new EquationTerm(value, Fraction.One)]);
         }
 
-        ParseResult<ChemicalEquation> equation = EquationParser.Parse(text, catalog.Resolve);
+        // Repeated determinations repeat the equation text word for word; parse and balance-check each text once.
+        if (!equations.TryGetValue(text, out ParsedEquation? known))
+        {
+            ParseResult<ChemicalEquation> result = EquationParser.Parse(text, catalog.Resolve);
+            known = new ParsedEquation(result, result.TryGetValue(out ChemicalEquation? value) ? value.FindImbalances() : []);
+            equations[text] = known;
+        }
+
+        ParseResult<ChemicalEquation> equation = known.Result;
         if (!equation.TryGetValue(out ChemicalEquation? parsed))
         {
             diagnostics.Add(Diagnostic.Error(equation.Failure.Code, location.Shift(leading + equation.Failure.Offset), equation.Failure.Message, equation.Failure.Hint));
             return null;
         }
 
-        IReadOnlyList<string> imbalances = parsed.FindImbalances();
+        IReadOnlyList<string> imbalances = known.Imbalances;
         if (imbalances.Count > 0)
         {
             diagnostics.Add(Diagnostic.Error("unbalanced-equation", location.Shift(leading), $"the equation is not balanced: {string.Join("; ", imbalances)}", "correct the coefficients or formulas so every element and the charge balance"));
@@ -409,4 +418,7 @@ public static class NetworkReader
             .OrderBy(term => term.Species.Key, StringComparer.Ordinal)
             .Select(term => $"{term.Species.Key}:{RationalText.Format(term.Coefficient / scale)}"));
     }
+
+    /// <summary>The parse of one equation text and its element/charge imbalances, kept for texts that recur.</summary>
+    private sealed record ParsedEquation(ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances);
 }

@@ -16,6 +16,7 @@ public sealed class SpeciesCatalog
     private readonly Dictionary<string, List<Species>> _declaredByIdentity = new(StringComparer.Ordinal);
     private readonly Dictionary<string, SortedSet<string>> _spellings = new(StringComparer.Ordinal);
     private readonly Dictionary<string, Species> _firstWritten = new(StringComparer.Ordinal);
+    private readonly Dictionary<string, ParseResult<Species>> _resolved = new(StringComparer.Ordinal);
 
     /// <summary>The declared species, in file order.</summary>
     public IReadOnlyList<Species> Declared => _byKey.Values.ToArray();
@@ -89,7 +90,24 @@ public sealed class SpeciesCatalog
     }
 
     /// <summary>Resolves one species token from an equation.</summary>
+    /// <remarks>
+    /// The answer for a given text never changes once the catalog is read (the first spelling seen stays the name shown),
+    /// so it is remembered: a large file names the same few thousand species over and over.
+    /// </remarks>
     public ParseResult<Species> Resolve(string text)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        if (_resolved.TryGetValue(text, out ParseResult<Species>? known))
+        {
+            return known;
+        }
+
+        ParseResult<Species> result = ResolveOnce(text);
+        _resolved[text] = result;
+        return result;
+    }
+
+    private ParseResult<Species> ResolveOnce(string text)
     {
         if (_byKey.TryGetValue(text, out Species? declared))
         {

@@ -72,6 +72,22 @@ internal sealed class ComponentFactorization
         return component;
     }
 
+    /// <summary>An independent copy with its own arrays, so the copy can be updated while this one stays as it is.</summary>
+    /// <remarks>Copying the k×k covariance costs O(k²), far less than the O(k³) factorization it saves.</remarks>
+    public ComponentFactorization Clone()
+    {
+        var copy = new ComponentFactorization(Unknowns, Observations)
+        {
+            Rank = Rank,
+            NullBasis = (double[])NullBasis.Clone(),
+            UpdatesSinceFactorization = UpdatesSinceFactorization,
+        };
+        Covariance.CopyTo(copy.Covariance, 0);
+        Solution.CopyTo(copy.Solution, 0);
+        Determined.CopyTo(copy.Determined, 0);
+        return copy;
+    }
+
     /// <summary>Builds N and AᵀWv from the rows, factors, inverts and finds the null space (discarding updates).</summary>
     public void Factor(IReadOnlyList<Observation> rows, double[] uncertainties, int[] localOf, IDenseKernel kernel, SolverOptions options)
     {

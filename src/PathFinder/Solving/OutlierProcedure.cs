@@ -55,6 +55,30 @@ public static class OutlierProcedure
     {
         ArgumentNullException.ThrowIfNull(system);
         options ??= OutlierOptions.Default;
+        Validate(options);
+        return Run(system, SolverEngine.Create(system, options.Solver), options);
+    }
+
+    /// <summary>Runs the procedure starting from an existing solution of the data, without factorizing them again.</summary>
+    /// <remarks>
+    /// Gives the same result as <see cref="Run(ObservationSystem, OutlierOptions?)"/> on <c>initial.System</c>, and
+    /// saves its initial factorization (the most expensive single step at a few thousand unknowns) when the caller
+    /// has solved the data as given anyway. <paramref name="initial"/> is not changed: the procedure works on a copy
+    /// of its factorization. The solver settings are those <paramref name="initial"/> was solved with;
+    /// <see cref="OutlierOptions.Solver"/> is not used.
+    /// </remarks>
+    /// <param name="initial">A solution, normally of the data as given.</param>
+    /// <param name="options">Threshold, inflation factor and significance level.</param>
+    public static OutlierResult Run(LeastSquaresSolution initial, OutlierOptions? options = null)
+    {
+        ArgumentNullException.ThrowIfNull(initial);
+        options ??= OutlierOptions.Default;
+        Validate(options);
+        return Run(initial.System, initial.Engine.Clone(), options);
+    }
+
+    private static void Validate(OutlierOptions options)
+    {
         if (!(options.Threshold > 0.0))
         {
             throw new ArgumentOutOfRangeException(nameof(options), options.Threshold, "The threshold must be positive.");
@@ -73,8 +97,10 @@ public static class OutlierProcedure
         ArgumentOutOfRangeException.ThrowIfNegative(options.MaxIterations);
         ArgumentOutOfRangeException.ThrowIfLessThan(options.RefactorizationInterval, 1);
         ArgumentOutOfRangeException.ThrowIfLessThan(options.LowRankBlockSize, 1);
+    }
 
-        SolverEngine engine = SolverEngine.Create(system, options.Solver);
+    private static OutlierResult Run(ObservationSystem system, SolverEngine engine, OutlierOptions options)
+    {
         var fit = new IncrementalFit(engine, options.LowRankBlockSize);
         int checkable = 0;
         for (int i = 0; i < engine.ObservationCount; i++)

@@ -1,6 +1,6 @@
 namespace PathFinder.Solving;
 
-/// <summary>What <see cref="OutlierProcedure.Run"/> found: the adjustments, the suspects and the final solution.</summary>
+/// <summary>What <see cref="OutlierProcedure"/> found: the adjustments, the suspects and the final solution.</summary>
 public sealed class OutlierResult
 {
     internal OutlierResult(UncertaintyAdjustment[] adjustments, OutlierSuspect[] suspects, LeastSquaresSolution solution, bool converged, double criticalValue, int checkableCount)

@@ -73,6 +73,22 @@ internal sealed class SolverEngine
         }
     }
 
+    /// <summary>A deep copy of <paramref name="source"/>: same rows and components, own uncertainties and factorizations.</summary>
+    private SolverEngine(SolverEngine source)
+    {
+        Options = source.Options;
+        UnknownCount = source.UnknownCount;
+        RefactorizationInterval = source.RefactorizationInterval;
+        _rows = source._rows;
+        _uncertainties = (double[])source._uncertainties.Clone();
+        _kernel = source._kernel;
+        // The component structure never changes after construction, so these maps are shared.
+        _componentOfUnknown = source._componentOfUnknown;
+        _localOf = source._localOf;
+        _componentOfObservation = source._componentOfObservation;
+        _components = source._components.Select(component => component.Clone()).ToArray();
+    }
+
     public SolverOptions Options { get; }
 
     public int UnknownCount { get; }
@@ -91,6 +107,9 @@ internal sealed class SolverEngine
         ArgumentNullException.ThrowIfNull(system);
         return new SolverEngine(system, options ?? SolverOptions.Default);
     }
+
+    /// <summary>An independent copy that can be driven through weight changes without touching this engine.</summary>
+    public SolverEngine Clone() => new(this);
 
     public int ComponentOfUnknown(int j) => _componentOfUnknown[j];
 

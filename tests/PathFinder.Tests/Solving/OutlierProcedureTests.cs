@@ -271,4 +271,38 @@ public sealed class OutlierProcedureTests
         Assert.True(z < bonferroni && z > bonferroni - 0.01);
         Assert.True(z > 1.96);
     }
+
+    [Theory]
+    [InlineData(5)]
+    [InlineData(6)]
+    public void Run_FromASolution_GivesTheSameResultAndLeavesTheSolutionUnchanged(int seed)
+    {
+        // Given a synthetic system with 2 % outliers and its solution as given
+        (ObservationSystem system, _, _) = SyntheticSystems.Create(120, 1200, seed, 0.02);
+        LeastSquaresSolution asGiven = WeightedLeastSquares.Solve(system);
+        double[] valuesBefore = asGiven.Values.ToArray();
+        double[] uncertaintiesBefore = asGiven.StandardUncertainties.ToArray();
+        double covarianceBefore = asGiven.Covariance(0, 1);
+
+        // When the procedure runs from the system and from the solution
+        OutlierResult fromSystem = OutlierProcedure.Run(system);
+        OutlierResult fromSolution = OutlierProcedure.Run(asGiven);
+
+        // Then the adjustments, suspects and final values agree, and the given solution is untouched
+        Assert.Equal(fromSystem.Adjustments.Select(a => (a.ObservationIndex, a.NewUncertainty)), fromSolution.Adjustments.Select(a => (a.ObservationIndex, a.NewUncertainty)));
+        Assert.Equal(fromSystem.Suspects.Select(s => s.ObservationIndex), fromSolution.Suspects.Select(s => s.ObservationIndex));
+        Assert.True(fromSolution.Adjustments.Count > 0);
+        for (int j = 0; j < system.UnknownCount; j++)
+        {
+            if (fromSystem.Solution.IsDetermined(j))
+            {
+                Assert.Equal(fromSystem.Solution.Values[j], fromSolution.Solution.Values[j], 1e-9);
+            }
+        }
+
+        Assert.Equal(valuesBefore, asGiven.Values.ToArray());
+        Assert.Equal(uncertaintiesBefore, asGiven.StandardUncertainties.ToArray());
+        Assert.Equal(covarianceBefore, asGiven.Covariance(0, 1));
+        Assert.Equal(system.Observations.Select(o => o.Uncertainty), asGiven.System.Observations.Select(o => o.Uncertainty));
+    }
 }

@@ -1,0 +1,95 @@
+using System.CommandLine;
+using System.Globalization;
+using PathFinder.Cli.Output;
+using PathFinder.Synthetic;
+
+namespace PathFinder.Cli.Commands;
+
+/// <summary><c>pathfinder generate --species N --measurements M</c>: writes a synthetic test network with its ground truth.</summary>
+/// <remarks>
+/// The folder receives <c>measurements.csv</c> (readable by every other command) and <c>truth.txt</c> (the true
+/// formation enthalpies and the ids of the injected outliers), from <see cref="SyntheticNetworkGenerator"/>.
+/// The same options and seed always give the same files.
+/// </remarks>
+public sealed class GenerateCommand
+{
+    private readonly Option<int> _species = new("--species") { Description = "Number of species besides the element reference states (at least 3).", Required = true };
+    private readonly Option<int> _measurements = new("--measurements") { Description = "Number of measurements (at least 1).", Required = true };
+    private readonly Option<int> _seed = new("--seed") { Description = "Seed of the generator; the same seed gives the same network (default 1).", DefaultValueFactory = _ => 1 };
+    private readonly Option<double> _outliers = new("--outliers") { Description = "Fraction of measurements given a gross error of 8–30 σ, from 0 to 1 (default 0).", DefaultValueFactory = _ => 0.0 };
+    private readonly Option<string> _out = new("--out", "-o") { Description = "Folder to write measurements.csv and truth.txt into (default ./synthetic-network).", DefaultValueFactory = _ => "synthetic-network" };
+    private readonly Option<bool> _force = new("--force") { Description = "Write into the folder even when it is not empty (files of the same name are replaced)." };
+
+    /// <summary>Builds the command bound to <paramref name="context"/>.</summary>
+    public Command Build(CommandContext context)
+    {
+        var command = new Command("generate", "Write a synthetic, element-balanced test network of a chosen size with known true values and outliers (invented numbers, for testing and benchmarks only).")
+        {
+            _species, _measurements, _seed, _outliers, _out, _force,
+        };
+        command.SetAction(parse => Run(
+            parse.GetValue(_species),
+            parse.GetValue(_measurements),
+            parse.GetValue(_seed),
+            parse.GetValue(_outliers),
+            parse.GetValue(_out)!,
+            parse.GetValue(_force),
+            context));
+        return command;
+    }
+
+    /// <summary>Generates and writes the network; exit 0, or <see cref="UserInputException"/> (exit 2) for bad options or a non-empty folder.</summary>
+    /// <param name="species">Number of species (≥ 3).</param>
+    /// <param name="measurements">Number of measurements (≥ 1).</param>
+    /// <param name="seed">Generator seed.</param>
+    /// <param name="outlierFraction">Fraction of measurements given a gross error, in [0, 1].</param>
+    /// <param name="folder">Destination folder; created when missing.</param>
+    /// <param name="force">Whether a non-empty folder may be written into.</param>
+    /// <param name="context">Where the summary goes.</param>
+    public static int Run(int species, int measurements, int seed, double outlierFraction, string folder, bool force, CommandContext context)
+    {
+        ArgumentNullException.ThrowIfNull(folder);
+        ArgumentNullException.ThrowIfNull(context);
+        if (species < 3)
+        {
+            throw new UserInputException($"--species must be at least 3, not {species}");
+        }
+
+        OptionParsing.Positive(measurements, "--measurements");
+        if (!double.IsFinite(outlierFraction) || outlierFraction < 0.0 || outlierFraction > 1.0)
+        {
+            throw new UserInputException("--outliers must be a fraction from 0 to 1 (for example 0.02)");
+        }
+
+        if (string.IsNullOrWhiteSpace(folder))
+        {
+            throw new UserInputException("--out must name a folder");
+        }
+
+        if (File.Exists(folder))
+        {
+            throw new UserInputException($"--out names a file, not a folder: {folder}");
+        }
+
+        if (!force && Directory.Exists(folder) && Directory.EnumerateFileSystemEntries(folder).Any())
+        {
+            throw new UserInputException($"the folder {folder} is not empty; choose another --out or add --force to write into it");
+        }
+
+        SyntheticNetwork network = SyntheticNetworkGenerator.Generate(new SyntheticNetworkOptions
+        {
+            SpeciesCount = species,
+            MeasurementCount = measurements,
+            Seed = seed,
+            OutlierFraction = outlierFraction,
+        });
+        SyntheticNetworkGenerator.Write(network, folder);
+        context.Out.WriteLine(string.Create(
+            CultureInfo.InvariantCulture,
+            $"Wrote {network.Network.Measurements.Count} measurement(s) over {network.Network.Species.Count} species ({network.OutlierIds.Count} injected outlier(s), seed {seed}) to {folder}"));
+        context.Out.WriteLine($"  {Path.Combine(folder, "measurements.csv")}");
+        context.Out.WriteLine($"  {Path.Combine(folder, "truth.txt")}  (true formation enthalpies and outlier ids)");
+        context.Out.WriteLine("The values are invented for testing; they are not data for design.");
+        return ExitCodes.Success;
+    }
+}
