@@ -1,3 +1,4 @@
+using PathFinder.Data;
 using PathFinder.Tui.Analysis;
 using PathFinder.Tui.ViewModels;
 using PathFinder.Tui.Views;
@@ -14,7 +15,7 @@ public static class ExplorerApp
     /// <summary>Exit code: the explorer cannot start (no terminal, or the network cannot be read).</summary>
     public const int CannotStart = 2;
 
-    /// <summary>Runs the explorer on <paramref name="networkPath"/> with the data-only analysis; returns the exit code.</summary>
+    /// <summary>Runs the explorer on <paramref name="networkPath"/> with the full analysis; returns the exit code.</summary>
     public static int Run(string networkPath) => Run(networkPath, SolvedAnalysis.Analyzer, Console.Error);
 
     /// <summary>Runs the explorer with <paramref name="analyzer"/>; messages that prevent starting go to <paramref name="error"/>.</summary>
@@ -36,11 +37,17 @@ public static class ExplorerApp
             return CannotStart;
         }
 
+        // Reading happens before the screen opens, with a line on the terminal, so a large network never shows a
+        // frozen, empty screen; everything after that runs off the UI thread.
+        Console.Out.WriteLine($"Reading {networkPath} …");
+        var clock = System.Diagnostics.Stopwatch.StartNew();
+        NetworkReadResult data = NetworkReader.Read(networkPath);
+        Console.Out.WriteLine($"Read {data.Network.Measurements.Count} measurements in {clock.Elapsed.TotalSeconds:0.0} s; opening the explorer …");
         string? failure = null;
         using (IApplication app = Application.Create())
         {
             app.Init();
-            var vm = new ExplorerViewModel(networkPath, analyzer, new ApplicationDispatcher(app));
+            var vm = new ExplorerViewModel(data, networkPath, analyzer, new ApplicationDispatcher(app));
             using ExplorerWindow window = new(app, vm);
             try
             {

@@ -26,14 +26,21 @@ public sealed class ExplorerViewModel
 
     /// <summary>Loads the network and its curation file; the first analysis starts at once.</summary>
     public ExplorerViewModel(string networkPath, NetworkAnalyzer analyzer, IUiDispatcher dispatcher, Func<DateOnly>? today = null)
+        : this(NetworkReader.Read(networkPath ?? throw new ArgumentNullException(nameof(networkPath))), networkPath, analyzer, dispatcher, today)
     {
+    }
+
+    /// <summary>Starts from data already read (so a large network can be read before the screen opens); loads the curation file.</summary>
+    public ExplorerViewModel(NetworkReadResult data, string networkPath, NetworkAnalyzer analyzer, IUiDispatcher dispatcher, Func<DateOnly>? today = null)
+    {
+        ArgumentNullException.ThrowIfNull(data);
         ArgumentNullException.ThrowIfNull(networkPath);
         _analyzer = analyzer ?? throw new ArgumentNullException(nameof(analyzer));
         _dispatcher = dispatcher ?? throw new ArgumentNullException(nameof(dispatcher));
         _today = today ?? (() => DateOnly.FromDateTime(DateTime.Now));
         _clock = System.Diagnostics.Stopwatch.GetTimestamp;
         NetworkPath = networkPath;
-        Data = NetworkReader.Read(networkPath);
+        Data = data;
         CurationPath = CurationFile.PathFor(networkPath);
         CurationReadResult curation = CurationFile.Read(CurationPath);
         CurationDiagnostics = curation.Diagnostics;
