@@ -111,16 +111,19 @@ public sealed class TargetViewModel
         return true;
     }
 
-    /// <summary>The cells of a route row.</summary>
-    public static IReadOnlyList<string> Cells(int index, RouteReport route)
+    /// <summary>The cells of a route row; a route that uses a suspect measurement says so ("! uses suspect C03").</summary>
+    public IReadOnlyList<string> Cells(int index, RouteReport route)
     {
         ArgumentNullException.ThrowIfNull(route);
+        var suspects = new HashSet<string>((_owner.Analysis?.Suspects ?? []).Select(suspect => suspect.MeasurementId), StringComparer.Ordinal);
+        string[] used = route.Steps.Select(step => step.MeasurementId).Where(suspects.Contains).ToArray();
+        string steps = string.Join(" ", route.Steps.Select(step => step.Factor == "1" ? step.MeasurementId : $"{step.Factor}×{step.MeasurementId}"));
         return
         [
             (index + 1).ToString(System.Globalization.CultureInfo.InvariantCulture),
             Display.ValueWithUncertainty(route.Value, route.Uncertainty),
             Display.Count(route.Steps.Count),
-            string.Join(" ", route.Steps.Select(step => step.Factor == "1" ? step.MeasurementId : $"{step.Factor}×{step.MeasurementId}")),
+            used.Length > 0 ? $"! uses suspect {string.Join(", ", used)}: {steps}" : steps,
         ];
     }
 

@@ -563,7 +563,7 @@ internal sealed class ExplorerWindow : Window
         _targetCaret.Text = hasError && _vm.Target.ErrorOffset is { } offset ? new string(' ', Math.Max(0, offset)) + "^ here" : "";
         _targetError.Text = hasError ? $"INVALID: {_vm.Target.Error}" : "";
 
-        SetRows(_routes, TargetViewModel.Headers, _vm.Target.Routes, (route, i) => TargetViewModel.Cells(i, route));
+        SetRows(_routes, TargetViewModel.Headers, _vm.Target.Routes, (route, i) => _vm.Target.Cells(i, route));
         IReadOnlyList<string> choices = _vm.Target.SpeciesChoices;
         if (_speciesPick.Source is null || _speciesPick.Source.Count != choices.Count)
         {

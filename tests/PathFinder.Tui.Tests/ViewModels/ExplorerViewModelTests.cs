@@ -156,6 +156,24 @@ public sealed class ExplorerViewModelTests : IDisposable
     }
 
     [Fact]
+    public async Task A_route_that_uses_a_suspect_says_so_in_its_row()
+    {
+        // Given the demo, where the analysis finds C03 (the slipped water-gas shift value) a suspect
+        ExplorerViewModel vm = Open();
+        await vm.WhenIdleAsync();
+
+        // When the water-gas shift is asked for
+        Assert.True(vm.Target.Submit("CO(g) + H2O(g) -> CO2(g) + H2(g)"));
+        await vm.WhenIdleAsync();
+
+        // Then the direct route through C03 is marked, and a route without it is not
+        int direct = vm.Target.Routes.ToList().FindIndex(r => r.Steps.Count == 1 && r.Steps[0].MeasurementId == "C03");
+        Assert.StartsWith("! uses suspect C03", vm.Target.Cells(direct, vm.Target.Routes[direct])[3], StringComparison.Ordinal);
+        int clean = vm.Target.Routes.ToList().FindIndex(r => r.Steps.All(step => step.MeasurementId != "C03"));
+        Assert.DoesNotContain("suspect", vm.Target.Cells(clean, vm.Target.Routes[clean])[3], StringComparison.Ordinal);
+    }
+
+    [Fact]
     public async Task Export_writes_the_table_in_the_format_of_the_extension()
     {
         ExplorerViewModel vm = Open();
