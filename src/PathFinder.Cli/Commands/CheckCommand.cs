@@ -7,13 +7,13 @@ namespace PathFinder.Cli.Commands;
 /// <summary><c>pathfinder check &lt;network&gt;</c>: cycle closure, suspects with leave-one-out predictions, sources.</summary>
 public sealed class CheckCommand
 {
-    private readonly Argument<string> _network = new("network") { Description = "A CSV file or a folder of CSV files." };
+    private readonly Argument<string> _network = CommonOptions.Network();
     private readonly Option<double> _threshold = new("--threshold") { Description = "|z| above which a cycle, source or measurement is flagged (default 2).", DefaultValueFactory = _ => 2.0 };
     private readonly Option<double> _inflation = new("--inflation") { Description = "Factor by which the suspect procedure enlarges an offending uncertainty per step (default 2).", DefaultValueFactory = _ => 2.0 };
     private readonly Option<int> _maxCycle = new("--max-cycle") { Description = "Largest cycle enumerated, in measurements (default 6).", DefaultValueFactory = _ => 6 };
     private readonly Option<int> _showCycles = new("--show-cycles") { Description = "How many cycles to list, worst first (default 10).", DefaultValueFactory = _ => 10 };
-    private readonly Option<bool> _json = new("--json") { Description = "Write the result as JSON." };
-    private readonly Option<bool> _skipInvalid = new("--skip-invalid") { Description = "Use the valid rows when some rows have errors." };
+    private readonly Option<bool> _json = CommonOptions.Json();
+    private readonly Option<bool> _skipInvalid = CommonOptions.SkipInvalid();
 
     /// <summary>Builds the command bound to <paramref name="context"/>.</summary>
     public Command Build(CommandContext context)

@@ -12,18 +12,18 @@ namespace PathFinder.Cli.Commands;
 /// <summary><c>pathfinder draw &lt;network&gt; --kind … -o file.svg</c>: SVG diagrams of routes, cycles and neighbourhoods for reports.</summary>
 public sealed class DrawCommand
 {
-    private readonly Argument<string> _network = new("network") { Description = "A CSV file or a folder of CSV files." };
+    private readonly Argument<string> _network = CommonOptions.Network();
     private readonly Option<string> _kind = new("--kind", "-k") { Description = "network (species and measurements), levels (enthalpy ladder of a route) or closure (ladder of a cycle).", DefaultValueFactory = _ => "network" };
     private readonly Option<string?> _target = new("--target", "-t") { Description = "Focus on the routes to this target (equation or species)." };
     private readonly Option<int> _route = new("--route", "-r") { Description = "Which route to draw, 1 = best (default 1; 0 with --kind network draws all listed routes).", DefaultValueFactory = _ => 1 };
     private readonly Option<int?> _cycle = new("--cycle", "-c") { Description = "Focus on this cycle from 'pathfinder check' (1 = worst)." };
     private readonly Option<string?> _species = new("--species", "-s") { Description = "Focus on the neighbourhood of this species." };
     private readonly Option<int> _depth = new("--depth", "-d") { Description = "Neighbourhood depth in measurement steps (default 1).", DefaultValueFactory = _ => 1 };
-    private readonly Option<string> _property = new("--property", "-p") { Description = "dH (default), dG, dS or dU.", DefaultValueFactory = _ => "dH" };
+    private readonly Option<string> _property = CommonOptions.Property();
     private readonly Option<int> _maxSteps = new("--max-steps") { Description = "Longest route searched (default 6).", DefaultValueFactory = _ => 6 };
     private readonly Option<int> _maxNodes = new("--max-nodes") { Description = $"Refuse network diagrams with more nodes than this (default {NetworkDiagramOptions.DefaultMaxNodes}; larger layouts are slow and unreadable).", DefaultValueFactory = _ => NetworkDiagramOptions.DefaultMaxNodes };
     private readonly Option<string> _output = new("--output", "-o") { Description = "The SVG file to write.", Required = true };
-    private readonly Option<bool> _skipInvalid = new("--skip-invalid") { Description = "Use the valid rows when some rows have errors." };
+    private readonly Option<bool> _skipInvalid = CommonOptions.SkipInvalid();
 
     /// <summary>Builds the command bound to <paramref name="context"/>.</summary>
     public Command Build(CommandContext context)

@@ -6,7 +6,7 @@ namespace PathFinder.Cli.Commands;
 /// <summary><c>pathfinder explore &lt;network&gt;</c>: the interactive terminal explorer (measurements, routes, consistency, curation).</summary>
 public sealed class ExploreCommand
 {
-    private readonly Argument<string> _network = new("network") { Description = "A CSV file or a folder of CSV files." };
+    private readonly Argument<string> _network = CommonOptions.Network();
 
     /// <summary>Builds the command bound to <paramref name="context"/>.</summary>
     public Command Build(CommandContext context)

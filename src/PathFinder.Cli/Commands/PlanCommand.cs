@@ -9,9 +9,9 @@ namespace PathFinder.Cli.Commands;
 /// <summary><c>pathfinder plan &lt;network&gt; --target "…"</c>: which measurement would most reduce a target's uncertainty.</summary>
 public sealed class PlanCommand
 {
-    private readonly Argument<string> _network = new("network") { Description = "A CSV file or a folder of CSV files." };
-    private readonly Option<string> _target = new("--target", "-t") { Description = "The target: a balanced equation, or one species for its formation.", Required = true };
-    private readonly Option<string> _property = new("--property", "-p") { Description = "dH (default), dG, dS or dU.", DefaultValueFactory = _ => "dH" };
+    private readonly Argument<string> _network = CommonOptions.Network();
+    private readonly Option<string> _target = CommonOptions.Target();
+    private readonly Option<string> _property = CommonOptions.Property();
     private readonly Option<double> _factor = new("--factor") { Description = "A re-measurement's uncertainty as a multiple of the current one (default 0.5).", DefaultValueFactory = _ => 0.5 };
     private readonly Option<double?> _uncertainty = new("--uncertainty") { Description = "An absolute uncertainty for every re-measurement, in the property's unit (instead of --factor)." };
     private readonly Option<string[]> _candidate = new("--candidate", "-c") { Description = "A new reaction you could measure (repeatable); ranked with the generated ones.", AllowMultipleArgumentsPerToken = false };
@@ -20,8 +20,8 @@ public sealed class PlanCommand
     private readonly Option<int> _depth = new("--depth") { Description = "How many measurement steps from the target's species count as near, for generated candidates (default 2).", DefaultValueFactory = _ => 2 };
     private readonly Option<int> _top = new("--top") { Description = "How many options of each kind to list (default 10).", DefaultValueFactory = _ => 10 };
     private readonly Option<bool> _noAdjust = new("--no-adjust") { Description = "Plan on the solve of the data as given, without the suspect procedure." };
-    private readonly Option<bool> _json = new("--json") { Description = "Write the result as JSON." };
-    private readonly Option<bool> _skipInvalid = new("--skip-invalid") { Description = "Use the valid rows when some rows have errors." };
+    private readonly Option<bool> _json = CommonOptions.Json();
+    private readonly Option<bool> _skipInvalid = CommonOptions.SkipInvalid();
 
     /// <summary>Builds the command bound to <paramref name="context"/>.</summary>
     public Command Build(CommandContext context)

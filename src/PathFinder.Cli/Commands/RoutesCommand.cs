@@ -10,16 +10,16 @@ namespace PathFinder.Cli.Commands;
 /// <summary><c>pathfinder routes &lt;network&gt; --target "…"</c>: every minimal Hess's-law route to a target, best first.</summary>
 public sealed class RoutesCommand
 {
-    private readonly Argument<string> _network = new("network") { Description = "A CSV file or a folder of CSV files." };
-    private readonly Option<string> _target = new("--target", "-t") { Description = "The target: a balanced equation, or one species for its formation.", Required = true };
-    private readonly Option<string> _property = new("--property", "-p") { Description = "dH (default), dG, dS or dU.", DefaultValueFactory = _ => "dH" };
+    private readonly Argument<string> _network = CommonOptions.Network();
+    private readonly Option<string> _target = CommonOptions.Target();
+    private readonly Option<string> _property = CommonOptions.Property();
     private readonly Option<int> _maxSteps = new("--max-steps") { Description = "Longest route searched, in measurements (default 6).", DefaultValueFactory = _ => 6 };
     private readonly Option<int> _top = new("--top") { Description = "How many routes to list, best first (default 10).", DefaultValueFactory = _ => 10 };
     private readonly Option<int> _explain = new("--explain") { Description = "How many of the listed routes to spell out step by step (default 3).", DefaultValueFactory = _ => 3 };
     private readonly Option<double> _timeBudget = new("--time-budget") { Description = "Seconds the search may take before it reports what it found as incomplete (default 20).", DefaultValueFactory = _ => 20.0 };
     private readonly Option<double?> _temperature = new("--temperature") { Description = "Also report ΔrH, ΔrS, ΔrG and K of the target at this temperature in K (needs ΔS or S° data, and heat capacities)." };
-    private readonly Option<bool> _json = new("--json") { Description = "Write the result as JSON." };
-    private readonly Option<bool> _skipInvalid = new("--skip-invalid") { Description = "Use the valid rows when some rows have errors." };
+    private readonly Option<bool> _json = CommonOptions.Json();
+    private readonly Option<bool> _skipInvalid = CommonOptions.SkipInvalid();
 
     /// <summary>Builds the command bound to <paramref name="context"/>.</summary>
     public Command Build(CommandContext context)

@@ -8,14 +8,14 @@ namespace PathFinder.Cli.Commands;
 /// <summary><c>pathfinder solve &lt;network&gt;</c>: one self-consistent best set of species values (weighted least squares).</summary>
 public sealed class SolveCommand
 {
-    private readonly Argument<string> _network = new("network") { Description = "A CSV file or a folder of CSV files." };
+    private readonly Argument<string> _network = CommonOptions.Network();
     private readonly Option<string> _property = new("--property", "-p") { Description = "dH (default: ΔfH° from ΔH and ΔU data), dG (ΔfG°) or dS (S° from ΔS and S° data).", DefaultValueFactory = _ => "dH" };
     private readonly Option<bool> _noAdjust = new("--no-adjust") { Description = "Solve the data as given, without the suspect procedure." };
     private readonly Option<double> _threshold = new("--threshold") { Description = "|z| threshold of the suspect procedure (default 2).", DefaultValueFactory = _ => 2.0 };
     private readonly Option<string> _format = new("--format", "-f") { Description = "table (default), csv, json or markdown.", DefaultValueFactory = _ => "table" };
     private readonly Option<bool> _json = new("--json") { Description = "Same as --format json." };
     private readonly Option<double?> _temperature = new("--temperature") { Description = "Also give every species' value at this temperature in K, moved with the heat-capacity data (dH: ΔfH°, needs Cp of the species and its elements; dS: S°; dG: ΔfG° from ΔH and S° data)." };
-    private readonly Option<bool> _skipInvalid = new("--skip-invalid") { Description = "Use the valid rows when some rows have errors." };
+    private readonly Option<bool> _skipInvalid = CommonOptions.SkipInvalid();
 
     /// <summary>Builds the command bound to <paramref name="context"/>.</summary>
     public Command Build(CommandContext context)

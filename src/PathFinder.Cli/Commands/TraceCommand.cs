@@ -9,13 +9,13 @@ namespace PathFinder.Cli.Commands;
 /// <summary><c>pathfinder trace &lt;network&gt; --target "…"</c>: which measurements and sources a network estimate rests on.</summary>
 public sealed class TraceCommand
 {
-    private readonly Argument<string> _network = new("network") { Description = "A CSV file or a folder of CSV files." };
-    private readonly Option<string> _target = new("--target", "-t") { Description = "The target: a balanced equation, or one species for its formation.", Required = true };
-    private readonly Option<string> _property = new("--property", "-p") { Description = "dH (default), dG, dS or dU.", DefaultValueFactory = _ => "dH" };
+    private readonly Argument<string> _network = CommonOptions.Network();
+    private readonly Option<string> _target = CommonOptions.Target();
+    private readonly Option<string> _property = CommonOptions.Property();
     private readonly Option<int> _top = new("--top") { Description = "How many measurements to list, largest share first (default 10).", DefaultValueFactory = _ => 10 };
     private readonly Option<bool> _noAdjust = new("--no-adjust") { Description = "Trace the solve of the data as given, without the suspect procedure." };
-    private readonly Option<bool> _json = new("--json") { Description = "Write the result as JSON." };
-    private readonly Option<bool> _skipInvalid = new("--skip-invalid") { Description = "Use the valid rows when some rows have errors." };
+    private readonly Option<bool> _json = CommonOptions.Json();
+    private readonly Option<bool> _skipInvalid = CommonOptions.SkipInvalid();
 
     /// <summary>Builds the command bound to <paramref name="context"/>.</summary>
     public Command Build(CommandContext context)

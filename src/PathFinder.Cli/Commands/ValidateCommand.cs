@@ -10,7 +10,7 @@ namespace PathFinder.Cli.Commands;
 /// <summary><c>pathfinder validate &lt;network&gt;</c>: reads the data, checks every row, prints a summary and every problem.</summary>
 public sealed class ValidateCommand
 {
-    private readonly Argument<string> _network = new("network") { Description = "A CSV file or a folder of CSV files." };
+    private readonly Argument<string> _network = CommonOptions.Network();
     private readonly Option<bool> _json = new("--json") { Description = "Write the summary and diagnostics as JSON." };
 
     /// <summary>Builds the command bound to <paramref name="context"/>.</summary>
