@@ -16,7 +16,7 @@ public static class PlanOutput
         ValueProvenance current = plan.Current;
         string unit = current.Model.Unit.Symbol;
         double gasTerm = property == ThermoProperty.InternalEnergy
-            ? current.Target.GasMoleChange().ToDouble() * PhysicalConstants.GasConstant * PhysicalConstants.StandardTemperature / 1000.0
+            ? PropertyModel.EnthalpyMinusInternalEnergy(current.Target)
             : 0.0;
         string remeasureRule = settings.Uncertainty is { } absolute
             ? $"re-measured with u = {Text.Number(absolute)} {unit}"

@@ -18,7 +18,7 @@ public static class RouteOutput
         suspects ??= new HashSet<string>(StringComparer.Ordinal);
         string unit = model.Unit.Symbol;
         double gasTerm = property == ThermoProperty.InternalEnergy
-            ? report.Target.GasMoleChange().ToDouble() * PhysicalConstants.GasConstant * PhysicalConstants.StandardTemperature / 1000.0
+            ? PropertyModel.EnthalpyMinusInternalEnergy(report.Target)
             : 0.0;
         if (json)
         {

@@ -105,6 +105,6 @@ public static class TraceOutput
 
     private static double GasTerm(ValueProvenance provenance, ThermoProperty property) =>
         property == ThermoProperty.InternalEnergy
-            ? provenance.Target.GasMoleChange().ToDouble() * PhysicalConstants.GasConstant * PhysicalConstants.StandardTemperature / 1000.0
+            ? PropertyModel.EnthalpyMinusInternalEnergy(provenance.Target)
             : 0.0;
 }

@@ -111,6 +111,13 @@ public sealed class PropertyModel
         return new PropertyModel(family, reference, unknowns, prepared, vectors, warnings);
     }
 
+    /// <summary>ΔH − ΔU = Δn(gas)·R·T of an equation, in kJ/mol: what turns a ΔU into a ΔH (and back).</summary>
+    public static double EnthalpyMinusInternalEnergy(ChemicalEquation equation, double temperature = PhysicalConstants.StandardTemperature)
+    {
+        ArgumentNullException.ThrowIfNull(equation);
+        return ConstantVolumeCalorimetry.Correction(equation.GasMoleChange().ToDouble(), temperature) / 1000.0;
+    }
+
     /// <summary>The position of a species among the unknowns, or -1 (fixed by convention, or absent).</summary>
     public int IndexOf(Species species) => _unknownIndex.TryGetValue(species, out int position) ? position : -1;
 
@@ -196,7 +203,7 @@ public sealed class PropertyModel
         if (measurement.Property == ThermoProperty.InternalEnergy)
         {
             Fraction gasChange = measurement.Equation.GasMoleChange();
-            double correction = ConstantVolumeCalorimetry.Correction(gasChange.ToDouble(), temperature) / 1000.0;
+            double correction = EnthalpyMinusInternalEnergy(measurement.Equation, temperature);
             value += correction;
             adjustments.Add(string.Create(CultureInfo.InvariantCulture, $"ΔU → ΔH: {correction:+0.000;-0.000} kJ/mol (Δn(gas) = {RationalText.Format(gasChange)}, T = {temperature:0.##} K)"));
         }
