@@ -21,6 +21,31 @@ public sealed class RoutesCommandTests : IDisposable
         + "H1,2 H2(g) + O2(g) -> 2 H2O(l),dH,-571.66,0.08,kJ/mol,,table\n");
 
     [Fact]
+    public void Routes_MarkRoutesThroughASuspect_UnlessTheDataAreTakenAsGiven()
+    {
+        // Given the demo lab, whose water-gas shift value C03 is the suspect
+        string demo = RepoPaths.Demo("combustion-lab");
+        const string Shift = "CO(g) + H2O(g) -> CO2(g) + H2(g)";
+
+        // When routes are listed with and without the suspect procedure
+        CliRun adjusted = CliRun.Of("routes", demo, "--target", Shift, "--json");
+        CliRun asGiven = CliRun.Of("routes", demo, "--target", Shift, "--json", "--no-adjust");
+
+        // Then the direct route through C03 names it as a suspect only in the adjusted run,
+        // and the network estimate as given is pulled towards C03's low value
+        Assert.Equal(ExitCodes.Success, adjusted.ExitCode);
+        Assert.Equal(ExitCodes.Success, asGiven.ExitCode);
+        using JsonDocument a = JsonDocument.Parse(adjusted.Out);
+        using JsonDocument g = JsonDocument.Parse(asGiven.Out);
+        JsonElement direct = a.RootElement.GetProperty("routes").EnumerateArray().Single(route => route.GetProperty("steps").GetArrayLength() == 1);
+        Assert.Equal(["C03"], direct.GetProperty("usesSuspects").EnumerateArray().Select(id => id.GetString()));
+        Assert.All(g.RootElement.GetProperty("routes").EnumerateArray(), route => Assert.Equal(0, route.GetProperty("usesSuspects").GetArrayLength()));
+        double adjustedEstimate = a.RootElement.GetProperty("networkEstimate").GetProperty("value").GetDouble();
+        double givenEstimate = g.RootElement.GetProperty("networkEstimate").GetProperty("value").GetDouble();
+        Assert.True(givenEstimate < adjustedEstimate, $"{givenEstimate} should be below {adjustedEstimate}");
+    }
+
+    [Fact]
     public void Routes_Text_ShowsTheRouteToCarbonMonoxideWithItsValue()
     {
         // Given the combustions of graphite and CO (CODATA 1989 values, from memory)
