@@ -38,7 +38,8 @@ public sealed class ExplorerAppHeadlessTests : IDisposable
                 {
                     app.InjectKey(Key.CursorDown);
                 }
-            }));
+            }
+            ));
             steps.Enqueue(("selected", () => ScreenText(app).Contains("C03  dH = -47.60", StringComparison.Ordinal), () => app.InjectKey(Key.E.WithCtrl)));
             steps.Enqueue(("dialog", () => app.TopRunnableView is Dialog, () =>
             {
@@ -49,23 +50,27 @@ public sealed class ExplorerAppHeadlessTests : IDisposable
                 }
 
                 app.InjectKey(Key.Enter);
-            }));
+            }
+            ));
             steps.Enqueue(("excluded", () => ReferenceEquals(app.TopRunnableView, window) && !vm.IsBusy && vm.HasUnsavedChanges, () =>
             {
                 screens["excluded"] = ScreenText(app);
                 app.InjectKey(Key.S.WithCtrl);
-            }));
+            }
+            ));
             steps.Enqueue(("saved", () => !vm.HasUnsavedChanges, () =>
             {
                 screens["saved"] = ScreenText(app);
                 app.InjectKey(Key.F7);
-            }));
+            }
+            ));
             steps.Enqueue(("curation", () => window.CurrentScreen == Screen.Curation, () =>
             {
                 app.LayoutAndDraw();
                 screens["curation"] = ScreenText(app);
                 app.InjectKey(Key.Q.WithCtrl);
-            }));
+            }
+            ));
             RunScript(app, window, steps);
 
             Assert.Empty(steps);
@@ -125,7 +130,8 @@ public sealed class ExplorerAppHeadlessTests : IDisposable
         {
             screens["help"] = ScreenText(app);
             app.InjectKey(Key.Esc);
-        }));
+        }
+        ));
         steps.Enqueue(("closed", () => ReferenceEquals(app.TopRunnableView, window), () => app.InjectKey(Key.Q.WithCtrl)));
         RunScript(app, window, steps);
 
@@ -159,19 +165,22 @@ public sealed class ExplorerAppHeadlessTests : IDisposable
                 before = vm.Consistency.Summary;
                 // When the user opens the first suspect's cycles, then jumps to its source
                 app.InjectKey(Key.Enter);
-            }));
+            }
+            ));
             steps.Enqueue(("its cycles", () => vm.Consistency.CycleFilter is not null, () =>
             {
                 app.LayoutAndDraw();
                 screens["cycles"] = ScreenText(app);
                 app.InjectKey(Key.J.WithCtrl);
-            }));
+            }
+            ));
             steps.Enqueue(("its source", () => window.CurrentScreen == Screen.Sources, () =>
             {
                 app.LayoutAndDraw();
                 screens["source"] = ScreenText(app);
                 app.InjectKey(Key.F6);
-            }));
+            }
+            ));
             // And excludes the suspect from the consistency screen with a reason
             steps.Enqueue(("back", () => window.CurrentScreen == Screen.Consistency, () => app.InjectKey(Key.E.WithCtrl)));
             steps.Enqueue(("dialog", () => app.TopRunnableView is Dialog, () =>
@@ -183,13 +192,15 @@ public sealed class ExplorerAppHeadlessTests : IDisposable
                 }
 
                 app.InjectKey(Key.Enter);
-            }));
+            }
+            ));
             steps.Enqueue(("re-solved", () => ReferenceEquals(app.TopRunnableView, window) && !vm.IsBusy && vm.HasUnsavedChanges && !vm.IsAnalysisStale, () =>
             {
                 app.LayoutAndDraw();
                 screens["after"] = ScreenText(app);
                 app.InjectKey(Key.S.WithCtrl);
-            }));
+            }
+            ));
             steps.Enqueue(("saved", () => !vm.HasUnsavedChanges, () => app.InjectKey(Key.Q.WithCtrl)));
             RunScript(app, window, steps);
         }
@@ -224,7 +235,8 @@ public sealed class ExplorerAppHeadlessTests : IDisposable
                 app.LayoutAndDraw();
                 screens["reopened"] = ScreenText(app);
                 app.InjectKey(Key.Q.WithCtrl);
-            }));
+            }
+            ));
             RunScript(app, window, steps);
         }
 
