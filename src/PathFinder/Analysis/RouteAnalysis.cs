@@ -65,6 +65,13 @@ public static class RouteAnalysis
         }
 
         Species[] cancelled = seen.Where(species => sum.CoefficientOf(species).IsZero).ToArray();
+
+        // The sum equals the target term by term; show it in the target's order, as the user wrote it.
+        if (sum.Terms.Count == target.Terms.Count && target.Terms.All(term => sum.CoefficientOf(term.Species) == term.Coefficient))
+        {
+            sum = target;
+        }
+
         return new ExplainedRoute(number, steps, route.Value, route.Uncertainty, route.IsIndependent, cancelled, sum);
     }
 }
