@@ -1,3 +1,5 @@
+using PathFinder.Analysis;
+using PathFinder.Chemistry;
 using PathFinder.Data;
 using PathFinder.Tests.TestSupport;
 
@@ -33,4 +35,15 @@ internal static class AnalysisNetworks
         Assert.Empty(result.Errors);
         return result;
     }
+
+    /// <summary>The enthalpy solution of <see cref="Redundant"/>, as given (no suspect procedure).</summary>
+    public static SolveReport SolveRedundant(TempFolder folder)
+    {
+        NetworkReadResult read = Read(folder, Redundant);
+        return NetworkSolver.Solve(PropertyModel.Build(read.Network, PropertyFamily.Enthalpy), adjust: false);
+    }
+
+    /// <summary>A target read against the species of a solved model.</summary>
+    public static ChemicalEquation Target(SolveReport report, string text) =>
+        TargetReaction.Parse(text, new ReactionNetwork("t", report.Model.Measurements.Select(item => item.Measurement))).Value;
 }

@@ -12,14 +12,9 @@ public sealed class ExperimentPlanTests : IDisposable
 
     public void Dispose() => _folder.Dispose();
 
-    private SolveReport Solve()
-    {
-        NetworkReadResult read = AnalysisNetworks.Read(_folder, AnalysisNetworks.Redundant);
-        return NetworkSolver.Solve(PropertyModel.Build(read.Network, PropertyFamily.Enthalpy), adjust: false);
-    }
+    private SolveReport Solve() => AnalysisNetworks.SolveRedundant(_folder);
 
-    private static ChemicalEquation Parse(SolveReport report, string text) =>
-        TargetReaction.Parse(text, new ReactionNetwork("t", report.Model.Measurements.Select(item => item.Measurement))).Value;
+    private static ChemicalEquation Parse(SolveReport report, string text) => AnalysisNetworks.Target(report, text);
 
     private static double ReSolvedUncertainty(ObservationSystem system, SparseRow target) =>
         WeightedLeastSquares.Solve(system).Estimate(target).StandardUncertainty;
