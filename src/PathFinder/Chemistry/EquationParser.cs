@@ -16,6 +16,8 @@ public static class EquationParser
 {
     private static readonly string[] Arrows = ["<=>", "->", "→", "="];
 
+    private static readonly System.Buffers.SearchValues<char> ArrowStarts = System.Buffers.SearchValues.Create("<-→=");
+
     /// <summary>Reads an equation, resolving species with <see cref="SpeciesParser"/>. Never throws for bad input.</summary>
     public static ParseResult<ChemicalEquation> Parse(string text) => Parse(text, SpeciesParser.Parse);
 
@@ -94,6 +96,14 @@ public static class EquationParser
         int length = 0;
         for (int i = 0; i < text.Length; i++)
         {
+            // Every arrow starts with one of these characters; jump to the next one.
+            int next = text.AsSpan(i).IndexOfAny(ArrowStarts);
+            if (next < 0)
+            {
+                break;
+            }
+
+            i += next;
             foreach (string arrow in Arrows)
             {
                 if (string.CompareOrdinal(text, i, arrow, 0, arrow.Length) != 0)

@@ -56,13 +56,14 @@ public static class NetworkReader
 
         var measurements = new List<Measurement>();
         var firstById = new Dictionary<string, SourceLocation>(StringComparer.Ordinal);
-        var equations = new Dictionary<string, ParsedEquation>(StringComparer.Ordinal);
+        var equations = new EquationCache();
+        var signatureIds = new List<int>();
         foreach (string file in files)
         {
-            ReadFile(file, catalog, equations, measurements, firstById, diagnostics);
+            ReadFile(file, catalog, equations, measurements, signatureIds, firstById, diagnostics);
         }
 
-        AddNetworkWarnings(measurements, catalog, heatCapacities, diagnostics);
+        AddNetworkWarnings(measurements, signatureIds, catalog, heatCapacities, diagnostics);
         List<Diagnostic> ordered = diagnostics
             .OrderBy(diagnostic => diagnostic.Location.File, StringComparer.Ordinal)
             .ThenBy(diagnostic => diagnostic.Location.Line)
@@ -101,7 +102,7 @@ public static class NetworkReader
         return models;
     }
 
-    private static void ReadFile(string file, SpeciesCatalog catalog, Dictionary<string, ParsedEquation> equations, List<Measurement> measurements, Dictionary<string, SourceLocation> firstById, List<Diagnostic> diagnostics)
+    private static void ReadFile(string file, SpeciesCatalog catalog, EquationCache equations, List<Measurement> measurements, List<int> signatureIds, Dictionary<string, SourceLocation> firstById, List<Diagnostic> diagnostics)
     {
         CsvTable? table = CsvTable.Read(file, file, diagnostics);
         if (table is null)
@@ -138,16 +139,18 @@ public static class NetworkReader
                 duplicate = true;
             }
 
-            Measurement? measurement = ReadRow(row, table, map, catalog, equations, defaultSource, diagnostics);
+            Measurement? measurement = ReadRow(row, table, map, catalog, equations, defaultSource, diagnostics, out int signatureId);
             if (measurement is not null && !duplicate)
             {
                 measurements.Add(measurement);
+                signatureIds.Add(signatureId);
             }
         }
     }
 
-    private static Measurement? ReadRow(CsvRow row, CsvTable table, ColumnMap columns, SpeciesCatalog catalog, Dictionary<string, ParsedEquation> equations, string defaultSource, List<Diagnostic> diagnostics)
+    private static Measurement? ReadRow(CsvRow row, CsvTable table, ColumnMap columns, SpeciesCatalog catalog, EquationCache equations, string defaultSource, List<Diagnostic> diagnostics, out int signatureId)
     {
+        signatureId = -1;
         int before = diagnostics.Count;
         if (row.Fields.Count > table.Header.Count)
         {
@@ -172,7 +175,7 @@ public static class NetworkReader
             diagnostics.Add(Diagnostic.Error("unknown-property", row.LocationOf(columns.Property, "property"), $"unknown property '{propertyText}'", $"use one of {string.Join(", ", ThermoProperties.Codes)}"));
         }
 
-        ChemicalEquation? equation = ReadEquation(row, columns.Equation, catalog, equations, propertyKnown ? property : null, diagnostics);
+        ChemicalEquation? equation = ReadEquation(row, columns.Equation, catalog, equations, propertyKnown ? property : null, diagnostics, out int equationSignature);
 
         EnergyUnit unit = propertyKnown ? property.CanonicalUnit() : EnergyUnit.KilojoulePerMole;
         string unitText = row.FieldOrEmpty(columns.Unit);
@@ -240,6 +243,7 @@ public static class NetworkReader
             return null;
         }
 
+        signatureId = equationSignature;
         Dictionary<string, string>? notes = null;
         for (int i = 0; i < table.Header.Count; i++)
         {
@@ -266,8 +270,9 @@ public static class NetworkReader
         };
     }
 
-    private static ChemicalEquation? ReadEquation(CsvRow row, int column, SpeciesCatalog catalog, Dictionary<string, ParsedEquation> equations, ThermoProperty? property, List<Diagnostic> diagnostics)
+    private static ChemicalEquation? ReadEquation(CsvRow row, int column, SpeciesCatalog catalog, EquationCache equations, ThermoProperty? property, List<Diagnostic> diagnostics, out int signatureId)
     {
+        signatureId = -1;
         string raw = column < row.Fields.Count ? row.Fields[column] : "";
         int leading = raw.Length - raw.TrimStart().Length;
         string text = raw.Trim();
@@ -291,15 +296,18 @@ public static class NetworkReader
                 return null;
             }
 
-            return ChemicalEquation.FromTerms([new EquationTerm(value, Fraction.One)]);
+            ChemicalEquation single = ChemicalEquation.FromTerms([new EquationTerm(value, Fraction.One)]);
+            signatureId = equations.SignatureIdOf(single);
+            return single;
         }
 
         // Repeated determinations repeat the equation text word for word; parse and balance-check each text once.
-        if (!equations.TryGetValue(text, out ParsedEquation? known))
+        if (!equations.ByText.TryGetValue(text, out ParsedEquation? known))
         {
             ParseResult<ChemicalEquation> result = EquationParser.Parse(text, catalog.Resolve);
-            known = new ParsedEquation(result, result.TryGetValue(out ChemicalEquation? value) ? value.FindImbalances() : []);
-            equations[text] = known;
+            IReadOnlyList<string> found = result.TryGetValue(out ChemicalEquation? value) ? value.FindImbalances() : [];
+            known = new ParsedEquation(result, found, value is not null && found.Count == 0 ? equations.SignatureIdOf(value) : -1);
+            equations.ByText[text] = known;
         }
 
         ParseResult<ChemicalEquation> equation = known.Result;
@@ -316,6 +324,7 @@ public static class NetworkReader
             return null;
         }
 
+        signatureId = known.SignatureId;
         return parsed;
     }
 
@@ -352,22 +361,14 @@ public static class NetworkReader
         return number;
     }
 
-    private static void AddNetworkWarnings(List<Measurement> measurements, SpeciesCatalog catalog, IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities, List<Diagnostic> diagnostics)
+    private static void AddNetworkWarnings(List<Measurement> measurements, List<int> signatureIds, SpeciesCatalog catalog, IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities, List<Diagnostic> diagnostics)
     {
-        var seen = new Dictionary<(string Source, ThermoProperty Property, string Reaction), Measurement>();
+        var seen = new Dictionary<(string Source, ThermoProperty Property, int Reaction), Measurement>();
         var uses = new Dictionary<Species, List<Measurement>>();
-
-        // Measurements of one equation text share one equation object, so its signature is built once.
-        var signatures = new Dictionary<ChemicalEquation, string>(ReferenceEqualityComparer.Instance);
-        foreach (Measurement measurement in measurements)
+        for (int i = 0; i < measurements.Count; i++)
         {
-            if (!signatures.TryGetValue(measurement.Equation, out string? signature))
-            {
-                signature = ReactionSignature(measurement.Equation);
-                signatures[measurement.Equation] = signature;
-            }
-
-            var key = (measurement.Source, measurement.Property, signature);
+            Measurement measurement = measurements[i];
+            var key = (measurement.Source, measurement.Property, signatureIds[i]);
             if (seen.TryGetValue(key, out Measurement? first))
             {
                 diagnostics.Add(Diagnostic.Warning("repeated-measurement", measurement.Location with { Field = "equation" }, $"'{measurement.Id}' measures the same reaction as '{first.Id}' in source '{measurement.Source}'", "if both are independent determinations keep them; if one is a copy, drop it"));
@@ -521,5 +522,29 @@ public static class NetworkReader
     }
 
     /// <summary>The parse of one equation text and its element/charge imbalances, kept for texts that recur.</summary>
-    private sealed record ParsedEquation(ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances);
+    /// <param name="Result">The parse.</param>
+    /// <param name="Imbalances">The element and charge imbalances, empty when balanced.</param>
+    /// <param name="SignatureId">The id of the reaction up to scale (see <see cref="EquationCache.SignatureIdOf"/>), -1 when unusable.</param>
+    private sealed record ParsedEquation(ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances, int SignatureId);
+
+    /// <summary>Equation texts already read, and a small id per reaction signature so that repeats are found by integer.</summary>
+    private sealed class EquationCache
+    {
+        private readonly Dictionary<string, int> _signatureIds = new(StringComparer.Ordinal);
+
+        public Dictionary<string, ParsedEquation> ByText { get; } = new(StringComparer.Ordinal);
+
+        /// <summary>Equal ids for equations that are the same reaction up to a positive scale factor.</summary>
+        public int SignatureIdOf(ChemicalEquation equation)
+        {
+            string signature = ReactionSignature(equation);
+            if (!_signatureIds.TryGetValue(signature, out int id))
+            {
+                id = _signatureIds.Count;
+                _signatureIds[signature] = id;
+            }
+
+            return id;
+        }
+    }
 }
