@@ -110,7 +110,7 @@ public sealed class ChemicalEquation
                 }
 
                 Formula formula = term.Species.Formula;
-                foreach (KeyValuePair<string, Fraction> pair in formula.Composition)
+                foreach (KeyValuePair<string, Fraction> pair in formula.CompositionSpan)
                 {
                     if (!SmallRational.TryFrom(pair.Value, out long n, out long d))
                     {
