@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Text;
 using Fractions;
 
@@ -92,6 +93,7 @@ public sealed class ChemicalEquation
     /// Whether Σ ν·count is zero for every element and for the charge, in checked 64-bit rationals; false when
     /// unbalanced or when a number does not fit, in which case <see cref="ListImbalances"/> decides exactly.
     /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private bool IsBalancedQuick()
     {
         Span<long> numerators = stackalloc long[16];
@@ -247,6 +249,7 @@ public sealed class ChemicalEquation
         }
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static ChemicalEquation FromTerms(IEnumerable<EquationTerm> terms, bool isFormation)
     {
         // Equations are short: species are matched by a linear scan, and a dictionary is only built for long sums.

@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using Fractions;
 using PathFinder.Diagnostics;
 
@@ -22,6 +23,7 @@ public static class EquationParser
     public static ParseResult<ChemicalEquation> Parse(string text) => Parse(text, SpeciesParser.Parse);
 
     /// <summary>Reads an equation, resolving each species token with <paramref name="resolveSpecies"/> (for declared keys).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ParseResult<ChemicalEquation> Parse(string text, Func<string, ParseResult<Species>> resolveSpecies)
     {
         ArgumentNullException.ThrowIfNull(text);
@@ -89,6 +91,7 @@ public static class EquationParser
         return ParseResult<ChemicalEquation>.Ok(equation);
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static (int At, int Length) FindArrow(string text, out ParseFailure? failure)
     {
         failure = null;
@@ -127,6 +130,7 @@ public static class EquationParser
         return (found, length);
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static ParseResult<List<EquationTerm>> ReadSide(string text, int start, int end, Func<string, ParseResult<Species>> resolveSpecies, int sign)
     {
         // Words are kept as (start, length) in the text; only species names and messages become strings.
@@ -189,6 +193,7 @@ public static class EquationParser
         return ParseResult<List<EquationTerm>>.Ok(terms);
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static ParseFailure? ReadTerm(string text, List<(int Start, int Length)> words, int first, int count, Func<string, ParseResult<Species>> resolveSpecies, int sign, out EquationTerm term)
     {
         term = default;

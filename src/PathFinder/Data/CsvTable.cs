@@ -1,4 +1,5 @@
 using System.Globalization;
+using System.Runtime.CompilerServices;
 using System.Text;
 using CsvHelper;
 using CsvHelper.Configuration;
@@ -79,6 +80,7 @@ public sealed class CsvTable
     }
 
     /// <summary>Parses CSV content already in memory (see <see cref="Read"/>).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static CsvTable? Parse(byte[] bytes, string displayPath, ICollection<Diagnostic> diagnostics)
     {
         ArgumentNullException.ThrowIfNull(bytes);
@@ -232,6 +234,7 @@ public sealed class CsvTable
     }
 
     /// <summary>Where each field's content starts in the raw record (1-based), honouring RFC 4180 quotes.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static int[] FieldColumns(string raw, char delimiter, int count)
     {
         var columns = new int[count];

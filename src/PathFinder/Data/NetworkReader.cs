@@ -1,4 +1,5 @@
 using System.Globalization;
+using System.Runtime.CompilerServices;
 using System.Text;
 using Fractions;
 using PathFinder.Chemistry;
@@ -102,6 +103,7 @@ public static class NetworkReader
         return models;
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static void ReadFile(string file, SpeciesCatalog catalog, EquationCache equations, List<Measurement> measurements, List<int> signatureIds, Dictionary<string, SourceLocation> firstById, List<Diagnostic> diagnostics)
     {
         CsvTable? table = CsvTable.Read(file, file, diagnostics);
@@ -148,6 +150,7 @@ public static class NetworkReader
         }
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static Measurement? ReadRow(CsvRow row, CsvTable table, ColumnMap columns, SpeciesCatalog catalog, EquationCache equations, string defaultSource, List<Diagnostic> diagnostics, out int signatureId)
     {
         signatureId = -1;
@@ -270,6 +273,7 @@ public static class NetworkReader
         };
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static ChemicalEquation? ReadEquation(CsvRow row, int column, SpeciesCatalog catalog, EquationCache equations, ThermoProperty? property, List<Diagnostic> diagnostics, out int signatureId)
     {
         signatureId = -1;
@@ -361,6 +365,7 @@ public static class NetworkReader
         return number;
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static void AddNetworkWarnings(List<Measurement> measurements, List<int> signatureIds, SpeciesCatalog catalog, IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities, List<Diagnostic> diagnostics)
     {
         var seen = new Dictionary<(string Source, ThermoProperty Property, int Reaction), Measurement>();
@@ -433,6 +438,7 @@ public static class NetworkReader
     }
 
     /// <summary>The signature in checked 64-bit rationals, or null when a number does not fit.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static string? QuickSignature(EquationTerm[] sorted)
     {
         if (!SmallRational.TryFrom(sorted[0].Coefficient, out long scaleNumerator, out long scaleDenominator))
