@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Text;
 using Fractions;
 
@@ -86,7 +87,85 @@ public sealed class ChemicalEquation
 
     /// <summary>Checks element and charge balance; returns one message per imbalance, empty when balanced.</summary>
     /// <remarks>Messages spell the imbalance out: "left has 4 H, right has 2 H".</remarks>
-    public IReadOnlyList<string> FindImbalances()
+    public IReadOnlyList<string> FindImbalances() => IsBalancedQuick() ? [] : ListImbalances();
+
+    /// <summary>
+    /// Whether Σ ν·count is zero for every element and for the charge, in checked 64-bit rationals; false when
+    /// unbalanced or when a number does not fit, in which case <see cref="ListImbalances"/> decides exactly.
+    /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private bool IsBalancedQuick()
+    {
+        Span<long> numerators = stackalloc long[16];
+        Span<long> denominators = stackalloc long[16];
+        var symbols = new string[16];
+        int count = 0;
+        long charge = 0;
+        long chargeDenominator = 1;
+        try
+        {
+            foreach (EquationTerm term in _terms)
+            {
+                if (!SmallRational.TryFrom(term.Coefficient, out long nu, out long nuDenominator))
+                {
+                    return false;
+                }
+
+                Formula formula = term.Species.Formula;
+                foreach (KeyValuePair<string, Fraction> pair in formula.CompositionSpan)
+                {
+                    if (!SmallRational.TryFrom(pair.Value, out long n, out long d))
+                    {
+                        return false;
+                    }
+
+                    int at = 0;
+                    while (at < count && !string.Equals(symbols[at], pair.Key, StringComparison.Ordinal))
+                    {
+                        at++;
+                    }
+
+                    if (at == count)
+                    {
+                        if (count == symbols.Length)
+                        {
+                            return false;
+                        }
+
+                        symbols[at] = pair.Key;
+                        numerators[at] = 0;
+                        denominators[at] = 1;
+                        count++;
+                    }
+
+                    (numerators[at], denominators[at]) = SmallRational.Add(numerators[at], denominators[at], nu * n, nuDenominator * d);
+                }
+
+                (charge, chargeDenominator) = SmallRational.Add(charge, chargeDenominator, nu * formula.Charge, nuDenominator);
+            }
+        }
+        catch (OverflowException)
+        {
+            return false;
+        }
+
+        if (charge != 0)
+        {
+            return false;
+        }
+
+        for (int i = 0; i < count; i++)
+        {
+            if (numerators[i] != 0)
+            {
+                return false;
+            }
+        }
+
+        return true;
+    }
+
+    private List<string> ListImbalances()
     {
         var left = new SortedDictionary<string, Fraction>(StringComparer.Ordinal);
         var right = new SortedDictionary<string, Fraction>(StringComparer.Ordinal);
@@ -170,26 +249,79 @@ public sealed class ChemicalEquation
         }
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static ChemicalEquation FromTerms(IEnumerable<EquationTerm> terms, bool isFormation)
     {
-        var order = new List<Species>();
-        var sums = new Dictionary<Species, Fraction>();
+        // Equations are short: species are matched by a linear scan, and a dictionary is only built for long sums.
+        var species = new List<Species>(terms is ICollection<EquationTerm> collection ? collection.Count : 8);
+        var sums = new List<Fraction>(species.Capacity);
+        Dictionary<Species, int>? index = null;
         foreach (EquationTerm term in terms)
         {
-            if (!sums.TryGetValue(term.Species, out Fraction sum))
+            int at = -1;
+            if (index is not null)
             {
-                order.Add(term.Species);
-                sum = Fraction.Zero;
+                at = index.GetValueOrDefault(term.Species, -1);
+            }
+            else
+            {
+                for (int i = 0; i < species.Count; i++)
+                {
+                    if (species[i].Equals(term.Species))
+                    {
+                        at = i;
+                        break;
+                    }
+                }
             }
 
-            sums[term.Species] = (sum + term.Coefficient).Reduce();
+            if (at < 0)
+            {
+                species.Add(term.Species);
+                sums.Add((Fraction.Zero + term.Coefficient).Reduce());
+                if (index is not null)
+                {
+                    index[term.Species] = species.Count - 1;
+                }
+                else if (species.Count > 16)
+                {
+                    index = new Dictionary<Species, int>(species.Count * 2);
+                    for (int i = 0; i < species.Count; i++)
+                    {
+                        index[species[i]] = i;
+                    }
+                }
+            }
+            else
+            {
+                sums[at] = (sums[at] + term.Coefficient).Reduce();
+            }
         }
 
-        EquationTerm[] netted = order
-            .Where(species => !sums[species].IsZero)
-            .Select(species => new EquationTerm(species, sums[species]))
-            .OrderBy(term => term.Coefficient > Fraction.Zero ? 1 : 0)
-            .ToArray();
+        // Reactants first, then products, each side in order of first appearance.
+        int kept = 0;
+        foreach (Fraction sum in sums)
+        {
+            if (!sum.IsZero)
+            {
+                kept++;
+            }
+        }
+
+        var netted = new EquationTerm[kept];
+        int next = 0;
+        for (int pass = 0; pass < 2; pass++)
+        {
+            for (int i = 0; i < species.Count; i++)
+            {
+                Fraction sum = sums[i];
+                if (!sum.IsZero && (sum > Fraction.Zero) == (pass == 1))
+                {
+                    netted[next++] = new EquationTerm(species[i], sum);
+                }
+            }
+        }
+
         return new ChemicalEquation(netted, isFormation);
     }
 }

@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using Fractions;
 using PathFinder.Diagnostics;
 
@@ -16,10 +17,13 @@ public static class EquationParser
 {
     private static readonly string[] Arrows = ["<=>", "->", "→", "="];
 
+    private static readonly System.Buffers.SearchValues<char> ArrowStarts = System.Buffers.SearchValues.Create("<-→=");
+
     /// <summary>Reads an equation, resolving species with <see cref="SpeciesParser"/>. Never throws for bad input.</summary>
     public static ParseResult<ChemicalEquation> Parse(string text) => Parse(text, SpeciesParser.Parse);
 
     /// <summary>Reads an equation, resolving each species token with <paramref name="resolveSpecies"/> (for declared keys).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ParseResult<ChemicalEquation> Parse(string text, Func<string, ParseResult<Species>> resolveSpecies)
     {
         ArgumentNullException.ThrowIfNull(text);
@@ -87,6 +91,7 @@ public static class EquationParser
         return ParseResult<ChemicalEquation>.Ok(equation);
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static (int At, int Length) FindArrow(string text, out ParseFailure? failure)
     {
         failure = null;
@@ -94,6 +99,14 @@ public static class EquationParser
         int length = 0;
         for (int i = 0; i < text.Length; i++)
         {
+            // Every arrow starts with one of these characters; jump to the next one.
+            int next = text.AsSpan(i).IndexOfAny(ArrowStarts);
+            if (next < 0)
+            {
+                break;
+            }
+
+            i += next;
             foreach (string arrow in Arrows)
             {
                 if (string.CompareOrdinal(text, i, arrow, 0, arrow.Length) != 0)
@@ -117,10 +130,12 @@ public static class EquationParser
         return (found, length);
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static ParseResult<List<EquationTerm>> ReadSide(string text, int start, int end, Func<string, ParseResult<Species>> resolveSpecies, int sign)
     {
-        var terms = new List<EquationTerm>();
-        var words = new List<(string Word, int Offset)>();
+        // Words are kept as (start, length) in the text; only species names and messages become strings.
+        var terms = new List<EquationTerm>(8);
+        var words = new List<(int Start, int Length)>(24);
         int i = start;
         while (i <= end)
         {
@@ -140,21 +155,24 @@ public static class EquationParser
                 i++;
             }
 
-            words.Add((text[wordStart..i], wordStart));
+            words.Add((wordStart, i - wordStart));
         }
 
-        var current = new List<(string Word, int Offset)>();
-        foreach ((string word, int offset) in words.Append(("+", end)))
+        int termStart = 0;
+        for (int w = 0; w <= words.Count; w++)
         {
-            if (word != "+")
+            // A '+' after the last word closes the last term.
+            bool last = w == words.Count;
+            int offset = last ? end : words[w].Start;
+            if (!last && !(words[w].Length == 1 && text[offset] == '+'))
             {
-                current.Add((word, offset));
                 continue;
             }
 
-            if (current.Count == 0)
+            int count = w - termStart;
+            if (count == 0)
             {
-                if (offset == end && terms.Count == 0 && words.Count == 0)
+                if (last && terms.Count == 0 && words.Count == 0)
                 {
                     break;
                 }
@@ -162,41 +180,46 @@ public static class EquationParser
                 return ParseResult<List<EquationTerm>>.Fail(offset, "bad-equation", "a '+' has no species on one side", "separate species with ' + ' and write nothing else between them");
             }
 
-            ParseResult<EquationTerm> term = ReadTerm(current, resolveSpecies, sign);
-            if (!term.TryGetValue(out EquationTerm value))
+            ParseFailure? failure = ReadTerm(text, words, termStart, count, resolveSpecies, sign, out EquationTerm value);
+            if (failure is not null)
             {
-                return ParseResult<List<EquationTerm>>.Fail(term.Failure);
+                return ParseResult<List<EquationTerm>>.Fail(failure);
             }
 
             terms.Add(value);
-            current.Clear();
+            termStart = w + 1;
         }
 
         return ParseResult<List<EquationTerm>>.Ok(terms);
     }
 
-    private static ParseResult<EquationTerm> ReadTerm(List<(string Word, int Offset)> words, Func<string, ParseResult<Species>> resolveSpecies, int sign)
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static ParseFailure? ReadTerm(string text, List<(int Start, int Length)> words, int first, int count, Func<string, ParseResult<Species>> resolveSpecies, int sign, out EquationTerm term)
     {
-        if (words.Count > 2)
+        term = default;
+        string Word(int index) => text.Substring(words[first + index].Start, words[first + index].Length);
+        if (count > 2)
         {
-            return ParseResult<EquationTerm>.Fail(words[2].Offset, "bad-equation", $"unexpected '{words[2].Word}': a term is an optional coefficient and one species", "separate species with ' + ' (spaces around the plus)");
+            return new ParseFailure(words[first + 2].Start, $"unexpected '{Word(2)}': a term is an optional coefficient and one species", "separate species with ' + ' (spaces around the plus)", "bad-equation");
         }
 
         Fraction coefficient = Fraction.One;
         string speciesText;
         int speciesOffset;
-        if (words.Count == 2)
+        int termOffset = words[first].Start;
+        if (count == 2)
         {
-            if (!RationalText.TryParse(words[0].Word, out coefficient))
+            if (!RationalText.TryParse(text.AsSpan(words[first].Start, words[first].Length), out coefficient))
             {
-                return ParseResult<EquationTerm>.Fail(words[0].Offset, "bad-coefficient", $"'{words[0].Word}' is not a coefficient", "write coefficients as 2, 0.5 or 3/2 before the species");
+                return new ParseFailure(termOffset, $"'{Word(0)}' is not a coefficient", "write coefficients as 2, 0.5 or 3/2 before the species", "bad-coefficient");
             }
 
-            (speciesText, speciesOffset) = words[1];
+            speciesText = Word(1);
+            speciesOffset = words[first + 1].Start;
         }
         else
         {
-            (string word, int offset) = words[0];
+            ReadOnlySpan<char> word = text.AsSpan(termOffset, words[first].Length);
             int glued = 0;
             while (glued < word.Length && (char.IsAsciiDigit(word[glued]) || word[glued] is '.' or '/'))
             {
@@ -207,7 +230,7 @@ public static class EquationParser
             {
                 if (!RationalText.TryParse(word[..glued], out coefficient))
                 {
-                    return ParseResult<EquationTerm>.Fail(offset, "bad-coefficient", $"'{word[..glued]}' is not a coefficient", "write coefficients as 2, 0.5 or 3/2 before the species");
+                    return new ParseFailure(termOffset, $"'{word[..glued]}' is not a coefficient", "write coefficients as 2, 0.5 or 3/2 before the species", "bad-coefficient");
                 }
             }
             else
@@ -215,13 +238,13 @@ public static class EquationParser
                 glued = 0;
             }
 
-            speciesText = word[glued..];
-            speciesOffset = offset + glued;
+            speciesText = word[glued..].ToString();
+            speciesOffset = termOffset + glued;
         }
 
         if (coefficient <= Fraction.Zero)
         {
-            return ParseResult<EquationTerm>.Fail(words[0].Offset, "bad-coefficient", "coefficients must be positive", "move the species to the other side of the arrow instead of using a negative or zero coefficient");
+            return new ParseFailure(termOffset, "coefficients must be positive", "move the species to the other side of the arrow instead of using a negative or zero coefficient", "bad-coefficient");
         }
 
         ParseResult<Species> species = resolveSpecies(speciesText);
@@ -234,9 +257,10 @@ public static class EquationParser
                 failure = failure with { Hint = "separate species with ' + ' (spaces around the plus); a + touching a formula is read as a charge" };
             }
 
-            return ParseResult<EquationTerm>.Fail(failure);
+            return failure;
         }
 
-        return ParseResult<EquationTerm>.Ok(new EquationTerm(value, sign < 0 ? -coefficient : coefficient));
+        term = new EquationTerm(value, sign < 0 ? -coefficient : coefficient);
+        return null;
     }
 }

@@ -12,6 +12,7 @@ namespace PathFinder.Chemistry;
 public sealed class Formula : IEquatable<Formula>
 {
     private readonly SortedDictionary<string, Fraction> _counts;
+    private readonly KeyValuePair<string, Fraction>[] _countList;
 
     internal Formula(string text, IDictionary<string, Fraction> counts, int charge)
     {
@@ -25,6 +26,7 @@ public sealed class Formula : IEquatable<Formula>
             }
         }
 
+        _countList = [.. _counts];
         Charge = charge;
         HillNotation = BuildHill();
     }
@@ -37,6 +39,9 @@ public sealed class Formula : IEquatable<Formula>
 
     /// <summary>Element symbol to count, in Hill order (C, H, then alphabetical; alphabetical if no C).</summary>
     public IReadOnlyDictionary<string, Fraction> Composition => _counts;
+
+    /// <summary>The same counts as <see cref="Composition"/>, as an array that is cheap to walk.</summary>
+    internal ReadOnlySpan<KeyValuePair<string, Fraction>> CompositionSpan => _countList;
 
     /// <summary>The net charge in units of the elementary charge.</summary>
     public int Charge { get; }

@@ -79,6 +79,36 @@ public static class RationalText
         return true;
     }
 
+    /// <summary>Reads a coefficient from part of a text; see <see cref="TryParse(string, out Fraction)"/>.</summary>
+    /// <remarks>Plain integers and fractions of up to 18 digits are read without building a string.</remarks>
+    public static bool TryParse(ReadOnlySpan<char> text, out Fraction value)
+    {
+        int slash = text.IndexOf('/');
+        ReadOnlySpan<char> top = slash >= 0 ? text[..slash] : text;
+        ReadOnlySpan<char> bottom = slash >= 0 ? text[(slash + 1)..] : "1";
+        if (top.Length is > 0 and <= 18 && bottom.Length is > 0 and <= 18 && !top.ContainsAnyExceptInRange('0', '9') && !bottom.ContainsAnyExceptInRange('0', '9'))
+        {
+            long numerator = long.Parse(top, NumberStyles.None, CultureInfo.InvariantCulture);
+            long denominator = long.Parse(bottom, NumberStyles.None, CultureInfo.InvariantCulture);
+            if (slash < 0)
+            {
+                value = new Fraction(new BigInteger(numerator));
+                return true;
+            }
+
+            if (denominator == 0)
+            {
+                value = Fraction.Zero;
+                return false;
+            }
+
+            value = new Fraction(new BigInteger(numerator), new BigInteger(denominator)).Reduce();
+            return true;
+        }
+
+        return TryParse(text.ToString(), out value);
+    }
+
     private static bool TryParseInteger(string text, out BigInteger value)
     {
         value = BigInteger.Zero;

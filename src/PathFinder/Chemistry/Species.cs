@@ -8,6 +8,9 @@ namespace PathFinder.Chemistry;
 /// </remarks>
 public sealed class Species : IEquatable<Species>
 {
+    // Species key every dictionary of a network; the key never changes, so its hash is computed once.
+    private readonly int _hashCode;
+
     private Species(Formula formula, PhysicalState state, string label, string name, string description)
     {
         Description = description;
@@ -16,6 +19,7 @@ public sealed class Species : IEquatable<Species>
         Label = label;
         Name = name;
         Key = label.Length > 0 ? $"{formula.HillNotation}({state})[{label}]" : $"{formula.HillNotation}({state})";
+        _hashCode = StringComparer.Ordinal.GetHashCode(Key);
     }
 
     /// <summary>The formula.</summary>
@@ -55,13 +59,13 @@ public sealed class Species : IEquatable<Species>
     public Species WithName(string name) => new(Formula, State, Label, name, Description);
 
     /// <inheritdoc/>
-    public bool Equals(Species? other) => other is not null && Key == other.Key;
+    public bool Equals(Species? other) => other is not null && (ReferenceEquals(this, other) || (_hashCode == other._hashCode && Key == other.Key));
 
     /// <inheritdoc/>
     public override bool Equals(object? obj) => Equals(obj as Species);
 
     /// <inheritdoc/>
-    public override int GetHashCode() => StringComparer.Ordinal.GetHashCode(Key);
+    public override int GetHashCode() => _hashCode;
 
     /// <inheritdoc/>
     public override string ToString() => Name;

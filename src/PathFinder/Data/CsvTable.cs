@@ -1,4 +1,5 @@
 using System.Globalization;
+using System.Runtime.CompilerServices;
 using System.Text;
 using CsvHelper;
 using CsvHelper.Configuration;
@@ -79,6 +80,7 @@ public sealed class CsvTable
     }
 
     /// <summary>Parses CSV content already in memory (see <see cref="Read"/>).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static CsvTable? Parse(byte[] bytes, string displayPath, ICollection<Diagnostic> diagnostics)
     {
         ArgumentNullException.ThrowIfNull(bytes);
@@ -106,24 +108,50 @@ public sealed class CsvTable
         }
 
         // CsvHelper only knows comments that start in the first column; blank indented ones too, keeping line numbers.
-        string[] lines = text.Split('\n');
-        for (int i = 0; i < lines.Length; i++)
+        // Files rarely have them, so the text is only split and rebuilt when one is there.
+        string? headerText = null;
+        bool indentedComment = false;
+        foreach (Range range in text.AsSpan().Split('\n'))
         {
-            if (lines[i].TrimStart().StartsWith('#') && !lines[i].StartsWith('#'))
+            ReadOnlySpan<char> line = text.AsSpan(range);
+            ReadOnlySpan<char> content = line.TrimStart();
+            if (content.StartsWith('#'))
             {
-                lines[i] = lines[i].EndsWith('\r') ? "\r" : "";
+                if (!line.StartsWith('#'))
+                {
+                    indentedComment = true;
+                    break;
+                }
+            }
+            else if (headerText is null && line.Trim().Length > 0)
+            {
+                headerText = line.ToString();
             }
         }
 
-        text = string.Join('\n', lines);
-        int headerIndex = Array.FindIndex(lines, line => line.Trim().Length > 0 && !line.TrimStart().StartsWith('#'));
-        if (headerIndex < 0)
+        if (indentedComment)
+        {
+            string[] lines = text.Split('\n');
+            for (int i = 0; i < lines.Length; i++)
+            {
+                if (lines[i].TrimStart().StartsWith('#') && !lines[i].StartsWith('#'))
+                {
+                    lines[i] = lines[i].EndsWith('\r') ? "\r" : "";
+                }
+            }
+
+            text = string.Join('\n', lines);
+            int firstIndex = Array.FindIndex(lines, line => line.Trim().Length > 0 && !line.TrimStart().StartsWith('#'));
+            headerText = firstIndex < 0 ? null : lines[firstIndex];
+        }
+
+        if (headerText is null)
         {
             diagnostics.Add(Diagnostic.Error("empty-file", fileLocation, "the file has no header and no data", "the first non-comment line must be the header: id,equation,property,value,uncertainty,unit,temperature,source"));
             return null;
         }
 
-        char delimiter = DetectDelimiter(lines[headerIndex]);
+        char delimiter = DetectDelimiter(headerText);
         var configuration = new CsvConfiguration(CultureInfo.InvariantCulture)
         {
             Delimiter = delimiter.ToString(),
@@ -202,20 +230,11 @@ public sealed class CsvTable
 
     private static int CountLineBreaks(string raw)
     {
-        string trimmed = raw.TrimEnd('\r', '\n');
-        int count = 0;
-        foreach (char ch in trimmed)
-        {
-            if (ch == '\n')
-            {
-                count++;
-            }
-        }
-
-        return count;
+        return raw.AsSpan().TrimEnd("\r\n").Count('\n');
     }
 
     /// <summary>Where each field's content starts in the raw record (1-based), honouring RFC 4180 quotes.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static int[] FieldColumns(string raw, char delimiter, int count)
     {
         var columns = new int[count];

@@ -1,4 +1,6 @@
 using System.Globalization;
+using System.Runtime.CompilerServices;
+using System.Text;
 using Fractions;
 using PathFinder.Chemistry;
 using PathFinder.Diagnostics;
@@ -55,13 +57,14 @@ public static class NetworkReader
 
         var measurements = new List<Measurement>();
         var firstById = new Dictionary<string, SourceLocation>(StringComparer.Ordinal);
-        var equations = new Dictionary<string, ParsedEquation>(StringComparer.Ordinal);
+        var equations = new EquationCache();
+        var signatureIds = new List<int>();
         foreach (string file in files)
         {
-            ReadFile(file, catalog, equations, measurements, firstById, diagnostics);
+            ReadFile(file, catalog, equations, measurements, signatureIds, firstById, diagnostics);
         }
 
-        AddNetworkWarnings(measurements, catalog, heatCapacities, diagnostics);
+        AddNetworkWarnings(measurements, signatureIds, catalog, heatCapacities, diagnostics);
         List<Diagnostic> ordered = diagnostics
             .OrderBy(diagnostic => diagnostic.Location.File, StringComparer.Ordinal)
             .ThenBy(diagnostic => diagnostic.Location.Line)
@@ -100,7 +103,8 @@ public static class NetworkReader
         return models;
     }
 
-    private static void ReadFile(string file, SpeciesCatalog catalog, Dictionary<string, ParsedEquation> equations, List<Measurement> measurements, Dictionary<string, SourceLocation> firstById, List<Diagnostic> diagnostics)
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static void ReadFile(string file, SpeciesCatalog catalog, EquationCache equations, List<Measurement> measurements, List<int> signatureIds, Dictionary<string, SourceLocation> firstById, List<Diagnostic> diagnostics)
     {
         CsvTable? table = CsvTable.Read(file, file, diagnostics);
         if (table is null)
@@ -125,27 +129,31 @@ public static class NetworkReader
         }
 
         string defaultSource = Path.GetFileNameWithoutExtension(file);
+        var map = new ColumnMap(columns, table.Header.Count);
         foreach (CsvRow row in table.Rows)
         {
             // Ids are checked on every row, valid or not, so a clash is reported even when the first row is bad.
-            string id = row.FieldOrEmpty(columns["id"]);
+            string id = row.FieldOrEmpty(map.Id);
             bool duplicate = false;
-            if (id.Length > 0 && !firstById.TryAdd(id, row.LocationOf(columns["id"], "id")))
+            if (id.Length > 0 && !firstById.TryAdd(id, row.LocationOf(map.Id, "id")))
             {
-                diagnostics.Add(Diagnostic.Error("duplicate-id", row.LocationOf(columns["id"], "id"), $"measurement id '{id}' was already used at {firstById[id]}", "give every measurement its own id"));
+                diagnostics.Add(Diagnostic.Error("duplicate-id", row.LocationOf(map.Id, "id"), $"measurement id '{id}' was already used at {firstById[id]}", "give every measurement its own id"));
                 duplicate = true;
             }
 
-            Measurement? measurement = ReadRow(row, table, columns, catalog, equations, defaultSource, diagnostics);
+            Measurement? measurement = ReadRow(row, table, map, catalog, equations, defaultSource, diagnostics, out int signatureId);
             if (measurement is not null && !duplicate)
             {
                 measurements.Add(measurement);
+                signatureIds.Add(signatureId);
             }
         }
     }
 
-    private static Measurement? ReadRow(CsvRow row, CsvTable table, Dictionary<string, int> columns, SpeciesCatalog catalog, Dictionary<string, ParsedEquation> equations, string defaultSource, List<Diagnostic> diagnostics)
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static Measurement? ReadRow(CsvRow row, CsvTable table, ColumnMap columns, SpeciesCatalog catalog, EquationCache equations, string defaultSource, List<Diagnostic> diagnostics, out int signatureId)
     {
+        signatureId = -1;
         int before = diagnostics.Count;
         if (row.Fields.Count > table.Header.Count)
         {
@@ -156,34 +164,34 @@ public static class NetworkReader
             return null;
         }
 
-        string id = row.FieldOrEmpty(columns["id"]);
+        string id = row.FieldOrEmpty(columns.Id);
         if (id.Length == 0)
         {
-            diagnostics.Add(Diagnostic.Error("missing-id", row.LocationOf(columns["id"], "id"), "the measurement has no id", "give every row a unique id such as m1"));
+            diagnostics.Add(Diagnostic.Error("missing-id", row.LocationOf(columns.Id, "id"), "the measurement has no id", "give every row a unique id such as m1"));
         }
 
         ThermoProperty property = ThermoProperty.Enthalpy;
-        string propertyText = row.FieldOrEmpty(columns["property"]);
+        string propertyText = row.FieldOrEmpty(columns.Property);
         bool propertyKnown = ThermoProperties.TryParse(propertyText, out property);
         if (!propertyKnown)
         {
-            diagnostics.Add(Diagnostic.Error("unknown-property", row.LocationOf(columns["property"], "property"), $"unknown property '{propertyText}'", $"use one of {string.Join(", ", ThermoProperties.Codes)}"));
+            diagnostics.Add(Diagnostic.Error("unknown-property", row.LocationOf(columns.Property, "property"), $"unknown property '{propertyText}'", $"use one of {string.Join(", ", ThermoProperties.Codes)}"));
         }
 
-        ChemicalEquation? equation = ReadEquation(row, columns["equation"], catalog, equations, propertyKnown ? property : null, diagnostics);
+        ChemicalEquation? equation = ReadEquation(row, columns.Equation, catalog, equations, propertyKnown ? property : null, diagnostics, out int equationSignature);
 
         EnergyUnit unit = propertyKnown ? property.CanonicalUnit() : EnergyUnit.KilojoulePerMole;
-        string unitText = row.FieldOrEmpty(columns["unit"]);
+        string unitText = row.FieldOrEmpty(columns.Unit);
         if (unitText.Length > 0)
         {
             if (!EnergyUnit.TryParse(unitText, out EnergyUnit parsedUnit))
             {
-                diagnostics.Add(Diagnostic.Error("unknown-unit", row.LocationOf(columns["unit"], "unit"), $"unknown unit '{unitText}'", $"use one of {string.Join(", ", EnergyUnit.AcceptedSymbols)}"));
+                diagnostics.Add(Diagnostic.Error("unknown-unit", row.LocationOf(columns.Unit, "unit"), $"unknown unit '{unitText}'", $"use one of {string.Join(", ", EnergyUnit.AcceptedSymbols)}"));
             }
             else if (propertyKnown && (parsedUnit.Dimension == UnitDimension.MolarEnergy) != property.IsEnergy())
             {
                 string expected = property.IsEnergy() ? "an energy unit such as kJ/mol" : "an entropy unit such as J/(mol·K)";
-                diagnostics.Add(Diagnostic.Error("wrong-unit", row.LocationOf(columns["unit"], "unit"), $"{property.Code()} cannot be in {parsedUnit.Symbol}", $"use {expected}"));
+                diagnostics.Add(Diagnostic.Error("wrong-unit", row.LocationOf(columns.Unit, "unit"), $"{property.Code()} cannot be in {parsedUnit.Symbol}", $"use {expected}"));
             }
             else
             {
@@ -191,21 +199,21 @@ public static class NetworkReader
             }
         }
 
-        double? value = ReadNumber(row, columns["value"], "value", table.DecimalComma, diagnostics);
-        double? uncertainty = ReadNumber(row, columns["uncertainty"], "uncertainty", table.DecimalComma, diagnostics);
+        double? value = ReadNumber(row, columns.Value, "value", table.DecimalComma, diagnostics);
+        double? uncertainty = ReadNumber(row, columns.Uncertainty, "uncertainty", table.DecimalComma, diagnostics);
         if (uncertainty is <= 0.0)
         {
-            diagnostics.Add(Diagnostic.Error("bad-uncertainty", row.LocationOf(columns["uncertainty"], "uncertainty"), $"the uncertainty must be positive, not {uncertainty.Value.ToString(CultureInfo.InvariantCulture)}", "give the standard uncertainty of the value (a zero uncertainty would make it exact)"));
+            diagnostics.Add(Diagnostic.Error("bad-uncertainty", row.LocationOf(columns.Uncertainty, "uncertainty"), $"the uncertainty must be positive, not {uncertainty.Value.ToString(CultureInfo.InvariantCulture)}", "give the standard uncertainty of the value (a zero uncertainty would make it exact)"));
             uncertainty = null;
         }
 
         double coverage = 1.0;
-        if (columns["coverage"] >= 0 && row.FieldOrEmpty(columns["coverage"]).Length > 0)
+        if (columns.Coverage >= 0 && row.FieldOrEmpty(columns.Coverage).Length > 0)
         {
-            double? k = ReadNumber(row, columns["coverage"], "coverage", table.DecimalComma, diagnostics);
+            double? k = ReadNumber(row, columns.Coverage, "coverage", table.DecimalComma, diagnostics);
             if (k is < 1.0 or > 10.0)
             {
-                diagnostics.Add(Diagnostic.Error("bad-coverage", row.LocationOf(columns["coverage"], "coverage"), $"the coverage factor k = {k.Value.ToString(CultureInfo.InvariantCulture)} is outside 1..10", "k is usually 2 (about 95 %); leave the field blank for a standard uncertainty"));
+                diagnostics.Add(Diagnostic.Error("bad-coverage", row.LocationOf(columns.Coverage, "coverage"), $"the coverage factor k = {k.Value.ToString(CultureInfo.InvariantCulture)} is outside 1..10", "k is usually 2 (about 95 %); leave the field blank for a standard uncertainty"));
             }
             else if (k is not null)
             {
@@ -214,12 +222,12 @@ public static class NetworkReader
         }
 
         double temperature = PhysicalConstants.StandardTemperature;
-        if (columns["temperature"] >= 0 && row.FieldOrEmpty(columns["temperature"]).Length > 0)
+        if (columns.Temperature >= 0 && row.FieldOrEmpty(columns.Temperature).Length > 0)
         {
-            double? t = ReadNumber(row, columns["temperature"], "temperature", table.DecimalComma, diagnostics);
+            double? t = ReadNumber(row, columns.Temperature, "temperature", table.DecimalComma, diagnostics);
             if (t is <= 0.0 or > 10000.0)
             {
-                diagnostics.Add(Diagnostic.Error("bad-temperature", row.LocationOf(columns["temperature"], "temperature"), $"the temperature {t.Value.ToString(CultureInfo.InvariantCulture)} K is impossible here", "give the temperature in kelvin, above 0 and at most 10000 K (298.15 for 25 °C)"));
+                diagnostics.Add(Diagnostic.Error("bad-temperature", row.LocationOf(columns.Temperature, "temperature"), $"the temperature {t.Value.ToString(CultureInfo.InvariantCulture)} K is impossible here", "give the temperature in kelvin, above 0 and at most 10000 K (298.15 for 25 °C)"));
             }
             else if (t is not null)
             {
@@ -227,7 +235,7 @@ public static class NetworkReader
             }
         }
 
-        string source = columns["source"] >= 0 ? row.FieldOrEmpty(columns["source"]) : "";
+        string source = columns.Source >= 0 ? row.FieldOrEmpty(columns.Source) : "";
         if (source.Length == 0)
         {
             source = defaultSource;
@@ -238,12 +246,13 @@ public static class NetworkReader
             return null;
         }
 
-        var notes = new Dictionary<string, string>(StringComparer.Ordinal);
-        var known = new HashSet<int>(columns.Values.Where(index => index >= 0));
+        signatureId = equationSignature;
+        Dictionary<string, string>? notes = null;
         for (int i = 0; i < table.Header.Count; i++)
         {
-            if (!known.Contains(i) && row.FieldOrEmpty(i).Length > 0)
+            if (!columns.IsKnown(i) && row.FieldOrEmpty(i).Length > 0)
             {
+                notes ??= new Dictionary<string, string>(StringComparer.Ordinal);
                 notes[table.Header[i]] = row.FieldOrEmpty(i);
             }
         }
@@ -252,20 +261,22 @@ public static class NetworkReader
         {
             Id = id,
             Equation = equation,
-            EquationText = row.FieldOrEmpty(columns["equation"]),
+            EquationText = row.FieldOrEmpty(columns.Equation),
             Property = property,
             Value = unit.ToCanonicalValue(value.Value),
             Uncertainty = unit.ToCanonicalValue(uncertainty.Value / coverage),
             Unit = unit,
             Temperature = temperature,
             Source = source,
-            Location = row.LocationOf(columns["equation"], "equation"),
-            Notes = notes,
+            Location = row.LocationOf(columns.Equation, "equation"),
+            Notes = notes ?? NoNotes,
         };
     }
 
-    private static ChemicalEquation? ReadEquation(CsvRow row, int column, SpeciesCatalog catalog, Dictionary<string, ParsedEquation> equations, ThermoProperty? property, List<Diagnostic> diagnostics)
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static ChemicalEquation? ReadEquation(CsvRow row, int column, SpeciesCatalog catalog, EquationCache equations, ThermoProperty? property, List<Diagnostic> diagnostics, out int signatureId)
     {
+        signatureId = -1;
         string raw = column < row.Fields.Count ? row.Fields[column] : "";
         int leading = raw.Length - raw.TrimStart().Length;
         string text = raw.Trim();
@@ -289,15 +300,18 @@ public static class NetworkReader
                 return null;
             }
 
-            return ChemicalEquation.FromTerms([new EquationTerm(value, Fraction.One)]);
+            ChemicalEquation single = ChemicalEquation.FromTerms([new EquationTerm(value, Fraction.One)]);
+            signatureId = equations.SignatureIdOf(single);
+            return single;
         }
 
         // Repeated determinations repeat the equation text word for word; parse and balance-check each text once.
-        if (!equations.TryGetValue(text, out ParsedEquation? known))
+        if (!equations.ByText.TryGetValue(text, out ParsedEquation? known))
         {
             ParseResult<ChemicalEquation> result = EquationParser.Parse(text, catalog.Resolve);
-            known = new ParsedEquation(result, result.TryGetValue(out ChemicalEquation? value) ? value.FindImbalances() : []);
-            equations[text] = known;
+            IReadOnlyList<string> found = result.TryGetValue(out ChemicalEquation? value) ? value.FindImbalances() : [];
+            known = new ParsedEquation(result, found, value is not null && found.Count == 0 ? equations.SignatureIdOf(value) : -1);
+            equations.ByText[text] = known;
         }
 
         ParseResult<ChemicalEquation> equation = known.Result;
@@ -314,46 +328,52 @@ public static class NetworkReader
             return null;
         }
 
+        signatureId = known.SignatureId;
         return parsed;
     }
 
     private static double? ReadNumber(CsvRow row, int column, string field, bool decimalComma, List<Diagnostic> diagnostics)
     {
         string text = row.FieldOrEmpty(column);
-        SourceLocation location = row.LocationOf(column, field);
         if (text.Length == 0)
         {
-            diagnostics.Add(Diagnostic.Error("missing-number", location, $"the {field} is empty", $"give the {field} as a number such as -74.87"));
+            diagnostics.Add(Diagnostic.Error("missing-number", row.LocationOf(column, field), $"the {field} is empty", $"give the {field} as a number such as -74.87"));
             return null;
         }
 
         string normalised = decimalComma ? text.Replace(',', '.') : text;
-        normalised = normalised.Replace('−', '-');
+        if (normalised.Contains('−', StringComparison.Ordinal))
+        {
+            normalised = normalised.Replace('−', '-');
+        }
+
         if (!double.TryParse(normalised, NumberStyles.Float, CultureInfo.InvariantCulture, out double number))
         {
             string hint = !decimalComma && text.Contains(',', StringComparison.Ordinal)
                 ? "use a decimal point (1.5), not a decimal comma"
                 : "write a plain number such as -74.87 or 1.2e3";
-            diagnostics.Add(Diagnostic.Error("bad-number", location, $"the {field} '{text}' is not a number", hint));
+            diagnostics.Add(Diagnostic.Error("bad-number", row.LocationOf(column, field), $"the {field} '{text}' is not a number", hint));
             return null;
         }
 
         if (!double.IsFinite(number))
         {
-            diagnostics.Add(Diagnostic.Error("bad-number", location, $"the {field} '{text}' is not a finite number", "give a finite value; leave the row out if there is none"));
+            diagnostics.Add(Diagnostic.Error("bad-number", row.LocationOf(column, field), $"the {field} '{text}' is not a finite number", "give a finite value; leave the row out if there is none"));
             return null;
         }
 
         return number;
     }
 
-    private static void AddNetworkWarnings(List<Measurement> measurements, SpeciesCatalog catalog, IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities, List<Diagnostic> diagnostics)
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static void AddNetworkWarnings(List<Measurement> measurements, List<int> signatureIds, SpeciesCatalog catalog, IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities, List<Diagnostic> diagnostics)
     {
-        var seen = new Dictionary<(string Source, ThermoProperty Property, string Reaction), Measurement>();
+        var seen = new Dictionary<(string Source, ThermoProperty Property, int Reaction), Measurement>();
         var uses = new Dictionary<Species, List<Measurement>>();
-        foreach (Measurement measurement in measurements)
+        for (int i = 0; i < measurements.Count; i++)
         {
-            var key = (measurement.Source, measurement.Property, ReactionSignature(measurement.Equation));
+            Measurement measurement = measurements[i];
+            var key = (measurement.Source, measurement.Property, signatureIds[i]);
             if (seen.TryGetValue(key, out Measurement? first))
             {
                 diagnostics.Add(Diagnostic.Warning("repeated-measurement", measurement.Location with { Field = "equation" }, $"'{measurement.Id}' measures the same reaction as '{first.Id}' in source '{measurement.Source}'", "if both are independent determinations keep them; if one is a copy, drop it"));
@@ -412,13 +432,125 @@ public static class NetworkReader
             return "";
         }
 
-        EquationTerm pivot = equation.Terms.OrderBy(term => term.Species.Key, StringComparer.Ordinal).First();
+        EquationTerm[] sorted = [.. equation.Terms];
+        Array.Sort(sorted, static (a, b) => string.CompareOrdinal(a.Species.Key, b.Species.Key));
+        return QuickSignature(sorted) ?? ExactSignature(sorted);
+    }
+
+    /// <summary>The signature in checked 64-bit rationals, or null when a number does not fit.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static string? QuickSignature(EquationTerm[] sorted)
+    {
+        if (!SmallRational.TryFrom(sorted[0].Coefficient, out long scaleNumerator, out long scaleDenominator))
+        {
+            return null;
+        }
+
+        var text = new StringBuilder();
+        try
+        {
+            scaleNumerator = Math.Abs(scaleNumerator);
+            foreach (EquationTerm term in sorted)
+            {
+                if (!SmallRational.TryFrom(term.Coefficient, out long n, out long d))
+                {
+                    return null;
+                }
+
+                (long numerator, long denominator) = SmallRational.Divide(n, d, scaleNumerator, scaleDenominator);
+                if (text.Length > 0)
+                {
+                    text.Append(';');
+                }
+
+                text.Append(term.Species.Key).Append(':').Append(numerator.ToString(CultureInfo.InvariantCulture));
+                if (denominator != 1)
+                {
+                    text.Append('/').Append(denominator.ToString(CultureInfo.InvariantCulture));
+                }
+            }
+        }
+        catch (OverflowException)
+        {
+            return null;
+        }
+
+        return text.ToString();
+    }
+
+    private static string ExactSignature(EquationTerm[] sorted)
+    {
+        EquationTerm pivot = sorted[0];
         Fraction scale = pivot.Coefficient < Fraction.Zero ? -pivot.Coefficient : pivot.Coefficient;
-        return string.Join(";", equation.Terms
-            .OrderBy(term => term.Species.Key, StringComparer.Ordinal)
-            .Select(term => $"{term.Species.Key}:{RationalText.Format(term.Coefficient / scale)}"));
+        return string.Join(";", sorted.Select(term => $"{term.Species.Key}:{RationalText.Format(term.Coefficient / scale)}"));
+    }
+
+    private static readonly IReadOnlyDictionary<string, string> NoNotes = new Dictionary<string, string>(StringComparer.Ordinal);
+
+    /// <summary>The column index of each known field in one file (-1 when absent).</summary>
+    private sealed class ColumnMap(Dictionary<string, int> columns, int headerCount)
+    {
+        private readonly bool[] _known = Known(columns, headerCount);
+
+        public int Id { get; } = columns["id"];
+
+        public int Equation { get; } = columns["equation"];
+
+        public int Property { get; } = columns["property"];
+
+        public int Value { get; } = columns["value"];
+
+        public int Uncertainty { get; } = columns["uncertainty"];
+
+        public int Unit { get; } = columns["unit"];
+
+        public int Temperature { get; } = columns["temperature"];
+
+        public int Source { get; } = columns["source"];
+
+        public int Coverage { get; } = columns["coverage"];
+
+        public bool IsKnown(int index) => index < _known.Length && _known[index];
+
+        private static bool[] Known(Dictionary<string, int> columns, int headerCount)
+        {
+            var known = new bool[headerCount];
+            foreach (int index in columns.Values)
+            {
+                if (index >= 0 && index < headerCount)
+                {
+                    known[index] = true;
+                }
+            }
+
+            return known;
+        }
     }
 
     /// <summary>The parse of one equation text and its element/charge imbalances, kept for texts that recur.</summary>
-    private sealed record ParsedEquation(ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances);
+    /// <param name="Result">The parse.</param>
+    /// <param name="Imbalances">The element and charge imbalances, empty when balanced.</param>
+    /// <param name="SignatureId">The id of the reaction up to scale (see <see cref="EquationCache.SignatureIdOf"/>), -1 when unusable.</param>
+    private sealed record ParsedEquation(ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances, int SignatureId);
+
+    /// <summary>Equation texts already read, and a small id per reaction signature so that repeats are found by integer.</summary>
+    private sealed class EquationCache
+    {
+        private readonly Dictionary<string, int> _signatureIds = new(StringComparer.Ordinal);
+
+        public Dictionary<string, ParsedEquation> ByText { get; } = new(StringComparer.Ordinal);
+
+        /// <summary>Equal ids for equations that are the same reaction up to a positive scale factor.</summary>
+        public int SignatureIdOf(ChemicalEquation equation)
+        {
+            string signature = ReactionSignature(equation);
+            if (!_signatureIds.TryGetValue(signature, out int id))
+            {
+                id = _signatureIds.Count;
+                _signatureIds[signature] = id;
+            }
+
+            return id;
+        }
+    }
 }

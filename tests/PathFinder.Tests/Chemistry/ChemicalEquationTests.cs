@@ -147,4 +147,37 @@ public sealed class ChemicalEquationTests
 
         Assert.True(equation.Add(again.Scale(new Fraction(-1))).IsEmpty);
     }
+
+    [Fact]
+    public void FindImbalances_IsExactBeyond64BitCoefficients()
+    {
+        // Given coefficients too large for 64-bit arithmetic, once balanced and once off by one hydrogen molecule
+        string big = "100000000000000000000";
+        ChemicalEquation balanced = ChemicalEquation.Parse($"{big} H2(g) + 50000000000000000000 O2(g) -> {big} H2O(l)");
+        ChemicalEquation unbalanced = ChemicalEquation.Parse($"100000000000000000001 H2(g) + 50000000000000000000 O2(g) -> {big} H2O(l)");
+
+        // Then the balanced one passes and the other is reported with its exact counts
+        Assert.Empty(balanced.FindImbalances());
+        Assert.Equal(["left has 200000000000000000002 H, right has 200000000000000000000 H"], unbalanced.FindImbalances());
+    }
+
+    [Fact]
+    public void Add_NetsRepeatedSpeciesInLongSums()
+    {
+        // Given a sum of twenty equations, each using O2(g) and a species of its own (more terms than a short scan handles)
+        ChemicalEquation sum = ChemicalEquation.Parse("H2(g) + 1/2 O2(g) -> H2O(l)");
+        for (int n = 1; n <= 20; n++)
+        {
+            sum = sum.Add(ChemicalEquation.Parse($"C{n}H{2 * n}(g) + {3 * n}/2 O2(g) -> {n} CO2(g) + {n} H2O(l)"));
+        }
+
+        // Then O2 and H2O are netted into one term each, reactants stay before products, and the sum balances
+        Assert.Single(sum.Terms, term => term.Species.Key == "O2(g)");
+        Assert.Single(sum.Terms, term => term.Species.Key == "H2O(l)");
+        Assert.Equal(new Fraction(1 + (3 * 210), 2), -sum.CoefficientOf(Species.Parse("O2(g)")));
+        Assert.Equal(new Fraction(211), sum.CoefficientOf(Species.Parse("H2O(l)")));
+        int firstProduct = sum.Terms.ToList().FindIndex(term => term.Coefficient > Fraction.Zero);
+        Assert.All(sum.Terms.Skip(firstProduct), term => Assert.True(term.Coefficient > Fraction.Zero));
+        Assert.Empty(sum.FindImbalances());
+    }
 }

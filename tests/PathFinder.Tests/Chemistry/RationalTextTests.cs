@@ -67,4 +67,25 @@ public sealed class RationalTextTests
         Assert.True(RationalText.TryParse(text, out Fraction value));
         Assert.Equal(text, RationalText.Format(value));
     }
+
+    [Theory]
+    [InlineData("2")]
+    [InlineData("02")]
+    [InlineData("3/2")]
+    [InlineData("6/4")]
+    [InlineData("0.25")]
+    [InlineData("5/0")]
+    [InlineData("1/2/3")]
+    [InlineData("123456789012345678901234/3")]
+    [InlineData("")]
+    public void TryParse_FromASpanAgreesWithTheStringForm(string text)
+    {
+        // Given a coefficient read from part of a longer text, and the same coefficient as a string
+        bool fromString = RationalText.TryParse(text, out Fraction expected);
+        bool fromSpan = RationalText.TryParse($"[{text}]".AsSpan(1, text.Length), out Fraction actual);
+
+        // Then both readings agree
+        Assert.Equal(fromString, fromSpan);
+        Assert.Equal(expected, actual);
+    }
 }
