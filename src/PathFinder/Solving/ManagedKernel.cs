@@ -169,7 +169,7 @@ internal sealed class ManagedKernel : IDenseKernel
         }
     }
 
-    public void SubtractLowRank(double[] g, int n, double[] vectors, double[] coefficients, int rank)
+    public void SubtractLowRank(AlignedBuffer g, int n, double[] vectors, double[] coefficients, int rank)
     {
         // Column by column: G[:, c] −= Σⱼ cⱼ·vⱼ[c]·vⱼ; the rank vectors stay in cache while the columns stream past.
         for (int c = 0; c < n; c++)
