@@ -30,6 +30,7 @@ internal sealed class IncrementalFit
     private readonly int[] _local;
     private readonly double[] _coefficients;
     private readonly LowRank[] _lowRank;
+    private readonly RowGroup[]?[] _rowGroups;
     private readonly int _blockSize;
     private double[] _gBuffer = [];
     private double[] _tBuffer = [];
@@ -67,6 +68,7 @@ internal sealed class IncrementalFit
         }
 
         _lowRank = new LowRank[engine.Components.Count];
+        _rowGroups = new RowGroup[engine.Components.Count][];
         for (int c = 0; c < _lowRank.Length; c++)
         {
             Refresh(c);
@@ -129,6 +131,8 @@ internal sealed class IncrementalFit
             ManagedKernel.Axpy(_coefficients[p], component.Covariance.AsSpan(_local[p] * k, k), g);
         }
 
+        // g −= Σⱼ cⱼ(gⱼᵀa)·gⱼ: the dots first (a is sparse), then one pass over g for all the vectors.
+        int used = 0;
         for (int j = 0; j < lowRank.Count; j++)
         {
             double dot = 0.0;
@@ -141,28 +145,16 @@ internal sealed class IncrementalFit
             double alpha = -lowRank.Coefficients[j] * dot;
             if (alpha != 0.0)
             {
-                ManagedKernel.Axpy(alpha, lowRank.Vectors.AsSpan(offset, k), g);
+                lowRank.Alphas[used] = alpha;
+                lowRank.Offsets[used] = offset;
+                used++;
             }
         }
 
-        // t = A·g over the component's rows; spans in locals let the JIT keep everything in registers.
-        Span<double> t = _tBuffer.AsSpan(0, observations.Length);
-        ReadOnlySpan<int> rowStart = _rowStart;
-        ReadOnlySpan<int> local = _local;
-        ReadOnlySpan<double> coefficients = _coefficients;
-        ReadOnlySpan<double> gv = g;
-        for (int p = 0; p < observations.Length; p++)
-        {
-            int l = observations[p];
-            int e1 = rowStart[l + 1];
-            double sum = 0.0;
-            for (int e = rowStart[l]; e < e1; e++)
-            {
-                sum += coefficients[e] * gv[local[e]];
-            }
+        ManagedKernel.AxpyMany(lowRank.Alphas.AsSpan(0, used), lowRank.Offsets.AsSpan(0, used), lowRank.Vectors, g);
 
-            t[p] = sum;
-        }
+        // t = A·g over the component's rows.
+        MultiplyRows(RowGroupsOf(c), g, _tBuffer.AsSpan(0, observations.Length));
 
         return new Probe(i, c, _gBuffer, _tBuffer);
     }
@@ -304,10 +296,82 @@ internal sealed class IncrementalFit
         }
     }
 
+    /// <summary>tₗ = aₗᵀg for every row of the groups, tₗ stored at the row's position.</summary>
+    /// <remarks>
+    /// Rows are grouped by length so the inner loop has a fixed trip count (no mispredicted loop exits); each tₗ is
+    /// summed in the row's own order, as a plain loop would.
+    /// </remarks>
+    private static void MultiplyRows(RowGroup[] groups, ReadOnlySpan<double> g, Span<double> t)
+    {
+        foreach (RowGroup group in groups)
+        {
+            int width = group.Width;
+            ReadOnlySpan<int> positions = group.Positions;
+            ReadOnlySpan<int> local = group.Local;
+            ReadOnlySpan<double> coefficients = group.Coefficients;
+            for (int r = 0; r < positions.Length; r++)
+            {
+                int e0 = r * width;
+                double sum = 0.0;
+                for (int e = e0; e < e0 + width; e++)
+                {
+                    sum += coefficients[e] * g[local[e]];
+                }
+
+                t[positions[r]] = sum;
+            }
+        }
+    }
+
+    /// <summary>Component c's rows grouped by their number of nonzeros, built on first use.</summary>
+    private RowGroup[] RowGroupsOf(int c)
+    {
+        if (_rowGroups[c] is { } built)
+        {
+            return built;
+        }
+
+        int[] observations = _engine.Components[c].Observations;
+        var byWidth = new SortedDictionary<int, List<int>>();
+        for (int p = 0; p < observations.Length; p++)
+        {
+            int l = observations[p];
+            int width = _rowStart[l + 1] - _rowStart[l];
+            if (!byWidth.TryGetValue(width, out List<int>? positions))
+            {
+                positions = [];
+                byWidth.Add(width, positions);
+            }
+
+            positions.Add(p);
+        }
+
+        var groups = new RowGroup[byWidth.Count];
+        int g = 0;
+        foreach ((int width, List<int> positions) in byWidth)
+        {
+            var local = new int[positions.Count * width];
+            var coefficients = new double[positions.Count * width];
+            for (int r = 0; r < positions.Count; r++)
+            {
+                int start = _rowStart[observations[positions[r]]];
+                Array.Copy(_local, start, local, r * width, width);
+                Array.Copy(_coefficients, start, coefficients, r * width, width);
+            }
+
+            groups[g++] = new RowGroup(width, positions.ToArray(), local, coefficients);
+        }
+
+        return _rowGroups[c] = groups;
+    }
+
     private LowRank LowRankOf(int c) => _lowRank[c] ??= new LowRank(_engine.Components[c].Size, Math.Max(1, Math.Min(_blockSize, _engine.Components[c].Size)));
 
     /// <summary>g = G·aᵢ (first k entries) for a prepared observation and tₗ = aₗᵀg for the observations of its component (in component order).</summary>
     internal sealed record Probe(int Observation, int Component, double[] G, double[] T);
+
+    /// <summary>Rows of one length: positions in the component's observation list, then local indices and coefficients, row after row.</summary>
+    private sealed record RowGroup(int Width, int[] Positions, int[] Local, double[] Coefficients);
 
     private sealed class LowRank(int size, int capacity)
     {
@@ -316,6 +380,12 @@ internal sealed class IncrementalFit
         public double[] Vectors { get; } = new double[size * capacity];
 
         public double[] Coefficients { get; } = new double[capacity];
+
+        /// <summary>Scratch: the nonzero multipliers of a probe's low-rank correction.</summary>
+        public double[] Alphas { get; } = new double[capacity];
+
+        /// <summary>Scratch: where the vectors of <see cref="Alphas"/> start in <see cref="Vectors"/>.</summary>
+        public int[] Offsets { get; } = new int[capacity];
 
         public int Count { get; set; }
 
