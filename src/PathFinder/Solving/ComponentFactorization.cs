@@ -26,7 +26,7 @@ internal sealed class ComponentFactorization
         Unknowns = unknowns;
         Observations = observations;
         int k = unknowns.Length;
-        Covariance = new double[k * k];
+        Covariance = new AlignedBuffer(k * k);
         Solution = new double[k];
         Determined = new bool[k];
         NullBasis = [];
@@ -48,7 +48,7 @@ internal sealed class ComponentFactorization
     public int Nullity => Size - Rank;
 
     /// <summary>G, the k×k generalized inverse of N (column-major, full symmetric), the covariance on estimable quantities.</summary>
-    public double[] Covariance { get; }
+    public AlignedBuffer Covariance { get; }
 
     /// <summary>The g-inverse solution x̂ = G·AᵀWv (entries for undetermined unknowns are arbitrary).</summary>
     public double[] Solution { get; }
@@ -82,7 +82,7 @@ internal sealed class ComponentFactorization
             NullBasis = (double[])NullBasis.Clone(),
             UpdatesSinceFactorization = UpdatesSinceFactorization,
         };
-        Covariance.CopyTo(copy.Covariance, 0);
+        Covariance.Span.CopyTo(copy.Covariance.Span);
         Solution.CopyTo(copy.Solution, 0);
         Determined.CopyTo(copy.Determined, 0);
         return copy;
@@ -93,7 +93,7 @@ internal sealed class ComponentFactorization
     {
         int k = Size;
         UpdatesSinceFactorization = 0;
-        Array.Clear(Covariance);
+        Covariance.Clear();
         Array.Clear(Solution);
         if (Observations.Length == 0)
         {

@@ -22,10 +22,10 @@ internal interface IDenseKernel
     void InvertFromFactor(double[] a, int n, int rank);
 
     /// <summary>Applies a symmetric low-rank correction G ← G − Σⱼ cⱼ·vⱼvⱼᵀ to a full (both triangles) n×n matrix.</summary>
-    /// <param name="g">The full symmetric matrix, column-major, leading dimension n.</param>
+    /// <param name="g">The full symmetric matrix, column-major, leading dimension n (updated in place).</param>
     /// <param name="n">The order.</param>
     /// <param name="vectors">The vectors vⱼ, column j at j·n (n × rank, column-major).</param>
     /// <param name="coefficients">The coefficients cⱼ.</param>
     /// <param name="rank">How many vectors to apply.</param>
-    void SubtractLowRank(double[] g, int n, double[] vectors, double[] coefficients, int rank);
+    void SubtractLowRank(AlignedBuffer g, int n, double[] vectors, double[] coefficients, int rank);
 }

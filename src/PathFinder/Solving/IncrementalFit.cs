@@ -1,3 +1,5 @@
+using System.Numerics;
+
 namespace PathFinder.Solving;
 
 /// <summary>Every observation's fitted value, aᵢᵀGaᵢ and normalized residual, kept current through weight changes.</summary>
@@ -30,6 +32,7 @@ internal sealed class IncrementalFit
     private readonly int[] _local;
     private readonly double[] _coefficients;
     private readonly LowRank[] _lowRank;
+    private readonly RowGroup[]?[] _rowGroups;
     private readonly int _blockSize;
     private double[] _gBuffer = [];
     private double[] _tBuffer = [];
@@ -67,6 +70,7 @@ internal sealed class IncrementalFit
         }
 
         _lowRank = new LowRank[engine.Components.Count];
+        _rowGroups = new RowGroup[engine.Components.Count][];
         for (int c = 0; c < _lowRank.Length; c++)
         {
             Refresh(c);
@@ -129,6 +133,8 @@ internal sealed class IncrementalFit
             ManagedKernel.Axpy(_coefficients[p], component.Covariance.AsSpan(_local[p] * k, k), g);
         }
 
+        // g −= Σⱼ cⱼ(gⱼᵀa)·gⱼ: the dots first (a is sparse), then one pass over g for all the vectors.
+        int used = 0;
         for (int j = 0; j < lowRank.Count; j++)
         {
             double dot = 0.0;
@@ -141,28 +147,16 @@ internal sealed class IncrementalFit
             double alpha = -lowRank.Coefficients[j] * dot;
             if (alpha != 0.0)
             {
-                ManagedKernel.Axpy(alpha, lowRank.Vectors.AsSpan(offset, k), g);
+                lowRank.Alphas[used] = alpha;
+                lowRank.Offsets[used] = offset;
+                used++;
             }
         }
 
-        // t = A·g over the component's rows; spans in locals let the JIT keep everything in registers.
-        Span<double> t = _tBuffer.AsSpan(0, observations.Length);
-        ReadOnlySpan<int> rowStart = _rowStart;
-        ReadOnlySpan<int> local = _local;
-        ReadOnlySpan<double> coefficients = _coefficients;
-        ReadOnlySpan<double> gv = g;
-        for (int p = 0; p < observations.Length; p++)
-        {
-            int l = observations[p];
-            int e1 = rowStart[l + 1];
-            double sum = 0.0;
-            for (int e = rowStart[l]; e < e1; e++)
-            {
-                sum += coefficients[e] * gv[local[e]];
-            }
+        ManagedKernel.AxpyMany(lowRank.Alphas.AsSpan(0, used), lowRank.Offsets.AsSpan(0, used), lowRank.Vectors, g);
 
-            t[p] = sum;
-        }
+        // t = A·g over the component's rows.
+        MultiplyRows(RowGroupsOf(c), g, _tBuffer.AsSpan(0, observations.Length));
 
         return new Probe(i, c, _gBuffer, _tBuffer);
     }
@@ -175,6 +169,11 @@ internal sealed class IncrementalFit
         double factor = ChangeFactor(i, uncertainty);
         double e = _values[i] - _fitted[i];
         int[] observations = _engine.Components[probe.Component].Observations;
+        if (observations.Length == _z.Length)
+        {
+            return EvaluateEvery(probe, uncertainty, factor * e, factor);
+        }
+
         int worst = -1;
         double best = 0.0;
         double own = double.NaN;
@@ -210,6 +209,60 @@ internal sealed class IncrementalFit
         }
 
         return (worst, own);
+    }
+
+    /// <summary><see cref="Evaluate"/> when the probed component holds every observation (position = index), vectorized.</summary>
+    /// <remarks>The same operations in the same order as <see cref="ZOf"/> element by element, so the same z to the last bit.</remarks>
+    private (int Worst, double OwnZ) EvaluateEvery(Probe probe, double uncertainty, double shift, double factor)
+    {
+        int i = probe.Observation;
+        int m = _z.Length;
+        ReadOnlySpan<double> t = probe.T.AsSpan(0, m);
+        ReadOnlySpan<double> values = _values;
+        ReadOnlySpan<double> fitted = _fitted;
+        ReadOnlySpan<double> quadratic = _quadratic;
+        ReadOnlySpan<double> uncertainties = _engine.Uncertainties;
+        Span<double> z = _zBuffer.AsSpan(0, m);
+        int l = 0;
+        if (Vector.IsHardwareAccelerated)
+        {
+            int width = Vector<double>.Count;
+            var vShift = new Vector<double>(shift);
+            var vFactor = new Vector<double>(factor);
+            var vCheckability = new Vector<double>(_checkability);
+            var vNaN = new Vector<double>(double.NaN);
+            for (; l + width <= m; l += width)
+            {
+                var tl = new Vector<double>(t.Slice(l, width));
+                Vector<double> residual = new Vector<double>(values.Slice(l, width)) - new Vector<double>(fitted.Slice(l, width)) - (vShift * tl);
+                Vector<double> q = new Vector<double>(quadratic.Slice(l, width)) - (vFactor * tl * tl);
+                var u = new Vector<double>(uncertainties.Slice(l, width));
+                Vector<double> u2 = u * u;
+                Vector<double> rest = u2 - q;
+                Vector<double> checkable = Vector.GreaterThan(rest, vCheckability * u2).As<long, double>();
+                Vector.ConditionalSelect(checkable, residual / Vector.SquareRoot(rest), vNaN).CopyTo(z.Slice(l, width));
+            }
+        }
+
+        for (; l < m; l++)
+        {
+            z[l] = ZOf(values[l] - fitted[l] - (shift * t[l]), uncertainties[l], quadratic[l] - (factor * t[l] * t[l]));
+        }
+
+        z[i] = ZOf(values[i] - fitted[i] - (shift * t[i]), uncertainty, quadratic[i] - (factor * t[i] * t[i]));
+        int worst = -1;
+        double best = 0.0;
+        for (l = 0; l < m; l++)
+        {
+            double a = Math.Abs(z[l]);
+            if (a > best || (worst < 0 && !double.IsNaN(a)))
+            {
+                worst = l;
+                best = a;
+            }
+        }
+
+        return (worst, z[i]);
     }
 
     /// <summary>Commits the change of observation i's uncertainty to u (one rank-one change).</summary>
@@ -304,10 +357,82 @@ internal sealed class IncrementalFit
         }
     }
 
+    /// <summary>tₗ = aₗᵀg for every row of the groups, tₗ stored at the row's position.</summary>
+    /// <remarks>
+    /// Rows are grouped by length so the inner loop has a fixed trip count (no mispredicted loop exits); each tₗ is
+    /// summed in the row's own order, as a plain loop would.
+    /// </remarks>
+    private static void MultiplyRows(RowGroup[] groups, ReadOnlySpan<double> g, Span<double> t)
+    {
+        foreach (RowGroup group in groups)
+        {
+            int width = group.Width;
+            ReadOnlySpan<int> positions = group.Positions;
+            ReadOnlySpan<int> local = group.Local;
+            ReadOnlySpan<double> coefficients = group.Coefficients;
+            for (int r = 0; r < positions.Length; r++)
+            {
+                int e0 = r * width;
+                double sum = 0.0;
+                for (int e = e0; e < e0 + width; e++)
+                {
+                    sum += coefficients[e] * g[local[e]];
+                }
+
+                t[positions[r]] = sum;
+            }
+        }
+    }
+
+    /// <summary>Component c's rows grouped by their number of nonzeros, built on first use.</summary>
+    private RowGroup[] RowGroupsOf(int c)
+    {
+        if (_rowGroups[c] is { } built)
+        {
+            return built;
+        }
+
+        int[] observations = _engine.Components[c].Observations;
+        var byWidth = new SortedDictionary<int, List<int>>();
+        for (int p = 0; p < observations.Length; p++)
+        {
+            int l = observations[p];
+            int width = _rowStart[l + 1] - _rowStart[l];
+            if (!byWidth.TryGetValue(width, out List<int>? positions))
+            {
+                positions = [];
+                byWidth.Add(width, positions);
+            }
+
+            positions.Add(p);
+        }
+
+        var groups = new RowGroup[byWidth.Count];
+        int g = 0;
+        foreach ((int width, List<int> positions) in byWidth)
+        {
+            var local = new int[positions.Count * width];
+            var coefficients = new double[positions.Count * width];
+            for (int r = 0; r < positions.Count; r++)
+            {
+                int start = _rowStart[observations[positions[r]]];
+                Array.Copy(_local, start, local, r * width, width);
+                Array.Copy(_coefficients, start, coefficients, r * width, width);
+            }
+
+            groups[g++] = new RowGroup(width, positions.ToArray(), local, coefficients);
+        }
+
+        return _rowGroups[c] = groups;
+    }
+
     private LowRank LowRankOf(int c) => _lowRank[c] ??= new LowRank(_engine.Components[c].Size, Math.Max(1, Math.Min(_blockSize, _engine.Components[c].Size)));
 
     /// <summary>g = G·aᵢ (first k entries) for a prepared observation and tₗ = aₗᵀg for the observations of its component (in component order).</summary>
     internal sealed record Probe(int Observation, int Component, double[] G, double[] T);
+
+    /// <summary>Rows of one length: positions in the component's observation list, then local indices and coefficients, row after row.</summary>
+    private sealed record RowGroup(int Width, int[] Positions, int[] Local, double[] Coefficients);
 
     private sealed class LowRank(int size, int capacity)
     {
@@ -316,6 +441,12 @@ internal sealed class IncrementalFit
         public double[] Vectors { get; } = new double[size * capacity];
 
         public double[] Coefficients { get; } = new double[capacity];
+
+        /// <summary>Scratch: the nonzero multipliers of a probe's low-rank correction.</summary>
+        public double[] Alphas { get; } = new double[capacity];
+
+        /// <summary>Scratch: where the vectors of <see cref="Alphas"/> start in <see cref="Vectors"/>.</summary>
+        public int[] Offsets { get; } = new int[capacity];
 
         public int Count { get; set; }
 

@@ -169,7 +169,7 @@ internal sealed class ManagedKernel : IDenseKernel
         }
     }
 
-    public void SubtractLowRank(double[] g, int n, double[] vectors, double[] coefficients, int rank)
+    public void SubtractLowRank(AlignedBuffer g, int n, double[] vectors, double[] coefficients, int rank)
     {
         // Column by column: G[:, c] −= Σⱼ cⱼ·vⱼ[c]·vⱼ; the rank vectors stay in cache while the columns stream past.
         for (int c = 0; c < n; c++)
@@ -211,6 +211,66 @@ internal sealed class ManagedKernel : IDenseKernel
         }
 
         return sum;
+    }
+
+    /// <summary>y += Σⱼ alphas[j]·x⁽ʲ⁾ with x⁽ʲ⁾ = vectors[offsets[j] .. offsets[j] + y.Length − 1].</summary>
+    /// <remarks>
+    /// Bit for bit the same as calling <see cref="Axpy"/> for j = 0, 1, … in turn (each element receives the same
+    /// products in the same order, each sum rounded), but y is loaded and stored once per four vectors.
+    /// </remarks>
+    internal static void AxpyMany(ReadOnlySpan<double> alphas, ReadOnlySpan<int> offsets, ReadOnlySpan<double> vectors, Span<double> y)
+    {
+        int length = y.Length;
+        int count = alphas.Length;
+        int k = 0;
+        if (Vector.IsHardwareAccelerated && length >= Vector<double>.Count * 2)
+        {
+            Span<Vector<double>> vy = MemoryMarshal.Cast<double, Vector<double>>(y);
+            int j = 0;
+            for (; j + 4 <= count; j += 4)
+            {
+                ReadOnlySpan<Vector<double>> x0 = MemoryMarshal.Cast<double, Vector<double>>(vectors.Slice(offsets[j], length));
+                ReadOnlySpan<Vector<double>> x1 = MemoryMarshal.Cast<double, Vector<double>>(vectors.Slice(offsets[j + 1], length));
+                ReadOnlySpan<Vector<double>> x2 = MemoryMarshal.Cast<double, Vector<double>>(vectors.Slice(offsets[j + 2], length));
+                ReadOnlySpan<Vector<double>> x3 = MemoryMarshal.Cast<double, Vector<double>>(vectors.Slice(offsets[j + 3], length));
+                var a0 = new Vector<double>(alphas[j]);
+                var a1 = new Vector<double>(alphas[j + 1]);
+                var a2 = new Vector<double>(alphas[j + 2]);
+                var a3 = new Vector<double>(alphas[j + 3]);
+                for (int v = 0; v < vy.Length; v++)
+                {
+                    Vector<double> acc = vy[v];
+                    acc += a0 * x0[v];
+                    acc += a1 * x1[v];
+                    acc += a2 * x2[v];
+                    acc += a3 * x3[v];
+                    vy[v] = acc;
+                }
+            }
+
+            for (; j < count; j++)
+            {
+                ReadOnlySpan<Vector<double>> x0 = MemoryMarshal.Cast<double, Vector<double>>(vectors.Slice(offsets[j], length));
+                var a0 = new Vector<double>(alphas[j]);
+                for (int v = 0; v < vy.Length; v++)
+                {
+                    vy[v] += a0 * x0[v];
+                }
+            }
+
+            k = vy.Length * Vector<double>.Count;
+        }
+
+        for (; k < length; k++)
+        {
+            double acc = y[k];
+            for (int j = 0; j < count; j++)
+            {
+                acc += alphas[j] * vectors[offsets[j] + k];
+            }
+
+            y[k] = acc;
+        }
     }
 
     internal static void Axpy(double alpha, ReadOnlySpan<double> x, Span<double> y)

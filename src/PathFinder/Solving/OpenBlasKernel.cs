@@ -82,7 +82,7 @@ internal sealed class OpenBlasKernel : IDenseKernel
         }
     }
 
-    public void SubtractLowRank(double[] g, int n, double[] vectors, double[] coefficients, int rank)
+    public void SubtractLowRank(AlignedBuffer g, int n, double[] vectors, double[] coefficients, int rank)
     {
         if (rank == 0 || n == 0)
         {
@@ -91,6 +91,7 @@ internal sealed class OpenBlasKernel : IDenseKernel
 
         // With all cⱼ of one sign (always so when uncertainties only grow), G − Σcⱼvⱼvⱼᵀ = G ∓ UUᵀ with
         // U = V·diag(√|c|): one dsyrk_ on the upper triangle (n²·rank flops) and a mirror. Otherwise one dgemm_.
+        // G is updated in place: its storage is pinned and 64-byte aligned for its lifetime, so no copy is needed.
         bool allNegative = true;
         bool allPositive = true;
         for (int j = 0; j < rank; j++)
@@ -99,7 +100,7 @@ internal sealed class OpenBlasKernel : IDenseKernel
             allPositive &= coefficients[j] >= 0.0;
         }
 
-        var scaled = new double[n * rank];
+        var scaled = new AlignedBuffer(n * rank);
         int order = n;
         int inner = rank;
         int ld = n;
@@ -115,13 +116,8 @@ internal sealed class OpenBlasKernel : IDenseKernel
             byte uplo = (byte)'U';
             byte trans = (byte)'N';
             double alpha = allNegative ? 1.0 : -1.0;
-            using (var alignedScaled = new AlignedCopy(scaled, scaled.Length))
-            using (var alignedG = new AlignedCopy(g, n * n))
-            {
-                Dsyrk(ref uplo, ref trans, ref order, ref inner, ref alpha, ref alignedScaled.First, ref ld, ref beta, ref alignedG.First, ref ld, 1, 1);
-            }
-
-            MirrorUpper(g, n);
+            Dsyrk(ref uplo, ref trans, ref order, ref inner, ref alpha, ref scaled.First, ref ld, ref beta, ref g.First, ref ld, 1, 1);
+            MirrorUpper(g.Span, n);
             return;
         }
 
@@ -134,14 +130,12 @@ internal sealed class OpenBlasKernel : IDenseKernel
         byte transB = (byte)'T';
         int columns = n;
         double minusOne = -1.0;
-        using var alignedA = new AlignedCopy(scaled, scaled.Length);
         using var alignedB = new AlignedCopy(vectors, n * rank);
-        using var alignedC = new AlignedCopy(g, n * n);
-        Dgemm(ref transA, ref transB, ref order, ref columns, ref inner, ref minusOne, ref alignedA.First, ref ld, ref alignedB.First, ref ld, ref beta, ref alignedC.First, ref ld, 1, 1);
+        Dgemm(ref transA, ref transB, ref order, ref columns, ref inner, ref minusOne, ref scaled.First, ref ld, ref alignedB.First, ref ld, ref beta, ref g.First, ref ld, 1, 1);
     }
 
     /// <summary>Copies the upper triangle onto the lower one, in cache-sized tiles.</summary>
-    private static void MirrorUpper(double[] g, int n)
+    private static void MirrorUpper(Span<double> g, int n)
     {
         const int Tile = 64;
         for (int c0 = 0; c0 < n; c0 += Tile)
