@@ -1,5 +1,4 @@
 using System.Globalization;
-using PathFinder.Analysis;
 
 namespace PathFinder.Cli.Output;
 
@@ -21,9 +20,6 @@ public static class Text
     /// <summary>"value ± u unit".</summary>
     public static string WithUncertainty(double value, double uncertainty, string unit, int decimals = 2) =>
         $"{Number(value, decimals)} ± {Number(uncertainty, decimals)} {unit}";
-
-    /// <summary>The number of decimals suited to a family's unit (energies 2, entropies 2).</summary>
-    public static int Decimals(PropertyFamily family) => 2;
 
     /// <summary>Pads or cuts text to a width.</summary>
     public static string Fit(string text, int width) =>

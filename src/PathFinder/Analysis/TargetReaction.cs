@@ -1,5 +1,4 @@
 using PathFinder.Chemistry;
-using PathFinder.Data;
 using PathFinder.Diagnostics;
 
 namespace PathFinder.Analysis;
@@ -58,11 +57,4 @@ public static class TargetReaction
         string hint = failure.Hint.Length > 0 ? $"\n  fix: {failure.Hint}" : "";
         return $"target '{text}': {failure.Message} (column {offset + 1})\n  {text}\n  {new string(' ', offset)}^{hint}";
     }
-
-    /// <summary>The species declared or used in a network, for suggestions.</summary>
-    public static IEnumerable<string> SpeciesNames(ReactionNetwork network) =>
-        network.Species.Where(species => !ReferenceStates.HasZeroFormationProperties(species)).Select(species => species.Name);
-
-    /// <summary>The file name that declares species keys, for messages.</summary>
-    public static string SpeciesFileName => NetworkFiles.SpeciesFileName;
 }
