@@ -152,6 +152,7 @@ public sealed class CsvTable
         }
 
         char delimiter = DetectDelimiter(headerText);
+        var badRows = new HashSet<int>();
         var configuration = new CsvConfiguration(CultureInfo.InvariantCulture)
         {
             Delimiter = delimiter.ToString(),
@@ -159,7 +160,15 @@ public sealed class CsvTable
             Comment = '#',
             IgnoreBlankLines = true,
             DetectColumnCountChanges = false,
-            BadDataFound = null,
+            BadDataFound = args =>
+            {
+                // A quote in the middle of an unquoted field (or a stray one) makes the row's fields unreliable.
+                int badLine = args.Context?.Parser?.RawRow ?? 0;
+                if (badRows.Add(badLine))
+                {
+                    diagnostics.Add(Diagnostic.Error("bad-csv", new SourceLocation(displayPath, badLine), $"a field holds a stray quote: '{Shorten(args.Field)}'", "enclose a field that contains quotes in double quotes and double each quote inside it (\"\"), or remove the quote"));
+                }
+            },
             TrimOptions = TrimOptions.None,
         };
 
@@ -190,6 +199,11 @@ public sealed class CsvTable
                     continue;
                 }
 
+                if (badRows.Contains(parser.RawRow))
+                {
+                    continue;
+                }
+
                 rows.Add(new CsvRow(displayPath, line, fields, columns));
             }
         }
@@ -208,6 +222,8 @@ public sealed class CsvTable
 
         return new CsvTable(displayPath, header, headerLine, headerColumns, rows, delimiter);
     }
+
+    private static string Shorten(string text) => text.Length <= 40 ? text : text[..39] + "…";
 
     private static string FirstLine(string message)
     {

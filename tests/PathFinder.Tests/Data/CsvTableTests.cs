@@ -26,6 +26,21 @@ public sealed class CsvTableTests
     }
 
     [Fact]
+    public void Parse_ReportsAStrayQuote_AndLeavesThatRowOut()
+    {
+        // Given a row whose unquoted field holds a quote (a common spreadsheet slip)
+        List<Diagnostic> diagnostics = [];
+        CsvTable table = Parse("id,note,value\nm1,a \"b\" c,2.5\nm2,fine,3.0\n", diagnostics)!;
+
+        // Then one located error names the field, and only the sound row is kept
+        Diagnostic error = Assert.Single(diagnostics);
+        Assert.Equal(("bad-csv", 2), (error.Code, error.Location.Line));
+        Assert.Contains("stray quote", error.Message, StringComparison.Ordinal);
+        CsvRow row = Assert.Single(table.Rows);
+        Assert.Equal("m2", row.Fields[0]);
+    }
+
+    [Fact]
     public void Parse_UnescapesDoubledQuotes()
     {
         CsvTable table = Parse("id,note\nm1,\"the \"\"hot\"\" cell\"\n", [])!;
