@@ -66,11 +66,14 @@ public sealed class RoutesCommand
 
         ChemicalEquation target = OptionParsing.Target(targetText, session.Network);
         PropertyFamily family = PropertyFamilies.FamilyOf(property);
-        PropertyModel model = session.Model(family);
-        SolveReport solved = NetworkSolver.Solve(model, adjust: !noAdjust);
-        RouteReport report = RouteAnalysis.Find(model, target, new RouteSearchOptions { MaxSteps = maxSteps, MaxRoutes = top, TimeBudget = TimeSpan.FromSeconds(timeBudget) }, solved.Solution);
-        TargetConditions? atTemperature = temperature is { } kelvin ? TargetConditions.Evaluate(session.Network, session.HeatCapacities, target, kelvin) : null;
-        var suspects = solved.Suspects.Select(suspect => model.Measurements[suspect.ObservationIndex].Id).ToHashSet(StringComparer.Ordinal);
+
+        // One set of solutions serves the estimate beside the routes and the values at another temperature.
+        var solutions = new NetworkSolutions(session.Network, session.HeatCapacities, adjust: !noAdjust);
+        SolveReport? solved = solutions.Report(family);
+        PropertyModel model = solved?.Model ?? session.Model(family);
+        RouteReport report = RouteAnalysis.Find(model, target, new RouteSearchOptions { MaxSteps = maxSteps, MaxRoutes = top, TimeBudget = TimeSpan.FromSeconds(timeBudget) }, solved?.Solution);
+        TargetConditions? atTemperature = temperature is { } kelvin ? TargetConditions.Evaluate(solutions, target, kelvin) : null;
+        var suspects = (solved?.Suspects ?? []).Select(suspect => model.Measurements[suspect.ObservationIndex].Id).ToHashSet(StringComparer.Ordinal);
         RouteOutput.Write(context.Out, report, model, property, explain, atTemperature, json, suspects);
         if (report.Routes.Count == 0)
         {

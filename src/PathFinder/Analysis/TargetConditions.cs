@@ -28,15 +28,7 @@ public sealed record TargetConditions(
     EquilibriumConstant? EquilibriumConstant,
     IReadOnlyList<string> Notes)
 {
-    /// <summary>Evaluates <paramref name="target"/> at <paramref name="temperature"/>.</summary>
-    public static TargetConditions Evaluate(ReactionNetwork network, IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities, ChemicalEquation target, double temperature)
-    {
-        ArgumentNullException.ThrowIfNull(network);
-        ArgumentNullException.ThrowIfNull(heatCapacities);
-        return Evaluate(new NetworkSolutions(network, heatCapacities), target, temperature);
-    }
-
-    /// <summary>Evaluates <paramref name="target"/> at <paramref name="temperature"/> with solutions already made (or made once and reused).</summary>
+    /// <summary>Evaluates <paramref name="target"/> at <paramref name="temperature"/> from the network solutions (made once and reused).</summary>
     public static TargetConditions Evaluate(NetworkSolutions solutions, ChemicalEquation target, double temperature)
     {
         ArgumentNullException.ThrowIfNull(solutions);
