@@ -83,8 +83,13 @@ public sealed class DrawCommand
 
         PropertyFamily family = PropertyFamilies.FamilyOf(OptionParsing.Property(request.Property));
         PropertyModel model = session.Model(family);
-        FamilyConsistency consistency = ConsistencyCheck.Analyse(model);
-        var marks = new FigureMarks(consistency.Suspects.Select(suspect => suspect.Measurement.Id).ToHashSet(StringComparer.Ordinal), new HashSet<string>(StringComparer.Ordinal));
+
+        // Cycles are numbered as 'check' lists them, which needs the whole consistency analysis; other foci need only the suspects.
+        FamilyConsistency? consistency = request.Cycle is null ? null : ConsistencyCheck.Analyse(model);
+        IEnumerable<string> suspects = consistency is not null
+            ? consistency.Suspects.Select(suspect => suspect.Measurement.Id)
+            : NetworkSolver.Solve(model).Suspects.Select(suspect => model.Measurements[suspect.ObservationIndex].Id);
+        var marks = new FigureMarks(suspects.ToHashSet(StringComparer.Ordinal), new HashSet<string>(StringComparer.Ordinal));
         SvgDiagram? diagram;
         if (request.Target is not null)
         {
@@ -113,7 +118,7 @@ public sealed class DrawCommand
                     : RenderNetwork(FigureBuilder.RouteNetwork(report, route, model.Unit.Symbol, marks), request.MaxNodes, context);
             }
         }
-        else if (request.Cycle is { } number)
+        else if (request.Cycle is { } number && consistency is not null)
         {
             if (number < 1 || number > consistency.Cycles.Count)
             {
