@@ -42,7 +42,7 @@ public static class CheckSolveBenchmark
             SyntheticNetworkGenerator.Write(synthetic, folder);
             long bytes = new FileInfo(Path.Combine(folder, "measurements.csv")).Length;
             Line(output, $"check/solve: {species} species, {measurements} measurements, seed {seed}, {synthetic.OutlierIds.Count} injected outliers; CSV {bytes / 1e6:F1} MB in {folder}");
-            Line(output, $"  native OpenBLAS available: {WeightedLeastSquares.IsNativeBackendAvailable}; {Environment.ProcessorCount} logical cores");
+            Line(output, $"  native OpenBLAS available: {WeightedLeastSquares.IsNativeBackendAvailable} (kernels {WeightedLeastSquares.NativeKernelName ?? "-"}); {Environment.ProcessorCount} logical cores");
             synthetic = null!;
             return Measure(output, folder);
         }

@@ -26,7 +26,7 @@ public static class ConsistencyBenchmark
             OutlierFraction = 0.02,
         });
         output.WriteLine(string.Create(inv, $"consistency: {species} species, {measurements} measurements, seed {seed}, {synthetic.OutlierIds.Count} injected outliers"));
-        output.WriteLine(string.Create(inv, $"  native OpenBLAS available: {WeightedLeastSquares.IsNativeBackendAvailable}"));
+        output.WriteLine(string.Create(inv, $"  native OpenBLAS available: {WeightedLeastSquares.IsNativeBackendAvailable} (kernels {WeightedLeastSquares.NativeKernelName ?? "-"})"));
 
         var watch = Stopwatch.StartNew();
         PropertyModel model = PropertyModel.Build(synthetic.Network, PropertyFamily.Enthalpy);

@@ -67,7 +67,7 @@ internal static class Program
         TextWriter output = Console.Out;
         output.WriteLine("PathFinder benchmarks");
         output.WriteLine(string.Create(CultureInfo.InvariantCulture, $"  date {DateTime.UtcNow:yyyy-MM-dd HH:mm} UTC; {RuntimeInformation.OSDescription}; {RuntimeInformation.FrameworkDescription}; {Environment.ProcessorCount} logical cores; {Cpu()}"));
-        output.WriteLine($"  native OpenBLAS: {WeightedLeastSquares.IsNativeBackendAvailable}; build {(IsOptimized() ? "Release" : "Debug (figures are slower than Release)")}");
+        output.WriteLine($"  native OpenBLAS: {WeightedLeastSquares.IsNativeBackendAvailable} (kernels {WeightedLeastSquares.NativeKernelName ?? "-"}); build {(IsOptimized() ? "Release" : "Debug (figures are slower than Release)")}");
         output.WriteLine();
         var figures = new List<Figure>();
         var watch = Stopwatch.StartNew();

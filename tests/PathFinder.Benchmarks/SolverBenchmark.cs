@@ -19,7 +19,7 @@ public static class SolverBenchmark
         var watch = Stopwatch.StartNew();
         ObservationSystem system = CreateSystem(unknowns, observations, seed);
         output.WriteLine(string.Create(inv, $"solver: n = {unknowns}, m = {observations}, seed = {seed}; system built in {watch.Elapsed.TotalMilliseconds:F0} ms"));
-        output.WriteLine(string.Create(inv, $"native OpenBLAS available: {WeightedLeastSquares.IsNativeBackendAvailable}"));
+        output.WriteLine(string.Create(inv, $"native OpenBLAS available: {WeightedLeastSquares.IsNativeBackendAvailable} (kernels {WeightedLeastSquares.NativeKernelName ?? "-"})"));
 
         var backends = new List<LinearAlgebraBackend> { LinearAlgebraBackend.Managed };
         if (WeightedLeastSquares.IsNativeBackendAvailable)

@@ -26,7 +26,7 @@ internal sealed class OpenBlasKernel : IDenseKernel
 
     public LinearAlgebraBackend Backend => LinearAlgebraBackend.Native;
 
-    public int PivotedCholesky(double[] a, int n, int[] pivot, double tolerance)
+    public int PivotedCholesky(AlignedBuffer a, int n, int[] pivot, double tolerance)
     {
         if (n == 0)
         {
@@ -41,10 +41,7 @@ internal sealed class OpenBlasKernel : IDenseKernel
         double tol = tolerance;
         var work = new double[2 * n];
         var piv = new int[n];
-        using (var aligned = new AlignedCopy(a, n * n))
-        {
-            Dpstrf(ref uplo, ref order, ref aligned.First, ref lda, piv, ref rank, ref tol, work, ref info, 1);
-        }
+        Dpstrf(ref uplo, ref order, ref a.First, ref lda, piv, ref rank, ref tol, work, ref info, 1);
 
         if (info < 0)
         {
@@ -60,7 +57,7 @@ internal sealed class OpenBlasKernel : IDenseKernel
         return rank;
     }
 
-    public void InvertFromFactor(double[] a, int n, int rank)
+    public void InvertFromFactor(AlignedBuffer a, int n, int rank)
     {
         if (rank == 0)
         {
@@ -71,10 +68,7 @@ internal sealed class OpenBlasKernel : IDenseKernel
         int order = rank;
         int lda = n;
         int info = 0;
-        using (var aligned = new AlignedCopy(a, n * n))
-        {
-            Dpotri(ref uplo, ref order, ref aligned.First, ref lda, ref info, 1);
-        }
+        Dpotri(ref uplo, ref order, ref a.First, ref lda, ref info, 1);
 
         if (info != 0)
         {
@@ -100,7 +94,7 @@ internal sealed class OpenBlasKernel : IDenseKernel
             allPositive &= coefficients[j] >= 0.0;
         }
 
-        var scaled = new AlignedBuffer(n * rank);
+        AlignedBuffer scaled = Scratch(n * rank);
         int order = n;
         int inner = rank;
         int ld = n;
@@ -134,10 +128,46 @@ internal sealed class OpenBlasKernel : IDenseKernel
         Dgemm(ref transA, ref transB, ref order, ref columns, ref inner, ref minusOne, ref scaled.First, ref ld, ref alignedB.First, ref ld, ref beta, ref g.First, ref ld, 1, 1);
     }
 
+    /// <summary>Runs <paramref name="work"/> with OpenBLAS limited to one thread, then restores the previous count.</summary>
+    /// <remarks>
+    /// Between calls OpenBLAS's worker threads spin for a while before they sleep. In a loop that alternates short
+    /// BLAS calls with managed work (the suspect procedure) they keep the other core busy for nothing, slowing the
+    /// managed work and anything running beside it (the cycle search); one thread is faster there.
+    /// </remarks>
+    public static T SingleThreaded<T>(Func<T> work)
+    {
+        if (!IsAvailable || !s_hasThreadControl)
+        {
+            return work();
+        }
+
+        int previous = GetThreadCount();
+        SetThreadCount(1);
+        try
+        {
+            return work();
+        }
+        finally
+        {
+            SetThreadCount(previous);
+        }
+    }
+
+    /// <summary>A reusable 64-byte-aligned scratch buffer of at least <paramref name="length"/> elements for this thread.</summary>
+    private static AlignedBuffer Scratch(int length)
+    {
+        if (t_scratch is null || t_scratch.Length < length)
+        {
+            t_scratch = new AlignedBuffer(length);
+        }
+
+        return t_scratch;
+    }
+
     /// <summary>Copies the upper triangle onto the lower one, in cache-sized tiles.</summary>
     private static void MirrorUpper(Span<double> g, int n)
     {
-        const int Tile = 64;
+        const int Tile = 32;
         for (int c0 = 0; c0 < n; c0 += Tile)
         {
             int c1 = Math.Min(n, c0 + Tile);
@@ -163,17 +193,42 @@ internal sealed class OpenBlasKernel : IDenseKernel
         }
     }
 
+    /// <summary>The kernel family OpenBLAS uses (for example "SkylakeX"), or null when the library is not available.</summary>
+    public static string? CoreName => IsAvailable && s_hasCoreName ? Marshal.PtrToStringAnsi(GetCoreName()) : null;
+
+    private static bool s_hasCoreName;
+
+    private static bool s_hasThreadControl;
+
+    [ThreadStatic]
+    private static AlignedBuffer? t_scratch;
+
     private static bool Probe()
     {
+        // Must happen before the first load: OpenBLAS chooses its kernels once, when it is loaded.
+        OpenBlasCoreType.Apply();
         if (!NativeLibrary.TryLoad(LibraryName, out IntPtr handle))
         {
             return false;
         }
 
+        s_hasCoreName = NativeLibrary.TryGetExport(handle, "openblas_get_corename", out _);
+        s_hasThreadControl = NativeLibrary.TryGetExport(handle, "openblas_get_num_threads", out _)
+            && NativeLibrary.TryGetExport(handle, "openblas_set_num_threads", out _);
+
         return NativeLibrary.TryGetExport(handle, "dpstrf_", out _) && NativeLibrary.TryGetExport(handle, "dpotri_", out _)
             && NativeLibrary.TryGetExport(handle, "dgemm_", out _)
             && NativeLibrary.TryGetExport(handle, "dsyrk_", out _);
     }
+
+    [DllImport(LibraryName, EntryPoint = "openblas_get_corename", ExactSpelling = true)]
+    private static extern IntPtr GetCoreName();
+
+    [DllImport(LibraryName, EntryPoint = "openblas_get_num_threads", ExactSpelling = true)]
+    private static extern int GetThreadCount();
+
+    [DllImport(LibraryName, EntryPoint = "openblas_set_num_threads", ExactSpelling = true)]
+    private static extern void SetThreadCount(int count);
 
     [DllImport(LibraryName, EntryPoint = "dpstrf_", ExactSpelling = true)]
     private static extern void Dpstrf(

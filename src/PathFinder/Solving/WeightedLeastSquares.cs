@@ -18,4 +18,8 @@ public static class WeightedLeastSquares
 
     /// <summary>Whether the native OpenBLAS backend can be used on this machine.</summary>
     public static bool IsNativeBackendAvailable => OpenBlasKernel.IsAvailable;
+
+    /// <summary>The kernel family the native backend runs (for example "SkylakeX"), or null when it is not available.</summary>
+    /// <remarks>PathFinder picks it from the CPU's instruction sets unless OPENBLAS_CORETYPE is set (see the developer guide).</remarks>
+    public static string? NativeKernelName => OpenBlasKernel.CoreName;
 }
