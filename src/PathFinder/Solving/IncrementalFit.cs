@@ -1,4 +1,4 @@
-using System.Numerics;
+using System.Runtime.Intrinsics;
 
 namespace PathFinder.Solving;
 
@@ -19,24 +19,32 @@ namespace PathFinder.Solving;
 /// every normalized residual can be evaluated for several Δw from one g, and a run of consecutive adjustments of
 /// the same observation is committed as one rank-one change. The result equals doing them one by one.
 /// </para>
+/// <para>
+/// The O(m·nnz) pass runs once or twice per step, thousands of times, so its layout matters: observations are
+/// kept in "slot" order, grouped by component and within a component by their number of nonzeros, with each
+/// group's indices stored column by column. Four rows are then evaluated at once in SIMD registers with a fixed
+/// trip count and contiguous loads; each row's tₗ is still summed in the row's own order, and the vector and
+/// scalar paths perform the same operations, so results do not depend on the hardware. Ties between equal |z|
+/// go to the lowest observation index, as in a plain scan.
+/// </para>
 /// </remarks>
 internal sealed class IncrementalFit
 {
+    private const int Lanes = 4;
+
     private readonly SolverEngine _engine;
     private readonly double _checkability;
+    private readonly int _blockSize;
+    private readonly int[] _slotOf;
+    private readonly int[] _observationAt;
     private readonly double[] _values;
     private readonly double[] _fitted;
     private readonly double[] _quadratic;
-    private readonly double[] _z;
-    private readonly int[] _rowStart;
-    private readonly int[] _local;
-    private readonly double[] _coefficients;
-    private readonly LowRank[] _lowRank;
-    private readonly RowGroup[]?[] _rowGroups;
-    private readonly int _blockSize;
+    private readonly double[] _variance;
+    private readonly double[] _t;
+    private readonly ComponentSlots[] _components;
+    private readonly LowRank?[] _lowRank;
     private double[] _gBuffer = [];
-    private double[] _tBuffer = [];
-    private double[] _zBuffer = [];
 
     public IncrementalFit(SolverEngine engine, int blockSize)
     {
@@ -44,41 +52,59 @@ internal sealed class IncrementalFit
         _checkability = engine.Options.CheckabilityTolerance;
         _blockSize = blockSize;
         int m = engine.ObservationCount;
+        _slotOf = new int[m];
+        _observationAt = new int[m];
         _values = new double[m];
         _fitted = new double[m];
         _quadratic = new double[m];
-        _z = new double[m];
-        _rowStart = new int[m + 1];
-        for (int i = 0; i < m; i++)
-        {
-            _rowStart[i + 1] = _rowStart[i] + engine.Row(i).Row.Count;
-        }
+        _variance = new double[m];
+        _t = new double[m];
+        _components = new ComponentSlots[engine.Components.Count];
+        _lowRank = new LowRank?[engine.Components.Count];
 
-        _local = new int[_rowStart[m]];
-        _coefficients = new double[_rowStart[m]];
-        for (int i = 0; i < m; i++)
+        int slot = 0;
+        for (int c = 0; c < _components.Length; c++)
         {
-            Observation observation = engine.Row(i);
-            _values[i] = observation.Value;
-            ReadOnlySpan<int> idx = observation.Row.Indices;
-            ReadOnlySpan<double> coef = observation.Row.Coefficients;
-            for (int p = 0; p < idx.Length; p++)
+            int start = slot;
+            var groups = new List<WidthGroup>();
+            foreach (IGrouping<int, int> byWidth in engine.Components[c].Observations.GroupBy(i => engine.Row(i).Row.Count).OrderBy(g => g.Key))
             {
-                _local[_rowStart[i] + p] = engine.LocalIndex(idx[p]);
-                _coefficients[_rowStart[i] + p] = coef[p];
-            }
-        }
+                int[] members = byWidth.ToArray();
+                int width = byWidth.Key;
+                var local = new int[members.Length * width];
+                var coefficients = new double[members.Length * width];
+                for (int r = 0; r < members.Length; r++)
+                {
+                    int i = members[r];
+                    _slotOf[i] = slot + r;
+                    _observationAt[slot + r] = i;
+                    Observation observation = engine.Row(i);
+                    _values[slot + r] = observation.Value;
+                    ReadOnlySpan<int> idx = observation.Row.Indices;
+                    ReadOnlySpan<double> coef = observation.Row.Coefficients;
+                    for (int e = 0; e < width; e++)
+                    {
+                        // Column by column: entry e of row r at e·count + r, so four rows load contiguously.
+                        local[(e * members.Length) + r] = engine.LocalIndex(idx[e]);
+                        coefficients[(e * members.Length) + r] = coef[e];
+                    }
+                }
 
-        _lowRank = new LowRank[engine.Components.Count];
-        _rowGroups = new RowGroup[engine.Components.Count][];
-        for (int c = 0; c < _lowRank.Length; c++)
-        {
+                groups.Add(new WidthGroup(width, slot, members.Length, local, coefficients));
+                slot += members.Length;
+            }
+
+            _components[c] = new ComponentSlots(start, slot, groups.ToArray());
             Refresh(c);
         }
     }
 
     /// <summary>The normalized residual of observation i, or NaN when it is not checkable.</summary>
-    public double NormalizedResidual(int i) => _z[i];
+    public double NormalizedResidual(int i)
+    {
+        int s = _slotOf[i];
+        return ZOf(_values[s] - _fitted[s], _variance[s], _quadratic[s]);
+    }
 
     /// <summary>The current uncertainty of observation i.</summary>
     public double Uncertainty(int i) => _engine.Uncertainty(i);
@@ -86,23 +112,8 @@ internal sealed class IncrementalFit
     /// <summary>Rank-one changes committed to component c since its last fresh factorization.</summary>
     public int ChangesSinceFactorization(int component) => _lowRank[component]?.Changes ?? 0;
 
-    /// <summary>The checkable observation with the largest |z| (first index on ties), or −1.</summary>
-    public int Worst()
-    {
-        int worst = -1;
-        double best = 0.0;
-        for (int i = 0; i < _z.Length; i++)
-        {
-            double a = Math.Abs(_z[i]);
-            if (a > best || (worst < 0 && !double.IsNaN(a)))
-            {
-                worst = i;
-                best = a;
-            }
-        }
-
-        return worst;
-    }
+    /// <summary>The checkable observation with the largest |z| (lowest index on ties), or −1.</summary>
+    public int Worst() => WorstExcept(-1, -1);
 
     /// <summary>Prepares g = G·aᵢ and tₗ = aₗᵀg for every observation l of i's component.</summary>
     /// <remarks>The probe shares buffers with the next one: it is valid until the next call.</remarks>
@@ -112,25 +123,21 @@ internal sealed class IncrementalFit
         ComponentFactorization component = _engine.Components[c];
         LowRank lowRank = LowRankOf(c);
         int k = component.Size;
-        int[] observations = component.Observations;
         if (_gBuffer.Length < k)
         {
             _gBuffer = new double[k];
         }
 
-        if (_tBuffer.Length < observations.Length)
-        {
-            _tBuffer = new double[observations.Length];
-            _zBuffer = new double[observations.Length];
-        }
-
         Span<double> g = _gBuffer.AsSpan(0, k);
         g.Clear();
-        int start = _rowStart[i];
-        int end = _rowStart[i + 1];
-        for (int p = start; p < end; p++)
+        Observation observation = _engine.Row(i);
+        ReadOnlySpan<int> idx = observation.Row.Indices;
+        ReadOnlySpan<double> coef = observation.Row.Coefficients;
+        Span<int> local = stackalloc int[idx.Length];
+        for (int p = 0; p < idx.Length; p++)
         {
-            ManagedKernel.Axpy(_coefficients[p], component.Covariance.AsSpan(_local[p] * k, k), g);
+            local[p] = _engine.LocalIndex(idx[p]);
+            ManagedKernel.Axpy(coef[p], component.Covariance.AsSpan(local[p] * k, k), g);
         }
 
         // g −= Σⱼ cⱼ(gⱼᵀa)·gⱼ: the dots first (a is sparse), then one pass over g for all the vectors.
@@ -139,9 +146,9 @@ internal sealed class IncrementalFit
         {
             double dot = 0.0;
             int offset = j * k;
-            for (int p = start; p < end; p++)
+            for (int p = 0; p < idx.Length; p++)
             {
-                dot += _coefficients[p] * lowRank.Vectors[offset + _local[p]];
+                dot += coef[p] * lowRank.Vectors[offset + local[p]];
             }
 
             double alpha = -lowRank.Coefficients[j] * dot;
@@ -154,140 +161,47 @@ internal sealed class IncrementalFit
         }
 
         ManagedKernel.AxpyMany(lowRank.Alphas.AsSpan(0, used), lowRank.Offsets.AsSpan(0, used), lowRank.Vectors, g);
-
-        // t = A·g over the component's rows.
-        MultiplyRows(RowGroupsOf(c), g, _tBuffer.AsSpan(0, observations.Length));
-
-        return new Probe(i, c, _gBuffer, _tBuffer);
+        MultiplyRows(_components[c], g, _t);
+        return new Probe(i, c, _gBuffer);
     }
 
     /// <summary>The largest |z| and its observation if observation i (prepared in probe) had uncertainty u.</summary>
-    /// <returns>The index of the worst checkable observation after the change (first on ties) and i's own z.</returns>
+    /// <returns>The index of the worst checkable observation after the change (lowest on ties) and i's own z.</returns>
     public (int Worst, double OwnZ) Evaluate(Probe probe, double uncertainty)
     {
-        int i = probe.Observation;
-        double factor = ChangeFactor(i, uncertainty);
-        double e = _values[i] - _fitted[i];
-        int[] observations = _engine.Components[probe.Component].Observations;
-        if (observations.Length == _z.Length)
-        {
-            return EvaluateEvery(probe, uncertainty, factor * e, factor);
-        }
-
-        int worst = -1;
-        double best = 0.0;
-        double own = double.NaN;
-        int p = 0;
-
-        // Other components are unchanged; scanning in index order keeps the tie rule of Worst().
-        for (int l = 0; l < _z.Length; l++)
-        {
-            double z;
-            if (p < observations.Length && observations[p] == l)
-            {
-                double tl = probe.T[p];
-                p++;
-                double u = l == i ? uncertainty : _engine.Uncertainty(l);
-                z = ZOf(_values[l] - _fitted[l] - (factor * e * tl), u, _quadratic[l] - (factor * tl * tl));
-                _zBuffer[p - 1] = z;
-                if (l == i)
-                {
-                    own = z;
-                }
-            }
-            else
-            {
-                z = _z[l];
-            }
-
-            double a = Math.Abs(z);
-            if (a > best || (worst < 0 && !double.IsNaN(a)))
-            {
-                worst = l;
-                best = a;
-            }
-        }
-
-        return (worst, own);
-    }
-
-    /// <summary><see cref="Evaluate"/> when the probed component holds every observation (position = index), vectorized.</summary>
-    /// <remarks>The same operations in the same order as <see cref="ZOf"/> element by element, so the same z to the last bit.</remarks>
-    private (int Worst, double OwnZ) EvaluateEvery(Probe probe, double uncertainty, double shift, double factor)
-    {
-        int i = probe.Observation;
-        int m = _z.Length;
-        ReadOnlySpan<double> t = probe.T.AsSpan(0, m);
-        ReadOnlySpan<double> values = _values;
-        ReadOnlySpan<double> fitted = _fitted;
-        ReadOnlySpan<double> quadratic = _quadratic;
-        ReadOnlySpan<double> uncertainties = _engine.Uncertainties;
-        Span<double> z = _zBuffer.AsSpan(0, m);
-        int l = 0;
-        if (Vector.IsHardwareAccelerated)
-        {
-            int width = Vector<double>.Count;
-            var vShift = new Vector<double>(shift);
-            var vFactor = new Vector<double>(factor);
-            var vCheckability = new Vector<double>(_checkability);
-            var vNaN = new Vector<double>(double.NaN);
-            for (; l + width <= m; l += width)
-            {
-                var tl = new Vector<double>(t.Slice(l, width));
-                Vector<double> residual = new Vector<double>(values.Slice(l, width)) - new Vector<double>(fitted.Slice(l, width)) - (vShift * tl);
-                Vector<double> q = new Vector<double>(quadratic.Slice(l, width)) - (vFactor * tl * tl);
-                var u = new Vector<double>(uncertainties.Slice(l, width));
-                Vector<double> u2 = u * u;
-                Vector<double> rest = u2 - q;
-                Vector<double> checkable = Vector.GreaterThan(rest, vCheckability * u2).As<long, double>();
-                Vector.ConditionalSelect(checkable, residual / Vector.SquareRoot(rest), vNaN).CopyTo(z.Slice(l, width));
-            }
-        }
-
-        for (; l < m; l++)
-        {
-            z[l] = ZOf(values[l] - fitted[l] - (shift * t[l]), uncertainties[l], quadratic[l] - (factor * t[l] * t[l]));
-        }
-
-        z[i] = ZOf(values[i] - fitted[i] - (shift * t[i]), uncertainty, quadratic[i] - (factor * t[i] * t[i]));
-        int worst = -1;
-        double best = 0.0;
-        for (l = 0; l < m; l++)
-        {
-            double a = Math.Abs(z[l]);
-            if (a > best || (worst < 0 && !double.IsNaN(a)))
-            {
-                worst = l;
-                best = a;
-            }
-        }
-
-        return (worst, z[i]);
+        (int bestSlot, double bestSquare) = EvaluateChange(probe, uncertainty);
+        int worst = WorstExcept(probe.Component, bestSlot < 0 ? -1 : _observationAt[bestSlot], bestSquare);
+        int own = _slotOf[probe.Observation];
+        double factor = ChangeFactor(probe.Observation, uncertainty);
+        double t = _t[own];
+        double fitted = _fitted[own] + (factor * (_values[own] - _fitted[own]) * t);
+        return (worst, ZOf(_values[own] - fitted, uncertainty * uncertainty, _quadratic[own] - (factor * t * t)));
     }
 
     /// <summary>Commits the change of observation i's uncertainty to u (one rank-one change).</summary>
     /// <param name="probe">The prepared observation.</param>
     /// <param name="uncertainty">Its new uncertainty.</param>
-    /// <param name="evaluated">True when the last <see cref="Evaluate"/> call was for this probe and this uncertainty (its z values are reused).</param>
+    /// <param name="evaluated">True when the last <see cref="Evaluate"/> call was for this probe and this uncertainty (its results are reused).</param>
     /// <param name="refactorizationInterval">Changes after which the component is factored afresh.</param>
     public void Commit(Probe probe, double uncertainty, bool evaluated, int refactorizationInterval)
     {
         int i = probe.Observation;
         int c = probe.Component;
-        double factor = ChangeFactor(i, uncertainty);
-        double e = _values[i] - _fitted[i];
-        ComponentFactorization component = _engine.Components[c];
-        ManagedKernel.Axpy(factor * e, probe.G.AsSpan(0, component.Size), component.Solution);
-        _engine.StoreUncertainty(i, uncertainty);
-        int[] observations = component.Observations;
-        for (int p = 0; p < observations.Length; p++)
+        ComponentSlots slots = _components[c];
+        if (!evaluated)
         {
-            int l = observations[p];
-            double tl = probe.T[p];
-            _fitted[l] += factor * e * tl;
-            _quadratic[l] -= factor * tl * tl;
-            _z[l] = evaluated ? _zBuffer[p] : ZOf(_values[l] - _fitted[l], _engine.Uncertainty(l), _quadratic[l]);
+            EvaluateChange(probe, uncertainty);
         }
+
+        double factor = ChangeFactor(i, uncertainty);
+        double shift = factor * (_values[_slotOf[i]] - _fitted[_slotOf[i]]);
+        ComponentFactorization component = _engine.Components[c];
+        ManagedKernel.Axpy(shift, probe.G.AsSpan(0, component.Size), component.Solution);
+        _engine.StoreUncertainty(i, uncertainty);
+        _variance[_slotOf[i]] = uncertainty * uncertainty;
+        ApplyChange(slots, shift, factor);
+        slots.BestSlot = slots.PendingBestSlot;
+        slots.BestSquare = slots.PendingBestSquare;
 
         LowRank lowRank = LowRankOf(c);
         lowRank.Changes++;
@@ -323,11 +237,203 @@ internal sealed class IncrementalFit
 
     private void Fold(int c)
     {
-
         ComponentFactorization component = _engine.Components[c];
-        LowRank lowRank = _lowRank[c];
+        LowRank lowRank = _lowRank[c]!;
         _engine.Kernel.SubtractLowRank(component.Covariance, component.Size, lowRank.Vectors, lowRank.Coefficients, lowRank.Count);
         lowRank.Count = 0;
+    }
+
+    /// <summary>The slot of the worst observation of the probed component (or −1) and its z², if i had uncertainty u.</summary>
+    /// <remarks>Also remembered as the component's pending best, which <see cref="Commit"/> takes over.</remarks>
+    private (int Slot, double Square) EvaluateChange(Probe probe, double uncertainty)
+    {
+        int i = probe.Observation;
+        int own = _slotOf[i];
+        double factor = ChangeFactor(i, uncertainty);
+        double shift = factor * (_values[own] - _fitted[own]);
+        ComponentSlots slots = _components[probe.Component];
+
+        // i's own z uses its new uncertainty: put it in place for the pass, then restore.
+        double oldVariance = _variance[own];
+        _variance[own] = uncertainty * uncertainty;
+        int bestSlot = -1;
+        double bestSquare = -1.0;
+        foreach (WidthGroup group in slots.Groups)
+        {
+            (int slot, double square) = BestInGroup(group, shift, factor);
+            if (slot >= 0 && (square > bestSquare || (square == bestSquare && _observationAt[slot] < _observationAt[bestSlot])))
+            {
+                bestSlot = slot;
+                bestSquare = square;
+            }
+        }
+
+        _variance[own] = oldVariance;
+        slots.PendingBestSlot = bestSlot;
+        slots.PendingBestSquare = bestSquare;
+        return (bestSlot, bestSquare);
+    }
+
+    /// <summary>The largest z² = (v − ŷ')²/(u² − q') over the checkable rows of a group after the change, and its slot.</summary>
+    /// <remarks>
+    /// ŷ' = ŷ + shift·t and q' = q − factor·t²; z² is compared instead of |z| to save a square root per row.
+    /// Within a group slots ascend with the observation index, so the first slot holding the largest value
+    /// (strictly-greater updates per SIMD lane, then the lowest slot among tied lanes) is the lowest index.
+    /// </remarks>
+    private (int Slot, double Square) BestInGroup(WidthGroup group, double shift, double factor)
+    {
+        int s = group.Start;
+        int end = group.Start + group.Count;
+        double best = -1.0;
+        int bestSlot = -1;
+        if (Vector256.IsHardwareAccelerated && group.Count >= Lanes)
+        {
+            var vShift = Vector256.Create(shift);
+            var vFactor = Vector256.Create(factor);
+            var vCheckability = Vector256.Create(_checkability);
+            var vBest = Vector256.Create(-1.0);
+            var vBestSlot = Vector256.Create(-1.0);
+            var vSlot = Vector256.Create(s, s + 1.0, s + 2.0, s + 3.0);
+            var vStep = Vector256.Create((double)Lanes);
+            var minusOne = Vector256.Create(-1.0);
+            for (; s + Lanes <= end; s += Lanes)
+            {
+                var t = Vector256.Create(_t.AsSpan(s, Lanes));
+                var variance = Vector256.Create(_variance.AsSpan(s, Lanes));
+                Vector256<double> residual = Vector256.Create(_values.AsSpan(s, Lanes)) - (Vector256.Create(_fitted.AsSpan(s, Lanes)) + (vShift * t));
+                Vector256<double> rest = variance - (Vector256.Create(_quadratic.AsSpan(s, Lanes)) - (vFactor * t * t));
+                Vector256<double> checkable = Vector256.GreaterThan(rest, vCheckability * variance);
+                Vector256<double> square = Vector256.ConditionalSelect(checkable, residual * residual / rest, minusOne);
+                Vector256<double> better = Vector256.GreaterThan(square, vBest);
+                vBest = Vector256.ConditionalSelect(better, square, vBest);
+                vBestSlot = Vector256.ConditionalSelect(better, vSlot, vBestSlot);
+                vSlot += vStep;
+            }
+
+            for (int lane = 0; lane < Lanes; lane++)
+            {
+                double value = vBest[lane];
+                int slot = (int)vBestSlot[lane];
+                if (slot >= 0 && (value > best || (value == best && slot < bestSlot)))
+                {
+                    best = value;
+                    bestSlot = slot;
+                }
+            }
+        }
+
+        for (; s < end; s++)
+        {
+            double t = _t[s];
+            double residual = _values[s] - (_fitted[s] + (shift * t));
+            double rest = _variance[s] - (_quadratic[s] - (factor * t * t));
+            if (rest > _checkability * _variance[s])
+            {
+                double square = residual * residual / rest;
+                if (square > best || bestSlot < 0)
+                {
+                    best = square;
+                    bestSlot = s;
+                }
+            }
+        }
+
+        return (bestSlot, best);
+    }
+
+    /// <summary>ŷ ← ŷ + shift·t and q ← q − factor·t² over a component's slots.</summary>
+    private void ApplyChange(ComponentSlots slots, double shift, double factor)
+    {
+        int s = slots.Start;
+        if (Vector256.IsHardwareAccelerated)
+        {
+            var vShift = Vector256.Create(shift);
+            var vFactor = Vector256.Create(factor);
+            for (; s + Lanes <= slots.End; s += Lanes)
+            {
+                var t = Vector256.Create(_t.AsSpan(s, Lanes));
+                (Vector256.Create(_fitted.AsSpan(s, Lanes)) + (vShift * t)).CopyTo(_fitted.AsSpan(s, Lanes));
+                (Vector256.Create(_quadratic.AsSpan(s, Lanes)) - (vFactor * t * t)).CopyTo(_quadratic.AsSpan(s, Lanes));
+            }
+        }
+
+        for (; s < slots.End; s++)
+        {
+            double t = _t[s];
+            _fitted[s] += shift * t;
+            _quadratic[s] -= factor * t * t;
+        }
+    }
+
+    /// <summary>tₗ = aₗᵀg for every row of a component, stored at the row's slot.</summary>
+    private void MultiplyRows(ComponentSlots slots, ReadOnlySpan<double> g, Span<double> t)
+    {
+        foreach (WidthGroup group in slots.Groups)
+        {
+            int width = group.Width;
+            int count = group.Count;
+            ReadOnlySpan<int> local = group.Local;
+            ReadOnlySpan<double> coefficients = group.Coefficients;
+            int r = 0;
+            if (Vector256.IsHardwareAccelerated)
+            {
+                for (; r + Lanes <= count; r += Lanes)
+                {
+                    Vector256<double> sum = Vector256<double>.Zero;
+                    for (int e = 0; e < width; e++)
+                    {
+                        int o = (e * count) + r;
+                        Vector256<double> gathered = Vector256.Create(g[local[o]], g[local[o + 1]], g[local[o + 2]], g[local[o + 3]]);
+                        sum += Vector256.Create(coefficients.Slice(o, Lanes)) * gathered;
+                    }
+
+                    sum.CopyTo(t.Slice(group.Start + r, Lanes));
+                }
+            }
+
+            for (; r < count; r++)
+            {
+                double sum = 0.0;
+                for (int e = 0; e < width; e++)
+                {
+                    int o = (e * count) + r;
+                    sum += coefficients[o] * g[local[o]];
+                }
+
+                t[group.Start + r] = sum;
+            }
+        }
+    }
+
+    /// <summary>The worst observation over all components, taking <paramref name="candidate"/> (with z² <paramref name="candidateSquare"/>) for component <paramref name="replaced"/>.</summary>
+    private int WorstExcept(int replaced, int candidate, double candidateSquare = -1.0)
+    {
+        int worst = -1;
+        double best = -1.0;
+        for (int c = 0; c < _components.Length; c++)
+        {
+            int observation;
+            double square;
+            if (c == replaced)
+            {
+                observation = candidate;
+                square = candidateSquare;
+            }
+            else
+            {
+                int slot = _components[c].BestSlot;
+                observation = slot < 0 ? -1 : _observationAt[slot];
+                square = _components[c].BestSquare;
+            }
+
+            if (observation >= 0 && (square > best || (square == best && observation < worst)))
+            {
+                worst = observation;
+                best = square;
+            }
+        }
+
+        return worst;
     }
 
     /// <summary>c = Δw/(1 + Δw·qᵢ) for the change of observation i's uncertainty to u.</summary>
@@ -335,104 +441,76 @@ internal sealed class IncrementalFit
     {
         double old = _engine.Uncertainty(i);
         double deltaWeight = (1.0 / (uncertainty * uncertainty)) - (1.0 / (old * old));
-        return deltaWeight / (1.0 + (deltaWeight * _quadratic[i]));
+        return deltaWeight / (1.0 + (deltaWeight * _quadratic[_slotOf[i]]));
     }
 
-    private double ZOf(double residual, double uncertainty, double quadratic)
+    private double ZOf(double residual, double variance, double quadratic)
     {
-        double u2 = uncertainty * uncertainty;
-        double rest = u2 - quadratic;
-        return rest > _checkability * u2 ? residual / Math.Sqrt(rest) : double.NaN;
+        double rest = variance - quadratic;
+        return rest > _checkability * variance ? residual / Math.Sqrt(rest) : double.NaN;
     }
 
-    /// <summary>Recomputes ŷ, q and z of component c's observations from the dense G and x̂.</summary>
+    /// <summary>Recomputes ŷ and q of component c's observations from the dense G and x̂, and its worst observation.</summary>
     private void Refresh(int c)
     {
-        foreach (int i in _engine.Components[c].Observations)
+        ComponentSlots slots = _components[c];
+        for (int s = slots.Start; s < slots.End; s++)
         {
+            int i = _observationAt[s];
             (double fitted, double quadratic) = _engine.FitObservation(i);
-            _fitted[i] = fitted;
-            _quadratic[i] = quadratic;
-            _z[i] = ZOf(_values[i] - fitted, _engine.Uncertainty(i), quadratic);
+            double u = _engine.Uncertainty(i);
+            _fitted[s] = fitted;
+            _quadratic[s] = quadratic;
+            _variance[s] = u * u;
+            _t[s] = 0.0;
         }
-    }
 
-    /// <summary>tₗ = aₗᵀg for every row of the groups, tₗ stored at the row's position.</summary>
-    /// <remarks>
-    /// Rows are grouped by length so the inner loop has a fixed trip count (no mispredicted loop exits); each tₗ is
-    /// summed in the row's own order, as a plain loop would.
-    /// </remarks>
-    private static void MultiplyRows(RowGroup[] groups, ReadOnlySpan<double> g, Span<double> t)
-    {
-        foreach (RowGroup group in groups)
+        // With t = 0 the "change" is none: the same scan finds the current worst.
+        int bestSlot = -1;
+        double bestSquare = -1.0;
+        foreach (WidthGroup group in slots.Groups)
         {
-            int width = group.Width;
-            ReadOnlySpan<int> positions = group.Positions;
-            ReadOnlySpan<int> local = group.Local;
-            ReadOnlySpan<double> coefficients = group.Coefficients;
-            for (int r = 0; r < positions.Length; r++)
+            (int slot, double square) = BestInGroup(group, 0.0, 0.0);
+            if (slot >= 0 && (square > bestSquare || (square == bestSquare && _observationAt[slot] < _observationAt[bestSlot])))
             {
-                int e0 = r * width;
-                double sum = 0.0;
-                for (int e = e0; e < e0 + width; e++)
-                {
-                    sum += coefficients[e] * g[local[e]];
-                }
-
-                t[positions[r]] = sum;
+                bestSlot = slot;
+                bestSquare = square;
             }
         }
-    }
 
-    /// <summary>Component c's rows grouped by their number of nonzeros, built on first use.</summary>
-    private RowGroup[] RowGroupsOf(int c)
-    {
-        if (_rowGroups[c] is { } built)
-        {
-            return built;
-        }
-
-        int[] observations = _engine.Components[c].Observations;
-        var byWidth = new SortedDictionary<int, List<int>>();
-        for (int p = 0; p < observations.Length; p++)
-        {
-            int l = observations[p];
-            int width = _rowStart[l + 1] - _rowStart[l];
-            if (!byWidth.TryGetValue(width, out List<int>? positions))
-            {
-                positions = [];
-                byWidth.Add(width, positions);
-            }
-
-            positions.Add(p);
-        }
-
-        var groups = new RowGroup[byWidth.Count];
-        int g = 0;
-        foreach ((int width, List<int> positions) in byWidth)
-        {
-            var local = new int[positions.Count * width];
-            var coefficients = new double[positions.Count * width];
-            for (int r = 0; r < positions.Count; r++)
-            {
-                int start = _rowStart[observations[positions[r]]];
-                Array.Copy(_local, start, local, r * width, width);
-                Array.Copy(_coefficients, start, coefficients, r * width, width);
-            }
-
-            groups[g++] = new RowGroup(width, positions.ToArray(), local, coefficients);
-        }
-
-        return _rowGroups[c] = groups;
+        slots.BestSlot = bestSlot;
+        slots.BestSquare = bestSquare;
     }
 
     private LowRank LowRankOf(int c) => _lowRank[c] ??= new LowRank(_engine.Components[c].Size, Math.Max(1, Math.Min(_blockSize, _engine.Components[c].Size)));
 
-    /// <summary>g = G·aᵢ (first k entries) for a prepared observation and tₗ = aₗᵀg for the observations of its component (in component order).</summary>
-    internal sealed record Probe(int Observation, int Component, double[] G, double[] T);
+    /// <summary>g = G·aᵢ (first k entries) for a prepared observation; tₗ for its component is held by the fit.</summary>
+    internal sealed record Probe(int Observation, int Component, double[] G);
 
-    /// <summary>Rows of one length: positions in the component's observation list, then local indices and coefficients, row after row.</summary>
-    private sealed record RowGroup(int Width, int[] Positions, int[] Local, double[] Coefficients);
+    /// <summary>A component's slots [Start, End), its rows grouped by length, and its current worst slot.</summary>
+    private sealed class ComponentSlots(int start, int end, WidthGroup[] groups)
+    {
+        public int Start { get; } = start;
+
+        public int End { get; } = end;
+
+        public WidthGroup[] Groups { get; } = groups;
+
+        /// <summary>The slot with the largest checkable |z| now, or −1.</summary>
+        public int BestSlot { get; set; } = -1;
+
+        /// <summary>Its z² (−1 when there is none).</summary>
+        public double BestSquare { get; set; } = -1.0;
+
+        /// <summary>The slot and z² found by the last evaluated change, which a commit takes over.</summary>
+        public int PendingBestSlot { get; set; } = -1;
+
+        /// <summary>The z² of <see cref="PendingBestSlot"/>.</summary>
+        public double PendingBestSquare { get; set; } = -1.0;
+    }
+
+    /// <summary>Rows of one length occupying slots Start..Start+Count−1; entry e of row r at e·Count + r.</summary>
+    private sealed record WidthGroup(int Width, int Start, int Count, int[] Local, double[] Coefficients);
 
     private sealed class LowRank(int size, int capacity)
     {
