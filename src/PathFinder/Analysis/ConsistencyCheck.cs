@@ -35,6 +35,14 @@ public static class ConsistencyCheck
     {
         ArgumentNullException.ThrowIfNull(model);
         options ??= new ConsistencyOptions();
+        // The cycle search needs only the measurements, not the solution: it runs on another core meanwhile.
+        Task<CycleSearchResult> cycleSearch = Task.Run(() => FindCycles.In(model.ToRouteNetwork(), new CycleSearchOptions
+        {
+            MaxSize = options.MaxCycleSize,
+            MaxCycles = options.MaxCycles,
+            TimeBudget = options.CycleTimeBudget,
+            CancellationToken = options.CancellationToken,
+        }));
         ObservationSystem system = model.ToObservationSystem();
         LeastSquaresSolution asGiven = WeightedLeastSquares.Solve(system);
         LeastSquaresSolution adjusted = asGiven;
@@ -75,13 +83,7 @@ public static class ConsistencyCheck
                 suspect.TotalInflation))
             .ToArray();
 
-        CycleSearchResult cycles = FindCycles.In(model.ToRouteNetwork(), new CycleSearchOptions
-        {
-            MaxSize = options.MaxCycleSize,
-            MaxCycles = options.MaxCycles,
-            TimeBudget = options.CycleTimeBudget,
-            CancellationToken = options.CancellationToken,
-        });
+        CycleSearchResult cycles = cycleSearch.GetAwaiter().GetResult();
         CycleCheck[] cycleChecks = cycles.Cycles
             .Select((cycle, position) => new CycleCheck(
                 position + 1,
