@@ -110,7 +110,9 @@ internal sealed class ComponentFactorization
         }
 
         // Accumulate N = AᵀWA (upper triangle) and b = AᵀWv row by row: a few nonzeros per row.
-        var n = new double[k * k];
+        AlignedBuffer work = WorkBuffer.Take(k * k);
+        Span<double> n = work.Span[..(k * k)];
+        n.Clear();
         var b = new double[k];
         foreach (int i in Observations)
         {
@@ -151,7 +153,7 @@ internal sealed class ComponentFactorization
         }
 
         var pivot = new int[k];
-        int rank = kernel.PivotedCholesky(n, k, pivot, options.RankTolerance);
+        int rank = kernel.PivotedCholesky(work, k, pivot, options.RankTolerance);
         Rank = rank;
         int d = k - rank;
 
@@ -169,7 +171,8 @@ internal sealed class ComponentFactorization
             Determined[j] = Math.Sqrt(norm2) <= options.EstimabilityTolerance;
         }
 
-        kernel.InvertFromFactor(n, k, rank);
+        kernel.InvertFromFactor(work, k, rank);
+        Span<double> covariance = Covariance.Span;
         for (int bc = 0; bc < rank; bc++)
         {
             int gc = pivot[bc];
@@ -177,10 +180,12 @@ internal sealed class ComponentFactorization
             {
                 int gr = pivot[br];
                 double g = n[br + (bc * k)] * s[gr] * s[gc];
-                Covariance[gr + (gc * k)] = g;
-                Covariance[gc + (gr * k)] = g;
+                covariance[gr + (gc * k)] = g;
+                covariance[gc + (gr * k)] = g;
             }
         }
+
+        WorkBuffer.Return(work);
 
         for (int c = 0; c < k; c++)
         {
@@ -228,7 +233,32 @@ internal sealed class ComponentFactorization
         UpdatesSinceFactorization++;
     }
 
-    private static double[] NullSpace(double[] u, int k, int rank, int[] pivot, double[] s)
+    /// <summary>One reusable work matrix for factorizations, so repeated solves do not each allocate 8k² bytes.</summary>
+    /// <remarks>
+    /// A matrix of a few tens of megabytes lands on the large-object heap, and every such allocation counts toward
+    /// a full (generation 2) collection; reusing one buffer removed several of those per command.
+    /// </remarks>
+    private static class WorkBuffer
+    {
+        private static AlignedBuffer? s_cached;
+
+        public static AlignedBuffer Take(int length)
+        {
+            AlignedBuffer? cached = Interlocked.Exchange(ref s_cached, null);
+            return cached is not null && cached.Length >= length ? cached : new AlignedBuffer(length);
+        }
+
+        public static void Return(AlignedBuffer buffer)
+        {
+            AlignedBuffer? previous = s_cached;
+            if (previous is null || previous.Length < buffer.Length)
+            {
+                Interlocked.CompareExchange(ref s_cached, buffer, previous);
+            }
+        }
+    }
+
+    private static double[] NullSpace(ReadOnlySpan<double> u, int k, int rank, int[] pivot, double[] s)
     {
         int d = k - rank;
         var z = new double[k * d];
@@ -245,7 +275,7 @@ internal sealed class ComponentFactorization
             for (int r = rank - 1; r >= 0; r--)
             {
                 y[r] /= u[r + (r * k)];
-                ManagedKernel.Axpy(-y[r], u.AsSpan(r * k, r), y.AsSpan(0, r));
+                ManagedKernel.Axpy(-y[r], u.Slice(r * k, r), y.AsSpan(0, r));
             }
 
             // Back to original variables: null(A) = S·null(A·S).

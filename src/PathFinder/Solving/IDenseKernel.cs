@@ -16,10 +16,10 @@ internal interface IDenseKernel
     /// <param name="pivot">On exit, pivot[k] = original index of the k-th pivoted column (0-based).</param>
     /// <param name="tolerance">Absolute pivot threshold.</param>
     /// <returns>The computed rank.</returns>
-    int PivotedCholesky(double[] a, int n, int[] pivot, double tolerance);
+    int PivotedCholesky(AlignedBuffer a, int n, int[] pivot, double tolerance);
 
     /// <summary>Replaces the leading rank×rank upper triangle U₁₁ by the upper triangle of (U₁₁ᵀU₁₁)⁻¹.</summary>
-    void InvertFromFactor(double[] a, int n, int rank);
+    void InvertFromFactor(AlignedBuffer a, int n, int rank);
 
     /// <summary>Applies a symmetric low-rank correction G ← G − Σⱼ cⱼ·vⱼvⱼᵀ to a full (both triangles) n×n matrix.</summary>
     /// <param name="g">The full symmetric matrix, column-major, leading dimension n (updated in place).</param>

@@ -25,8 +25,9 @@ internal sealed class ManagedKernel : IDenseKernel
 
     public LinearAlgebraBackend Backend => LinearAlgebraBackend.Managed;
 
-    public int PivotedCholesky(double[] a, int n, int[] pivot, double tolerance)
+    public int PivotedCholesky(AlignedBuffer matrix, int n, int[] pivot, double tolerance)
     {
+        Span<double> a = matrix.Span;
         for (int k = 0; k < n; k++)
         {
             pivot[k] = k;
@@ -73,14 +74,14 @@ internal sealed class ManagedKernel : IDenseKernel
                 double ajj = Math.Sqrt(bestValue);
                 a[j + (j * n)] = ajj;
                 int blockRows = j - j0;
-                ReadOnlySpan<double> columnJ = a.AsSpan(j0 + (j * n), blockRows);
+                ReadOnlySpan<double> columnJ = a.Slice(j0 + (j * n), blockRows);
                 double inverse = 1.0 / ajj;
                 for (int c = j + 1; c < n; c++)
                 {
                     double value = a[j + (c * n)];
                     if (blockRows > 0)
                     {
-                        value -= Dot(columnJ, a.AsSpan(j0 + (c * n), blockRows));
+                        value -= Dot(columnJ, a.Slice(j0 + (c * n), blockRows));
                     }
 
                     a[j + (c * n)] = value * inverse;
@@ -91,10 +92,10 @@ internal sealed class ManagedKernel : IDenseKernel
             int j1 = j0 + jb;
             for (int c = j1; c < n; c++)
             {
-                ReadOnlySpan<double> uc = a.AsSpan(j0 + (c * n), jb);
+                ReadOnlySpan<double> uc = a.Slice(j0 + (c * n), jb);
                 for (int i = j1; i <= c; i++)
                 {
-                    a[i + (c * n)] -= Dot(a.AsSpan(j0 + (i * n), jb), uc);
+                    a[i + (c * n)] -= Dot(a.Slice(j0 + (i * n), jb), uc);
                 }
             }
         }
@@ -102,8 +103,9 @@ internal sealed class ManagedKernel : IDenseKernel
         return n;
     }
 
-    public void InvertFromFactor(double[] a, int n, int rank)
+    public void InvertFromFactor(AlignedBuffer matrix, int n, int rank)
     {
+        Span<double> a = matrix.Span;
         int r = rank;
         if (r == 0)
         {
@@ -120,7 +122,7 @@ internal sealed class ManagedKernel : IDenseKernel
             for (int k = 0; k < j; k++)
             {
                 double uk = a[k + (j * n)];
-                Axpy(uk, a.AsSpan(k * n, k + 1), y.AsSpan(0, k + 1));
+                Axpy(uk, a.Slice(k * n, k + 1), y.AsSpan(0, k + 1));
             }
 
             for (int i = 0; i < j; i++)
@@ -150,7 +152,7 @@ internal sealed class ManagedKernel : IDenseKernel
     }
 
     /// <summary>Symmetric interchange of rows/columns j &lt; p in upper storage, including the rows of U above j.</summary>
-    private static void SwapSymmetric(double[] a, int n, int j, int p)
+    private static void SwapSymmetric(Span<double> a, int n, int j, int p)
     {
         for (int i = 0; i < j; i++)
         {
