@@ -137,15 +137,22 @@ public static class CheckSolveBenchmark
     {
         private readonly Stopwatch _watch = Stopwatch.StartNew();
         private TimeSpan _cpu = Cpu();
+        private long _allocated = GC.GetTotalAllocatedBytes();
+        private int _fullCollections = GC.CollectionCount(2);
 
         public string Lap()
         {
             double wall = _watch.Elapsed.TotalMilliseconds;
             TimeSpan cpu = Cpu();
             double used = (cpu - _cpu).TotalMilliseconds;
+            long allocated = GC.GetTotalAllocatedBytes();
+            int fullCollections = GC.CollectionCount(2);
+            string text = string.Create(CultureInfo.InvariantCulture, $"{wall,7:F0} ms (CPU {used,6:F0} ms, {(allocated - _allocated) / 1e6,4:F0} MB allocated, {fullCollections - _fullCollections} full GC)");
             _cpu = cpu;
+            _allocated = allocated;
+            _fullCollections = fullCollections;
             _watch.Restart();
-            return string.Create(CultureInfo.InvariantCulture, $"{wall,7:F0} ms (CPU {used,6:F0} ms)");
+            return text;
         }
     }
 
