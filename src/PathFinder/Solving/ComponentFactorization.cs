@@ -21,6 +21,9 @@ namespace PathFinder.Solving;
 /// </remarks>
 internal sealed class ComponentFactorization
 {
+    /// <summary>How far every unpivoted pivot must clear the rank tolerance for the fast full-rank route (see <see cref="Factor"/>).</summary>
+    private const double FullRankMargin = 1e4;
+
     private ComponentFactorization(int[] unknowns, int[] observations)
     {
         Unknowns = unknowns;
@@ -109,11 +112,93 @@ internal sealed class ComponentFactorization
             return;
         }
 
-        // Accumulate N = AᵀWA (upper triangle) and b = AᵀWv row by row: a few nonzeros per row.
+        // Fast path: an unpivoted Cholesky in place in the covariance buffer (no second k×k buffer, no pivot
+        // search). The unpivoted pivot of column j is its squared distance from the span of the earlier columns, so a
+        // singular N̂ always shows a zero pivot (up to rounding) in this order too; when every pivot clears the rank
+        // tolerance by a wide margin the rank is full, and the rank-revealing pivoted route would find the same.
+        // Otherwise that route decides the rank.
+        var b = new double[k];
+        var s = new double[k];
+        Span<double> covariance = Covariance.Span;
+        AccumulateNormalEquations(rows, uncertainties, localOf, covariance, b, s);
+        if (kernel.TryCholesky(Covariance, k, options.RankTolerance * FullRankMargin))
+        {
+            Rank = k;
+            NullBasis = [];
+            Array.Fill(Determined, true);
+            kernel.InvertFromFactor(Covariance, k, k);
+            for (int c = 0; c < k; c++)
+            {
+                for (int r = 0; r <= c; r++)
+                {
+                    covariance[r + (c * k)] *= s[r] * s[c];
+                }
+            }
+
+            ManagedKernel.MirrorUpper(covariance, k);
+        }
+        else
+        {
+            FactorPivoted(rows, uncertainties, localOf, kernel, options, b, s);
+        }
+
+        for (int c = 0; c < k; c++)
+        {
+            ManagedKernel.Axpy(b[c], Covariance.AsSpan(c * k, k), Solution);
+        }
+    }
+
+    /// <summary>Rank-revealing route: pivoted Cholesky in a work buffer, g-inverse of the leading block, null space.</summary>
+    private void FactorPivoted(IReadOnlyList<Observation> rows, double[] uncertainties, int[] localOf, IDenseKernel kernel, SolverOptions options, double[] b, double[] s)
+    {
+        int k = Size;
         AlignedBuffer work = WorkBuffer.Take(k * k);
         Span<double> n = work.Span[..(k * k)];
-        n.Clear();
-        var b = new double[k];
+        Array.Clear(b);
+        AccumulateNormalEquations(rows, uncertainties, localOf, n, b, s);
+        var pivot = new int[k];
+        int rank = kernel.PivotedCholesky(work, k, pivot, options.RankTolerance);
+        Rank = rank;
+        int d = k - rank;
+
+        // Null space: with PᵀN̂P = UᵀU and U = [U₁₁ U₁₂], the null space of N̂ is P·[−U₁₁⁻¹U₁₂; I].
+        NullBasis = d == 0 ? [] : NullSpace(n, k, rank, pivot, s);
+        for (int j = 0; j < k; j++)
+        {
+            double norm2 = 0.0;
+            for (int c = 0; c < d; c++)
+            {
+                double z = NullBasis[j + (c * k)];
+                norm2 += z * z;
+            }
+
+            Determined[j] = Math.Sqrt(norm2) <= options.EstimabilityTolerance;
+        }
+
+        kernel.InvertFromFactor(work, k, rank);
+        Span<double> covariance = Covariance.Span;
+        covariance.Clear();
+        for (int bc = 0; bc < rank; bc++)
+        {
+            int gc = pivot[bc];
+            for (int br = 0; br <= bc; br++)
+            {
+                int gr = pivot[br];
+                double g = n[br + (bc * k)] * s[gr] * s[gc];
+                covariance[gr + (gc * k)] = g;
+                covariance[gc + (gr * k)] = g;
+            }
+        }
+
+        WorkBuffer.Return(work);
+    }
+
+    /// <summary>Accumulates the upper triangle of N = AᵀWA and b = AᵀWv, then scales N to unit diagonal (s = 1/√Nⱼⱼ).</summary>
+    /// <remarks>Scaling makes the rank tolerance relative, so weights of very different size do not matter.</remarks>
+    private void AccumulateNormalEquations(IReadOnlyList<Observation> rows, double[] uncertainties, int[] localOf, Span<double> n, double[] b, double[] s)
+    {
+        int k = Size;
+        n[..(k * k)].Clear();
         foreach (int i in Observations)
         {
             Observation observation = rows[i];
@@ -137,8 +222,6 @@ internal sealed class ComponentFactorization
             }
         }
 
-        // Scale to unit diagonal so that the rank tolerance is relative and weights of very different size do not matter.
-        var s = new double[k];
         for (int j = 0; j < k; j++)
         {
             s[j] = 1.0 / Math.Sqrt(n[j + (j * k)]);
@@ -150,46 +233,6 @@ internal sealed class ComponentFactorization
             {
                 n[r + (c * k)] *= s[r] * s[c];
             }
-        }
-
-        var pivot = new int[k];
-        int rank = kernel.PivotedCholesky(work, k, pivot, options.RankTolerance);
-        Rank = rank;
-        int d = k - rank;
-
-        // Null space: with PᵀN̂P = UᵀU and U = [U₁₁ U₁₂], the null space of N̂ is P·[−U₁₁⁻¹U₁₂; I].
-        NullBasis = d == 0 ? [] : NullSpace(n, k, rank, pivot, s);
-        for (int j = 0; j < k; j++)
-        {
-            double norm2 = 0.0;
-            for (int c = 0; c < d; c++)
-            {
-                double z = NullBasis[j + (c * k)];
-                norm2 += z * z;
-            }
-
-            Determined[j] = Math.Sqrt(norm2) <= options.EstimabilityTolerance;
-        }
-
-        kernel.InvertFromFactor(work, k, rank);
-        Span<double> covariance = Covariance.Span;
-        for (int bc = 0; bc < rank; bc++)
-        {
-            int gc = pivot[bc];
-            for (int br = 0; br <= bc; br++)
-            {
-                int gr = pivot[br];
-                double g = n[br + (bc * k)] * s[gr] * s[gc];
-                covariance[gr + (gc * k)] = g;
-                covariance[gc + (gr * k)] = g;
-            }
-        }
-
-        WorkBuffer.Return(work);
-
-        for (int c = 0; c < k; c++)
-        {
-            ManagedKernel.Axpy(b[c], Covariance.AsSpan(c * k, k), Solution);
         }
     }
 

@@ -18,6 +18,10 @@ internal interface IDenseKernel
     /// <returns>The computed rank.</returns>
     int PivotedCholesky(AlignedBuffer a, int n, int[] pivot, double tolerance);
 
+    /// <summary>Unpivoted Cholesky A = UᵀU in place, accepted only when every pivot Uⱼⱼ² exceeds <paramref name="minimumPivot"/>.</summary>
+    /// <returns>True with U in the upper triangle; false when declined or not positive definite (A is then destroyed).</returns>
+    bool TryCholesky(AlignedBuffer a, int n, double minimumPivot);
+
     /// <summary>Replaces the leading rank×rank upper triangle U₁₁ by the upper triangle of (U₁₁ᵀU₁₁)⁻¹.</summary>
     void InvertFromFactor(AlignedBuffer a, int n, int rank);
 

@@ -103,6 +103,9 @@ internal sealed class ManagedKernel : IDenseKernel
         return n;
     }
 
+    /// <summary>The managed kernel always takes the pivoted route (it is the fallback; simplicity over speed).</summary>
+    public bool TryCholesky(AlignedBuffer a, int n, double minimumPivot) => false;
+
     public void InvertFromFactor(AlignedBuffer matrix, int n, int rank)
     {
         Span<double> a = matrix.Span;
@@ -213,6 +216,27 @@ internal sealed class ManagedKernel : IDenseKernel
         }
 
         return sum;
+    }
+
+    /// <summary>Copies the upper triangle onto the lower one, in cache-sized tiles.</summary>
+    internal static void MirrorUpper(Span<double> g, int n)
+    {
+        const int Tile = 32;
+        for (int c0 = 0; c0 < n; c0 += Tile)
+        {
+            int c1 = Math.Min(n, c0 + Tile);
+            for (int r0 = c0; r0 < n; r0 += Tile)
+            {
+                int r1 = Math.Min(n, r0 + Tile);
+                for (int c = c0; c < c1; c++)
+                {
+                    for (int r = Math.Max(r0, c + 1); r < r1; r++)
+                    {
+                        g[r + (c * n)] = g[c + (r * n)];
+                    }
+                }
+            }
+        }
     }
 
     /// <summary>y += Σⱼ alphas[j]·x⁽ʲ⁾ with x⁽ʲ⁾ = vectors[offsets[j] .. offsets[j] + y.Length − 1].</summary>

@@ -57,6 +57,41 @@ internal sealed class OpenBlasKernel : IDenseKernel
         return rank;
     }
 
+    public bool TryCholesky(AlignedBuffer a, int n, double minimumPivot)
+    {
+        if (n == 0)
+        {
+            return true;
+        }
+
+        byte uplo = (byte)'U';
+        int order = n;
+        int lda = n;
+        int info = 0;
+        Dpotrf(ref uplo, ref order, ref a.First, ref lda, ref info, 1);
+        if (info < 0)
+        {
+            throw new InvalidOperationException($"dpotrf_ rejected argument {-info}.");
+        }
+
+        if (info > 0)
+        {
+            return false;
+        }
+
+        Span<double> factor = a.Span;
+        for (int j = 0; j < n; j++)
+        {
+            double pivot = factor[j + (j * n)];
+            if (!(pivot * pivot > minimumPivot))
+            {
+                return false;
+            }
+        }
+
+        return true;
+    }
+
     public void InvertFromFactor(AlignedBuffer a, int n, int rank)
     {
         if (rank == 0)
@@ -111,7 +146,7 @@ internal sealed class OpenBlasKernel : IDenseKernel
             byte trans = (byte)'N';
             double alpha = allNegative ? 1.0 : -1.0;
             Dsyrk(ref uplo, ref trans, ref order, ref inner, ref alpha, ref scaled.First, ref ld, ref beta, ref g.First, ref ld, 1, 1);
-            MirrorUpper(g.Span, n);
+            ManagedKernel.MirrorUpper(g.Span, n);
             return;
         }
 
@@ -164,27 +199,6 @@ internal sealed class OpenBlasKernel : IDenseKernel
         return t_scratch;
     }
 
-    /// <summary>Copies the upper triangle onto the lower one, in cache-sized tiles.</summary>
-    private static void MirrorUpper(Span<double> g, int n)
-    {
-        const int Tile = 32;
-        for (int c0 = 0; c0 < n; c0 += Tile)
-        {
-            int c1 = Math.Min(n, c0 + Tile);
-            for (int r0 = c0; r0 < n; r0 += Tile)
-            {
-                int r1 = Math.Min(n, r0 + Tile);
-                for (int c = c0; c < c1; c++)
-                {
-                    for (int r = Math.Max(r0, c + 1); r < r1; r++)
-                    {
-                        g[r + (c * n)] = g[c + (r * n)];
-                    }
-                }
-            }
-        }
-    }
-
     private static void Scale(double factor, ReadOnlySpan<double> source, Span<double> target)
     {
         for (int t = 0; t < source.Length; t++)
@@ -217,6 +231,7 @@ internal sealed class OpenBlasKernel : IDenseKernel
             && NativeLibrary.TryGetExport(handle, "openblas_set_num_threads", out _);
 
         return NativeLibrary.TryGetExport(handle, "dpstrf_", out _) && NativeLibrary.TryGetExport(handle, "dpotri_", out _)
+            && NativeLibrary.TryGetExport(handle, "dpotrf_", out _)
             && NativeLibrary.TryGetExport(handle, "dgemm_", out _)
             && NativeLibrary.TryGetExport(handle, "dsyrk_", out _);
     }
@@ -243,6 +258,9 @@ internal sealed class OpenBlasKernel : IDenseKernel
     private static extern void Dsyrk(
         ref byte uplo, ref byte trans, ref int n, ref int k, ref double alpha, ref double a, ref int lda, ref double beta, ref double c, ref int ldc,
         nuint uploLength, nuint transLength);
+
+    [DllImport(LibraryName, EntryPoint = "dpotrf_", ExactSpelling = true)]
+    private static extern void Dpotrf(ref byte uplo, ref int n, ref double a, ref int lda, ref int info, nuint uploLength);
 
     [DllImport(LibraryName, EntryPoint = "dpotri_", ExactSpelling = true)]
     private static extern void Dpotri(ref byte uplo, ref int n, ref double a, ref int lda, ref int info, nuint uploLength);
