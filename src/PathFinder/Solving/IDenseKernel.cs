@@ -25,8 +25,12 @@ internal interface IDenseKernel
     /// <summary>Replaces the leading rank×rank upper triangle U₁₁ by the upper triangle of (U₁₁ᵀU₁₁)⁻¹.</summary>
     void InvertFromFactor(AlignedBuffer a, int n, int rank);
 
-    /// <summary>Applies a symmetric low-rank correction G ← G − Σⱼ cⱼ·vⱼvⱼᵀ to a full (both triangles) n×n matrix.</summary>
-    /// <param name="g">The full symmetric matrix, column-major, leading dimension n (updated in place).</param>
+    /// <summary>Applies a symmetric low-rank correction G ← G − Σⱼ cⱼ·vⱼvⱼᵀ to the upper triangle of an n×n matrix.</summary>
+    /// <remarks>
+    /// The strict lower triangle may be left as it was (it is then stale): copying the upper triangle down after every
+    /// correction cost as much as the correction itself, so callers refresh the columns they read (see <see cref="IncrementalFit"/>).
+    /// </remarks>
+    /// <param name="g">The symmetric matrix, column-major, leading dimension n (upper triangle updated in place).</param>
     /// <param name="n">The order.</param>
     /// <param name="vectors">The vectors vⱼ, column j at j·n (n × rank, column-major).</param>
     /// <param name="coefficients">The coefficients cⱼ.</param>

@@ -137,7 +137,7 @@ internal sealed class IncrementalFit
         for (int p = 0; p < idx.Length; p++)
         {
             local[p] = _engine.LocalIndex(idx[p]);
-            ManagedKernel.Axpy(coef[p], component.Covariance.AsSpan(local[p] * k, k), g);
+            ManagedKernel.Axpy(coef[p], FreshColumn(c, local[p]), g);
         }
 
         // g −= Σⱼ cⱼ(gⱼᵀa)·gⱼ: the dots first (a is sparse), then one pass over g for all the vectors.
@@ -210,6 +210,8 @@ internal sealed class IncrementalFit
             _engine.Refactor(c);
             lowRank.Count = 0;
             lowRank.Changes = 0;
+            lowRank.Generation = 0;
+            Array.Clear(lowRank.ColumnGeneration);
             Refresh(c);
             return;
         }
@@ -232,6 +234,8 @@ internal sealed class IncrementalFit
             {
                 Fold(c);
             }
+
+            MirrorIfStale(c);
         }
     }
 
@@ -241,6 +245,45 @@ internal sealed class IncrementalFit
         LowRank lowRank = _lowRank[c]!;
         _engine.Kernel.SubtractLowRank(component.Covariance, component.Size, lowRank.Vectors, lowRank.Coefficients, lowRank.Count);
         lowRank.Count = 0;
+
+        // Only the upper triangle was updated: every column's part below the diagonal is now stale.
+        lowRank.Generation++;
+    }
+
+    /// <summary>Column s of component c's G with its part below the diagonal refreshed from the upper triangle if stale.</summary>
+    /// <remarks>
+    /// After a fold only the upper triangle is current. A step reads a handful of columns, so copying those rows
+    /// down on demand (k − s elements each) is far cheaper than mirroring the whole matrix after every fold.
+    /// </remarks>
+    private ReadOnlySpan<double> FreshColumn(int c, int s)
+    {
+        ComponentFactorization component = _engine.Components[c];
+        LowRank lowRank = LowRankOf(c);
+        int k = component.Size;
+        Span<double> g = component.Covariance.Span;
+        if (lowRank.ColumnGeneration[s] != lowRank.Generation)
+        {
+            for (int r = s + 1; r < k; r++)
+            {
+                g[r + (s * k)] = g[s + (r * k)];
+            }
+
+            lowRank.ColumnGeneration[s] = lowRank.Generation;
+        }
+
+        return g.Slice(s * k, k);
+    }
+
+    /// <summary>Makes the whole of component c's G current below the diagonal again (after the last fold).</summary>
+    private void MirrorIfStale(int c)
+    {
+        if (_lowRank[c] is { } lowRank && lowRank.Generation != 0)
+        {
+            ComponentFactorization component = _engine.Components[c];
+            ManagedKernel.MirrorUpper(component.Covariance.Span, component.Size);
+            lowRank.Generation = 0;
+            Array.Clear(lowRank.ColumnGeneration);
+        }
     }
 
     /// <summary>The slot of the worst observation of the probed component (or −1) and its z², if i had uncertainty u.</summary>
@@ -529,5 +572,11 @@ internal sealed class IncrementalFit
         public int Count { get; set; }
 
         public int Changes { get; set; }
+
+        /// <summary>Folds since the whole matrix was last current below the diagonal.</summary>
+        public int Generation { get; set; }
+
+        /// <summary>Per column, the generation its part below the diagonal was last refreshed in.</summary>
+        public int[] ColumnGeneration { get; } = new int[size];
     }
 }

@@ -176,16 +176,16 @@ internal sealed class ManagedKernel : IDenseKernel
 
     public void SubtractLowRank(AlignedBuffer g, int n, double[] vectors, double[] coefficients, int rank)
     {
-        // Column by column: G[:, c] −= Σⱼ cⱼ·vⱼ[c]·vⱼ; the rank vectors stay in cache while the columns stream past.
+        // Column by column, upper part only: G[0..c, c] −= Σⱼ cⱼ·vⱼ[c]·vⱼ[0..c]; the vectors stay in cache.
         for (int c = 0; c < n; c++)
         {
-            Span<double> column = g.AsSpan(c * n, n);
+            Span<double> column = g.AsSpan(c * n, c + 1);
             for (int j = 0; j < rank; j++)
             {
                 double alpha = -coefficients[j] * vectors[c + (j * n)];
                 if (alpha != 0.0)
                 {
-                    Axpy(alpha, vectors.AsSpan(j * n, n), column);
+                    Axpy(alpha, vectors.AsSpan(j * n, c + 1), column);
                 }
             }
         }

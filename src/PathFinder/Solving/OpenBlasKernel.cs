@@ -119,7 +119,7 @@ internal sealed class OpenBlasKernel : IDenseKernel
         }
 
         // With all cⱼ of one sign (always so when uncertainties only grow), G − Σcⱼvⱼvⱼᵀ = G ∓ UUᵀ with
-        // U = V·diag(√|c|): one dsyrk_ on the upper triangle (n²·rank flops) and a mirror. Otherwise one dgemm_.
+        // U = V·diag(√|c|): one dsyrk_ on the upper triangle (n²·rank flops). Otherwise one dgemm_ (both triangles).
         // G is updated in place: its storage is pinned and 64-byte aligned for its lifetime, so no copy is needed.
         bool allNegative = true;
         bool allPositive = true;
@@ -146,7 +146,6 @@ internal sealed class OpenBlasKernel : IDenseKernel
             byte trans = (byte)'N';
             double alpha = allNegative ? 1.0 : -1.0;
             Dsyrk(ref uplo, ref trans, ref order, ref inner, ref alpha, ref scaled.First, ref ld, ref beta, ref g.First, ref ld, 1, 1);
-            ManagedKernel.MirrorUpper(g.Span, n);
             return;
         }
 
