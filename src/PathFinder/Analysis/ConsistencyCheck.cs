@@ -43,19 +43,21 @@ public static class ConsistencyCheck
             TimeBudget = options.CycleTimeBudget,
             CancellationToken = options.CancellationToken,
         }));
-        ObservationSystem system = model.ToObservationSystem();
-        LeastSquaresSolution asGiven = WeightedLeastSquares.Solve(system);
-        LeastSquaresSolution adjusted = asGiven;
-        IReadOnlyList<OutlierSuspect> outlierSuspects = [];
-        IReadOnlyList<UncertaintyAdjustment> adjustments = [];
-        if (options.RunSuspectProcedure)
+        // While the cycle search holds one core, dense algebra on several threads only makes them queue for the
+        // other: the solve and the suspect procedure keep OpenBLAS to one thread.
+        (LeastSquaresSolution asGiven, OutlierResult? outliers) = OpenBlasKernel.SingleThreaded(() =>
         {
+            LeastSquaresSolution solution = WeightedLeastSquares.Solve(model.ToObservationSystem());
+
             // Start from the solution just computed: the procedure copies its factorization instead of redoing it.
-            OutlierResult outliers = OutlierProcedure.Run(asGiven, new OutlierOptions { Threshold = options.Threshold, InflationFactor = options.InflationFactor });
-            adjusted = outliers.Solution;
-            outlierSuspects = outliers.Suspects;
-            adjustments = outliers.Adjustments;
-        }
+            OutlierResult? result = options.RunSuspectProcedure
+                ? OutlierProcedure.Run(solution, new OutlierOptions { Threshold = options.Threshold, InflationFactor = options.InflationFactor })
+                : null;
+            return (solution, result);
+        });
+        LeastSquaresSolution adjusted = outliers?.Solution ?? asGiven;
+        IReadOnlyList<OutlierSuspect> outlierSuspects = outliers?.Suspects ?? [];
+        IReadOnlyList<UncertaintyAdjustment> adjustments = outliers?.Adjustments ?? [];
 
         var suspectIndices = new HashSet<int>(outlierSuspects.Select(suspect => suspect.ObservationIndex));
         var checks = new MeasurementCheck[model.Measurements.Count];
@@ -129,7 +131,21 @@ public static class ConsistencyCheck
     private static CrossPropertyCheck[] CrossCheck(ReactionNetwork network, double threshold)
     {
         var checks = new List<CrossPropertyCheck>();
+
+        // Only temperatures at which both ΔS and ΔG were measured can hold a triple; the reaction signature (exact
+        // rational arithmetic per measurement) is computed for those measurements alone, not for a whole ΔH network.
+        var entropyTemperatures = network.Measurements.Where(m => m.Property == ThermoProperty.Entropy).Select(m => Math.Round(m.Temperature, 2)).ToHashSet();
+        var tripleTemperatures = network.Measurements
+            .Where(m => m.Property == ThermoProperty.GibbsEnergy && entropyTemperatures.Contains(Math.Round(m.Temperature, 2)))
+            .Select(m => Math.Round(m.Temperature, 2))
+            .ToHashSet();
+        if (tripleTemperatures.Count == 0)
+        {
+            return [];
+        }
+
         var byReaction = network.Measurements
+            .Where(measurement => tripleTemperatures.Contains(Math.Round(measurement.Temperature, 2)))
             .GroupBy(measurement => (Signature(measurement.Equation), Math.Round(measurement.Temperature, 2)));
         foreach (var group in byReaction)
         {
