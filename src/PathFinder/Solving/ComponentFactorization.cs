@@ -1,3 +1,5 @@
+using System.Runtime.CompilerServices;
+
 namespace PathFinder.Solving;
 
 /// <summary>The factored normal equations of one connected component: generalized inverse, solution, null space.</summary>
@@ -195,6 +197,7 @@ internal sealed class ComponentFactorization
 
     /// <summary>Accumulates the upper triangle of N = AᵀWA and b = AᵀWv, then scales N to unit diagonal (s = 1/√Nⱼⱼ).</summary>
     /// <remarks>Scaling makes the rank tolerance relative, so weights of very different size do not matter.</remarks>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private void AccumulateNormalEquations(IReadOnlyList<Observation> rows, double[] uncertainties, int[] localOf, Span<double> n, double[] b, double[] s)
     {
         int k = Size;

@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Runtime.Intrinsics;
 
 namespace PathFinder.Solving;
@@ -117,6 +118,7 @@ internal sealed class IncrementalFit
 
     /// <summary>Prepares g = G·aᵢ and tₗ = aₗᵀg for every observation l of i's component.</summary>
     /// <remarks>The probe shares buffers with the next one: it is valid until the next call.</remarks>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public Probe Prepare(int i)
     {
         int c = _engine.ComponentOfObservation(i);
@@ -255,6 +257,7 @@ internal sealed class IncrementalFit
     /// After a fold only the upper triangle is current. A step reads a handful of columns, so copying those rows
     /// down on demand (k − s elements each) is far cheaper than mirroring the whole matrix after every fold.
     /// </remarks>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private ReadOnlySpan<double> FreshColumn(int c, int s)
     {
         ComponentFactorization component = _engine.Components[c];
@@ -323,6 +326,7 @@ internal sealed class IncrementalFit
     /// Within a group slots ascend with the observation index, so the first slot holding the largest value
     /// (strictly-greater updates per SIMD lane, then the lowest slot among tied lanes) is the lowest index.
     /// </remarks>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private (int Slot, double Square) BestInGroup(WidthGroup group, double shift, double factor)
     {
         int s = group.Start;
@@ -385,6 +389,7 @@ internal sealed class IncrementalFit
     }
 
     /// <summary>ŷ ← ŷ + shift·t and q ← q − factor·t² over a component's slots.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private void ApplyChange(ComponentSlots slots, double shift, double factor)
     {
         int s = slots.Start;
@@ -409,6 +414,7 @@ internal sealed class IncrementalFit
     }
 
     /// <summary>tₗ = aₗᵀg for every row of a component, stored at the row's slot.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private void MultiplyRows(ComponentSlots slots, ReadOnlySpan<double> g, Span<double> t)
     {
         foreach (WidthGroup group in slots.Groups)

@@ -1,4 +1,5 @@
 using System.Numerics;
+using System.Runtime.CompilerServices;
 using System.Runtime.InteropServices;
 
 namespace PathFinder.Solving;
@@ -191,6 +192,7 @@ internal sealed class ManagedKernel : IDenseKernel
         }
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static double Dot(ReadOnlySpan<double> x, ReadOnlySpan<double> y)
     {
         int length = x.Length;
@@ -219,6 +221,7 @@ internal sealed class ManagedKernel : IDenseKernel
     }
 
     /// <summary>Copies the upper triangle onto the lower one, in cache-sized tiles.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static void MirrorUpper(Span<double> g, int n)
     {
         const int Tile = 32;
@@ -244,6 +247,7 @@ internal sealed class ManagedKernel : IDenseKernel
     /// Bit for bit the same as calling <see cref="Axpy"/> for j = 0, 1, … in turn (each element receives the same
     /// products in the same order, each sum rounded), but y is loaded and stored once per four vectors.
     /// </remarks>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static void AxpyMany(ReadOnlySpan<double> alphas, ReadOnlySpan<int> offsets, ReadOnlySpan<double> vectors, Span<double> y)
     {
         int length = y.Length;
@@ -299,6 +303,7 @@ internal sealed class ManagedKernel : IDenseKernel
         }
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static void Axpy(double alpha, ReadOnlySpan<double> x, Span<double> y)
     {
         int length = x.Length;
