@@ -83,6 +83,21 @@ public sealed class PropertyModel
         var prepared = new List<PreparedMeasurement>();
         var unknowns = new List<Species>();
         var index = new Dictionary<Species, int>();
+
+        // Whether a species is fixed by convention is asked for every term of every measurement; the answer compares
+        // formulas, so it is kept per species instance (the reader shares one instance per species).
+        var fixedByInstance = new Dictionary<Species, bool>(ReferenceEqualityComparer.Instance);
+        bool IsFixed(Species species)
+        {
+            if (!fixedByInstance.TryGetValue(species, out bool isFixed))
+            {
+                isFixed = family.IsFixed(species);
+                fixedByInstance.Add(species, isFixed);
+            }
+
+            return isFixed;
+        }
+
         foreach (Measurement measurement in network.Measurements)
         {
             if (PropertyFamilies.FamilyOf(measurement.Property) != family)
@@ -90,7 +105,7 @@ public sealed class PropertyModel
                 continue;
             }
 
-            if (measurement.Equation.Terms.All(term => family.IsFixed(term.Species)))
+            if (measurement.Equation.Terms.All(term => IsFixed(term.Species)))
             {
                 // Nothing to determine: every species is fixed by convention, so the value should simply be zero.
                 warnings.Add(Diagnostic.Warning("conventional-only", measurement.Location, $"'{measurement.Id}' involves only species whose {family.SpeciesQuantity()} is zero by convention; it is left out of the analysis", "its value should be 0; drop the row or check the equation"));
@@ -100,14 +115,14 @@ public sealed class PropertyModel
             prepared.Add(Prepare(measurement, reference, heatCapacities, warnings));
             foreach (EquationTerm term in measurement.Equation.Terms)
             {
-                if (!family.IsFixed(term.Species) && index.TryAdd(term.Species, unknowns.Count))
+                if (!IsFixed(term.Species) && index.TryAdd(term.Species, unknowns.Count))
                 {
                     unknowns.Add(term.Species);
                 }
             }
         }
 
-        var vectors = prepared.Select(item => ToVector(item.Equation, family, index)).ToArray();
+        var vectors = prepared.Select(item => ToVector(item.Equation, IsFixed, index)).ToArray();
         return new PropertyModel(family, reference, unknowns, prepared, vectors, warnings);
     }
 
@@ -181,12 +196,12 @@ public sealed class PropertyModel
     /// <remarks>Built on first use and then shared (the model and the route network are both immutable), so a second search to another target starts at once.</remarks>
     public RouteNetwork ToRouteNetwork() => _routeNetwork.Value;
 
-    private static SparseVector ToVector(ChemicalEquation equation, PropertyFamily family, Dictionary<Species, int> index)
+    private static SparseVector ToVector(ChemicalEquation equation, Func<Species, bool> isFixed, Dictionary<Species, int> index)
     {
-        var entries = new List<KeyValuePair<int, Fraction>>();
+        var entries = new List<KeyValuePair<int, Fraction>>(equation.Terms.Count);
         foreach (EquationTerm term in equation.Terms)
         {
-            if (!family.IsFixed(term.Species))
+            if (!isFixed(term.Species))
             {
                 entries.Add(new KeyValuePair<int, Fraction>(index[term.Species], term.Coefficient));
             }
