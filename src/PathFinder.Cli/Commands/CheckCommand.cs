@@ -45,9 +45,7 @@ public sealed class CheckCommand
         }
 
         OptionParsing.Positive(maxCycle, "--max-cycle");
-        var swx = System.Diagnostics.Stopwatch.StartNew(); Console.Error.WriteLine($"T since process start {(DateTime.Now - System.Diagnostics.Process.GetCurrentProcess().StartTime).TotalMilliseconds:F0} ms");
         AnalysisSession? session = AnalysisSession.Open(path, context, skipInvalid, out int exitCode);
-        Console.Error.WriteLine($"T read {swx.ElapsedMilliseconds}");
         if (session is null)
         {
             return exitCode;
@@ -55,7 +53,6 @@ public sealed class CheckCommand
 
         var options = new ConsistencyOptions { Threshold = threshold, InflationFactor = inflation, MaxCycleSize = maxCycle };
         ConsistencyReport report = ConsistencyCheck.Run(session.Network, session.HeatCapacities, options);
-        Console.Error.WriteLine($"T analysed {swx.ElapsedMilliseconds}");
         if (json)
         {
             CheckOutput.WriteJson(context.Out, report);
@@ -65,7 +62,6 @@ public sealed class CheckCommand
             CheckOutput.WriteText(context.Out, report, Math.Max(0, showCycles));
         }
 
-        Console.Error.WriteLine($"T written {swx.ElapsedMilliseconds}");
         return report.Consistent ? ExitCodes.Success : ExitCodes.AnalysisProblem;
     }
 }
