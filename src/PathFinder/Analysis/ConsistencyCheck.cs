@@ -35,7 +35,10 @@ public static class ConsistencyCheck
     {
         ArgumentNullException.ThrowIfNull(model);
         options ??= new ConsistencyOptions();
-        // The cycle search needs only the measurements, not the solution: it runs on another core meanwhile.
+        // The solve first, with every core for its dense algebra; then the cycle search (which needs only the
+        // measurements) runs on another core beside the suspect procedure. The procedure keeps OpenBLAS to one
+        // thread meanwhile: more would only queue for the core the cycle search holds.
+        LeastSquaresSolution asGiven = WeightedLeastSquares.Solve(model.ToObservationSystem());
         Task<CycleSearchResult> cycleSearch = Task.Run(() => FindCycles.In(model.ToRouteNetwork(), new CycleSearchOptions
         {
             MaxSize = options.MaxCycleSize,
@@ -43,18 +46,11 @@ public static class ConsistencyCheck
             TimeBudget = options.CycleTimeBudget,
             CancellationToken = options.CancellationToken,
         }));
-        // While the cycle search holds one core, dense algebra on several threads only makes them queue for the
-        // other: the solve and the suspect procedure keep OpenBLAS to one thread.
-        (LeastSquaresSolution asGiven, OutlierResult? outliers) = OpenBlasKernel.SingleThreaded(() =>
-        {
-            LeastSquaresSolution solution = WeightedLeastSquares.Solve(model.ToObservationSystem());
 
-            // Start from the solution just computed: the procedure copies its factorization instead of redoing it.
-            OutlierResult? result = options.RunSuspectProcedure
-                ? OutlierProcedure.Run(solution, new OutlierOptions { Threshold = options.Threshold, InflationFactor = options.InflationFactor })
-                : null;
-            return (solution, result);
-        });
+        // Start from the solution just computed: the procedure copies its factorization instead of redoing it.
+        OutlierResult? outliers = options.RunSuspectProcedure
+            ? OpenBlasKernel.SingleThreaded(() => OutlierProcedure.Run(asGiven, new OutlierOptions { Threshold = options.Threshold, InflationFactor = options.InflationFactor }))
+            : null;
         LeastSquaresSolution adjusted = outliers?.Solution ?? asGiven;
         IReadOnlyList<OutlierSuspect> outlierSuspects = outliers?.Suspects ?? [];
         IReadOnlyList<UncertaintyAdjustment> adjustments = outliers?.Adjustments ?? [];
