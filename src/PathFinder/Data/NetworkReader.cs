@@ -19,6 +19,9 @@ namespace PathFinder.Data;
 /// </remarks>
 public static class NetworkReader
 {
+    /// <summary>Below this many distinct equations in a file, parsing them ahead on several threads does not pay.</summary>
+    private const int PreparseMinimum = 2000;
+
     /// <summary>The required columns.</summary>
     public static IReadOnlyList<string> RequiredColumns { get; } = ["id", "equation", "property", "value", "uncertainty"];
 
@@ -130,6 +133,7 @@ public static class NetworkReader
 
         string defaultSource = Path.GetFileNameWithoutExtension(file);
         var map = new ColumnMap(columns, table.Header.Count);
+        PreparseEquations(table, map, catalog, equations);
         foreach (CsvRow row in table.Rows)
         {
             // Ids are checked on every row, valid or not, so a clash is reported even when the first row is bad.
@@ -273,6 +277,64 @@ public static class NetworkReader
         };
     }
 
+    /// <summary>Parses and balance-checks every distinct equation text of a file on all cores, ahead of the row loop.</summary>
+    /// <remarks>
+    /// Parsing equations (exact rational coefficients) is most of the reading time of a large file, and each text
+    /// parses the same way on any thread. What must stay in row order is the catalog's bookkeeping (which spelling
+    /// of a species came first): the row loop replays each pre-parsed equation's species texts through the catalog
+    /// in order, and uses the pre-parsed equation only when every species resolves to the very instance used in it;
+    /// otherwise it parses the text again in order. The result is the same as parsing row by row.
+    /// </remarks>
+    private static void PreparseEquations(CsvTable table, ColumnMap map, SpeciesCatalog catalog, EquationCache equations)
+    {
+        var texts = new List<string>();
+        var seen = new HashSet<string>(StringComparer.Ordinal);
+        foreach (CsvRow row in table.Rows)
+        {
+            // S rows name one species, not an equation; they are resolved in the row loop.
+            if (ThermoProperties.TryParse(row.FieldOrEmpty(map.Property), out ThermoProperty property) && property == ThermoProperty.AbsoluteEntropy)
+            {
+                continue;
+            }
+
+            string text = row.FieldOrEmpty(map.Equation);
+            if (text.Length > 0 && !equations.ByText.ContainsKey(text) && seen.Add(text))
+            {
+                texts.Add(text);
+            }
+        }
+
+        if (texts.Count < PreparseMinimum || Environment.ProcessorCount < 2)
+        {
+            return;
+        }
+
+        var results = new PreparsedEquation[texts.Count];
+        Parallel.For(0, texts.Count, i =>
+        {
+            var speciesTexts = new List<string>();
+            ParseResult<ChemicalEquation> result = EquationParser.Parse(texts[i], species =>
+            {
+                speciesTexts.Add(species);
+                return catalog.ResolveWithoutRecording(species);
+            });
+            IReadOnlyList<string> imbalances = result.TryGetValue(out ChemicalEquation? value) ? value.FindImbalances() : [];
+            results[i] = new PreparsedEquation(result, imbalances, speciesTexts.ToArray());
+        });
+
+        for (int i = 0; i < texts.Count; i++)
+        {
+            equations.Preparsed[texts[i]] = results[i];
+        }
+    }
+
+    /// <summary>Parses one equation in row order with the catalog (the fallback of <see cref="PreparseEquations"/>).</summary>
+    private static (ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances) ParseSequentially(string text, SpeciesCatalog catalog)
+    {
+        ParseResult<ChemicalEquation> result = EquationParser.Parse(text, catalog.Resolve);
+        return (result, result.TryGetValue(out ChemicalEquation? value) ? value.FindImbalances() : []);
+    }
+
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static ChemicalEquation? ReadEquation(CsvRow row, int column, SpeciesCatalog catalog, EquationCache equations, ThermoProperty? property, List<Diagnostic> diagnostics, out int signatureId)
     {
@@ -308,9 +370,8 @@ public static class NetworkReader
         // Repeated determinations repeat the equation text word for word; parse and balance-check each text once.
         if (!equations.ByText.TryGetValue(text, out ParsedEquation? known))
         {
-            ParseResult<ChemicalEquation> result = EquationParser.Parse(text, catalog.Resolve);
-            IReadOnlyList<string> found = result.TryGetValue(out ChemicalEquation? value) ? value.FindImbalances() : [];
-            known = new ParsedEquation(result, found, value is not null && found.Count == 0 ? equations.SignatureIdOf(value) : -1);
+            (ParseResult<ChemicalEquation> result, IReadOnlyList<string> found) = equations.TakePreparsed(text, catalog) ?? ParseSequentially(text, catalog);
+            known = new ParsedEquation(result, found, result.TryGetValue(out ChemicalEquation? value) && found.Count == 0 ? equations.SignatureIdOf(value) : -1);
             equations.ByText[text] = known;
         }
 
@@ -533,12 +594,38 @@ public static class NetworkReader
     /// <param name="SignatureId">The id of the reaction up to scale (see <see cref="EquationCache.SignatureIdOf"/>), -1 when unusable.</param>
     private sealed record ParsedEquation(ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances, int SignatureId);
 
+    /// <summary>An equation parsed ahead of the row loop, with the species texts it resolved, in order.</summary>
+    private sealed record PreparsedEquation(ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances, string[] SpeciesTexts);
+
     /// <summary>Equation texts already read, and a small id per reaction signature so that repeats are found by integer.</summary>
     private sealed class EquationCache
     {
         private readonly Dictionary<string, int> _signatureIds = new(StringComparer.Ordinal);
 
         public Dictionary<string, ParsedEquation> ByText { get; } = new(StringComparer.Ordinal);
+
+        /// <summary>Equations parsed on all cores before the row loop (see <see cref="PreparseEquations"/>).</summary>
+        public Dictionary<string, PreparsedEquation> Preparsed { get; } = new(StringComparer.Ordinal);
+
+        /// <summary>The pre-parsed equation of a text, valid in row order, or null (parse it in order then).</summary>
+        /// <remarks>Replays the species texts through the catalog, as a parse in row order would, and checks every species is the instance the pre-parse used.</remarks>
+        public (ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances)? TakePreparsed(string text, SpeciesCatalog catalog)
+        {
+            if (!Preparsed.Remove(text, out PreparsedEquation? preparsed) || !preparsed.Result.TryGetValue(out _))
+            {
+                return null;
+            }
+
+            bool same = true;
+            foreach (string speciesText in preparsed.SpeciesTexts)
+            {
+                ParseResult<Species> inOrder = catalog.Resolve(speciesText);
+                ParseResult<Species> ahead = catalog.ResolveWithoutRecording(speciesText);
+                same &= inOrder.TryGetValue(out Species? a) && ahead.TryGetValue(out Species? b) && ReferenceEquals(a, b);
+            }
+
+            return same ? (preparsed.Result, preparsed.Imbalances) : null;
+        }
 
         /// <summary>Equal ids for equations that are the same reaction up to a positive scale factor.</summary>
         public int SignatureIdOf(ChemicalEquation equation)

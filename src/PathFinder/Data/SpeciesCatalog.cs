@@ -1,3 +1,4 @@
+using System.Collections.Concurrent;
 using PathFinder.Chemistry;
 using PathFinder.Diagnostics;
 
@@ -17,6 +18,10 @@ public sealed class SpeciesCatalog
     private readonly Dictionary<string, SortedSet<string>> _spellings = new(StringComparer.Ordinal);
     private readonly Dictionary<string, Species> _firstWritten = new(StringComparer.Ordinal);
     private readonly Dictionary<string, ParseResult<Species>> _resolved = new(StringComparer.Ordinal);
+
+    // One parse per species text, shared by the sequential resolver and by parallel pre-parsing, so both hand out
+    // the same instance for the same text (thread-safe; parsing is a pure function of the text).
+    private readonly ConcurrentDictionary<string, ParseResult<Species>> _parsed = new(StringComparer.Ordinal);
 
     /// <summary>The declared species, in file order.</summary>
     public IReadOnlyList<Species> Declared => _byKey.Values.ToArray();
@@ -107,6 +112,30 @@ public sealed class SpeciesCatalog
         return result;
     }
 
+    /// <summary>What <see cref="Resolve"/> gives for a text seen first, without recording it (safe from several threads).</summary>
+    /// <remarks>
+    /// Declared keys and isomers are fixed once the catalog is read, so they resolve the same way here. For any other
+    /// species the shared parse is returned; <see cref="Resolve"/> returns that same instance unless an earlier,
+    /// different spelling of the species came first, which a caller detects by reference comparison.
+    /// </remarks>
+    internal ParseResult<Species> ResolveWithoutRecording(string text)
+    {
+        if (_byKey.TryGetValue(text, out Species? declared))
+        {
+            return ParseResult<Species>.Ok(declared);
+        }
+
+        ParseResult<Species> parsed = ParseShared(text);
+        if (parsed.TryGetValue(out Species? species) && _declaredByIdentity.TryGetValue(species.Key, out List<Species>? isomers))
+        {
+            return isomers.Count == 1 ? ParseResult<Species>.Ok(isomers[0]) : ParseResult<Species>.Fail(0, "ambiguous-species", "", "");
+        }
+
+        return parsed;
+    }
+
+    private ParseResult<Species> ParseShared(string text) => _parsed.GetOrAdd(text, static key => SpeciesParser.Parse(key));
+
     private ParseResult<Species> ResolveOnce(string text)
     {
         if (_byKey.TryGetValue(text, out Species? declared))
@@ -114,7 +143,7 @@ public sealed class SpeciesCatalog
             return ParseResult<Species>.Ok(declared);
         }
 
-        ParseResult<Species> parsed = SpeciesParser.Parse(text);
+        ParseResult<Species> parsed = ParseShared(text);
         if (!parsed.TryGetValue(out Species? species))
         {
             return parsed;
