@@ -319,7 +319,7 @@ public static class NetworkReader
                 return catalog.ResolveWithoutRecording(species);
             });
             IReadOnlyList<string> imbalances = result.TryGetValue(out ChemicalEquation? value) ? value.FindImbalances() : [];
-            results[i] = new PreparsedEquation(result, imbalances, speciesTexts.ToArray());
+            results[i] = new PreparsedEquation(result, imbalances, value is not null && imbalances.Count == 0 ? ReactionSignature(value) : null, speciesTexts.ToArray());
         });
 
         for (int i = 0; i < texts.Count; i++)
@@ -329,10 +329,12 @@ public static class NetworkReader
     }
 
     /// <summary>Parses one equation in row order with the catalog (the fallback of <see cref="PreparseEquations"/>).</summary>
-    private static (ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances) ParseSequentially(string text, SpeciesCatalog catalog)
+    /// <returns>The parse, its imbalances, and the reaction signature when it parsed and balances (else null).</returns>
+    private static (ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances, string? Signature) ParseSequentially(string text, SpeciesCatalog catalog)
     {
         ParseResult<ChemicalEquation> result = EquationParser.Parse(text, catalog.Resolve);
-        return (result, result.TryGetValue(out ChemicalEquation? value) ? value.FindImbalances() : []);
+        IReadOnlyList<string> imbalances = result.TryGetValue(out ChemicalEquation? value) ? value.FindImbalances() : [];
+        return (result, imbalances, value is not null && imbalances.Count == 0 ? ReactionSignature(value) : null);
     }
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
@@ -370,8 +372,8 @@ public static class NetworkReader
         // Repeated determinations repeat the equation text word for word; parse and balance-check each text once.
         if (!equations.ByText.TryGetValue(text, out ParsedEquation? known))
         {
-            (ParseResult<ChemicalEquation> result, IReadOnlyList<string> found) = equations.TakePreparsed(text, catalog) ?? ParseSequentially(text, catalog);
-            known = new ParsedEquation(result, found, result.TryGetValue(out ChemicalEquation? value) && found.Count == 0 ? equations.SignatureIdOf(value) : -1);
+            (ParseResult<ChemicalEquation> result, IReadOnlyList<string> found, string? signature) = equations.TakePreparsed(text, catalog) ?? ParseSequentially(text, catalog);
+            known = new ParsedEquation(result, found, signature is null ? -1 : equations.SignatureIdOf(signature));
             equations.ByText[text] = known;
         }
 
@@ -591,11 +593,11 @@ public static class NetworkReader
     /// <summary>The parse of one equation text and its element/charge imbalances, kept for texts that recur.</summary>
     /// <param name="Result">The parse.</param>
     /// <param name="Imbalances">The element and charge imbalances, empty when balanced.</param>
-    /// <param name="SignatureId">The id of the reaction up to scale (see <see cref="EquationCache.SignatureIdOf"/>), -1 when unusable.</param>
+    /// <param name="SignatureId">The id of the reaction up to scale (see <see cref="EquationCache.SignatureIdOf(string)"/>), -1 when unusable.</param>
     private sealed record ParsedEquation(ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances, int SignatureId);
 
     /// <summary>An equation parsed ahead of the row loop, with the species texts it resolved, in order.</summary>
-    private sealed record PreparsedEquation(ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances, string[] SpeciesTexts);
+    private sealed record PreparsedEquation(ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances, string? Signature, string[] SpeciesTexts);
 
     /// <summary>Equation texts already read, and a small id per reaction signature so that repeats are found by integer.</summary>
     private sealed class EquationCache
@@ -609,7 +611,7 @@ public static class NetworkReader
 
         /// <summary>The pre-parsed equation of a text, valid in row order, or null (parse it in order then).</summary>
         /// <remarks>Replays the species texts through the catalog, as a parse in row order would, and checks every species is the instance the pre-parse used.</remarks>
-        public (ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances)? TakePreparsed(string text, SpeciesCatalog catalog)
+        public (ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances, string? Signature)? TakePreparsed(string text, SpeciesCatalog catalog)
         {
             if (!Preparsed.Remove(text, out PreparsedEquation? preparsed) || !preparsed.Result.TryGetValue(out _))
             {
@@ -624,13 +626,15 @@ public static class NetworkReader
                 same &= inOrder.TryGetValue(out Species? a) && ahead.TryGetValue(out Species? b) && ReferenceEquals(a, b);
             }
 
-            return same ? (preparsed.Result, preparsed.Imbalances) : null;
+            return same ? (preparsed.Result, preparsed.Imbalances, preparsed.Signature) : null;
         }
 
         /// <summary>Equal ids for equations that are the same reaction up to a positive scale factor.</summary>
-        public int SignatureIdOf(ChemicalEquation equation)
+        public int SignatureIdOf(ChemicalEquation equation) => SignatureIdOf(ReactionSignature(equation));
+
+        /// <summary>The id of a reaction signature (see <see cref="ReactionSignature"/>).</summary>
+        public int SignatureIdOf(string signature)
         {
-            string signature = ReactionSignature(equation);
             if (!_signatureIds.TryGetValue(signature, out int id))
             {
                 id = _signatureIds.Count;
