@@ -36,8 +36,7 @@ public static class ConsistencyCheck
         ArgumentNullException.ThrowIfNull(model);
         options ??= new ConsistencyOptions();
         // The solve first, with every core for its dense algebra; then the cycle search (which needs only the
-        // measurements) runs on another core beside the suspect procedure. The procedure keeps OpenBLAS to one
-        // thread meanwhile: more would only queue for the core the cycle search holds.
+        // measurements) runs on another core beside the suspect procedure, whose dense folds use one thread.
         LeastSquaresSolution asGiven = WeightedLeastSquares.Solve(model.ToObservationSystem());
         Task<CycleSearchResult> cycleSearch = Task.Run(() => FindCycles.In(model.ToRouteNetwork(), new CycleSearchOptions
         {
@@ -49,7 +48,7 @@ public static class ConsistencyCheck
 
         // Start from the solution just computed: the procedure copies its factorization instead of redoing it.
         OutlierResult? outliers = options.RunSuspectProcedure
-            ? OpenBlasKernel.SingleThreaded(() => OutlierProcedure.Run(asGiven, new OutlierOptions { Threshold = options.Threshold, InflationFactor = options.InflationFactor }))
+            ? OutlierProcedure.Run(asGiven, new OutlierOptions { Threshold = options.Threshold, InflationFactor = options.InflationFactor })
             : null;
         LeastSquaresSolution adjusted = outliers?.Solution ?? asGiven;
         IReadOnlyList<OutlierSuspect> outlierSuspects = outliers?.Suspects ?? [];

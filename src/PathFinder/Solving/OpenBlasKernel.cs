@@ -41,7 +41,11 @@ internal sealed class OpenBlasKernel : IDenseKernel
         double tol = tolerance;
         var work = new double[2 * n];
         var piv = new int[n];
-        Dpstrf(ref uplo, ref order, ref a.First, ref lda, piv, ref rank, ref tol, work, ref info, 1);
+        lock (s_gate)
+        {
+            UseThreads(FactorizationThreads);
+            Dpstrf(ref uplo, ref order, ref a.First, ref lda, piv, ref rank, ref tol, work, ref info, 1);
+        }
 
         if (info < 0)
         {
@@ -68,7 +72,11 @@ internal sealed class OpenBlasKernel : IDenseKernel
         int order = n;
         int lda = n;
         int info = 0;
-        Dpotrf(ref uplo, ref order, ref a.First, ref lda, ref info, 1);
+        lock (s_gate)
+        {
+            UseThreads(FactorizationThreads);
+            Dpotrf(ref uplo, ref order, ref a.First, ref lda, ref info, 1);
+        }
         if (info < 0)
         {
             throw new InvalidOperationException($"dpotrf_ rejected argument {-info}.");
@@ -103,7 +111,11 @@ internal sealed class OpenBlasKernel : IDenseKernel
         int order = rank;
         int lda = n;
         int info = 0;
-        Dpotri(ref uplo, ref order, ref a.First, ref lda, ref info, 1);
+        lock (s_gate)
+        {
+            UseThreads(FactorizationThreads);
+            Dpotri(ref uplo, ref order, ref a.First, ref lda, ref info, 1);
+        }
 
         if (info != 0)
         {
@@ -145,7 +157,12 @@ internal sealed class OpenBlasKernel : IDenseKernel
             byte uplo = (byte)'U';
             byte trans = (byte)'N';
             double alpha = allNegative ? 1.0 : -1.0;
-            Dsyrk(ref uplo, ref trans, ref order, ref inner, ref alpha, ref scaled.First, ref ld, ref beta, ref g.First, ref ld, 1, 1);
+            lock (s_gate)
+            {
+                UseThreads(1);
+                Dsyrk(ref uplo, ref trans, ref order, ref inner, ref alpha, ref scaled.First, ref ld, ref beta, ref g.First, ref ld, 1, 1);
+            }
+
             return;
         }
 
@@ -159,31 +176,35 @@ internal sealed class OpenBlasKernel : IDenseKernel
         int columns = n;
         double minusOne = -1.0;
         using var alignedB = new AlignedCopy(vectors, n * rank);
-        Dgemm(ref transA, ref transB, ref order, ref columns, ref inner, ref minusOne, ref scaled.First, ref ld, ref alignedB.First, ref ld, ref beta, ref g.First, ref ld, 1, 1);
+        lock (s_gate)
+        {
+            UseThreads(1);
+            Dgemm(ref transA, ref transB, ref order, ref columns, ref inner, ref minusOne, ref scaled.First, ref ld, ref alignedB.First, ref ld, ref beta, ref g.First, ref ld, 1, 1);
+        }
     }
 
-    /// <summary>Runs <paramref name="work"/> with OpenBLAS limited to one thread, then restores the previous count.</summary>
-    /// <remarks>
-    /// Between calls OpenBLAS's worker threads spin for a while before they sleep. In a loop that alternates short
-    /// BLAS calls with managed work (the suspect procedure) they keep the other core busy for nothing, slowing the
-    /// managed work and anything running beside it (the cycle search); one thread is faster there.
-    /// </remarks>
-    public static T SingleThreaded<T>(Func<T> work)
-    {
-        if (!IsAvailable || !s_hasThreadControl)
-        {
-            return work();
-        }
+    /// <summary>Threads for the one-off factorization and inversion: every core.</summary>
+    private static int FactorizationThreads => Environment.ProcessorCount;
 
-        int previous = GetThreadCount();
-        SetThreadCount(1);
-        try
+    /// <summary>Sets OpenBLAS's thread count for the next call (the caller holds <see cref="s_gate"/>).</summary>
+    /// <remarks>
+    /// <para>
+    /// Each operation always runs with the same number of threads, so results repeat to the last bit: OpenBLAS splits
+    /// the work by thread count and rounds differently with one thread than with two. The count is global to the
+    /// library, hence the gate: concurrent solves (the explorer runs analyses in the background) take turns.
+    /// </para>
+    /// <para>
+    /// Factorizations use every core. The low-rank folds of the suspect procedure use one: they are short and
+    /// alternate with managed work, and between calls OpenBLAS's worker threads spin for a while, which slowed the
+    /// managed work and the cycle search running beside it (measured; see the benchmark baseline).
+    /// </para>
+    /// </remarks>
+    private static void UseThreads(int count)
+    {
+        if (s_hasThreadControl && s_threads != count)
         {
-            return work();
-        }
-        finally
-        {
-            SetThreadCount(previous);
+            SetThreadCount(count);
+            s_threads = count;
         }
     }
 
@@ -213,6 +234,12 @@ internal sealed class OpenBlasKernel : IDenseKernel
 
     private static bool s_hasThreadControl;
 
+    /// <summary>Serializes calls into OpenBLAS with their thread count (see <see cref="UseThreads"/>).</summary>
+    private static readonly Lock s_gate = new();
+
+    /// <summary>The thread count last set, or 0 before the first call.</summary>
+    private static int s_threads;
+
     [ThreadStatic]
     private static AlignedBuffer? t_scratch;
 
@@ -226,8 +253,9 @@ internal sealed class OpenBlasKernel : IDenseKernel
         }
 
         s_hasCoreName = NativeLibrary.TryGetExport(handle, "openblas_get_corename", out _);
-        s_hasThreadControl = NativeLibrary.TryGetExport(handle, "openblas_get_num_threads", out _)
-            && NativeLibrary.TryGetExport(handle, "openblas_set_num_threads", out _);
+        // A thread count the user set for OpenBLAS is left alone (then it is the same for every call anyway).
+        s_hasThreadControl = NativeLibrary.TryGetExport(handle, "openblas_set_num_threads", out _)
+            && string.IsNullOrEmpty(Environment.GetEnvironmentVariable("OPENBLAS_NUM_THREADS"));
 
         return NativeLibrary.TryGetExport(handle, "dpstrf_", out _) && NativeLibrary.TryGetExport(handle, "dpotri_", out _)
             && NativeLibrary.TryGetExport(handle, "dpotrf_", out _)
@@ -237,9 +265,6 @@ internal sealed class OpenBlasKernel : IDenseKernel
 
     [DllImport(LibraryName, EntryPoint = "openblas_get_corename", ExactSpelling = true)]
     private static extern IntPtr GetCoreName();
-
-    [DllImport(LibraryName, EntryPoint = "openblas_get_num_threads", ExactSpelling = true)]
-    private static extern int GetThreadCount();
 
     [DllImport(LibraryName, EntryPoint = "openblas_set_num_threads", ExactSpelling = true)]
     private static extern void SetThreadCount(int count);

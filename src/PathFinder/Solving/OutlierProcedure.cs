@@ -99,10 +99,7 @@ public static class OutlierProcedure
         ArgumentOutOfRangeException.ThrowIfLessThan(options.LowRankBlockSize, 1);
     }
 
-    private static OutlierResult Run(ObservationSystem system, SolverEngine engine, OutlierOptions options) =>
-        engine.Backend == LinearAlgebraBackend.Native ? OpenBlasKernel.SingleThreaded(() => Adjust(system, engine, options)) : Adjust(system, engine, options);
-
-    private static OutlierResult Adjust(ObservationSystem system, SolverEngine engine, OutlierOptions options)
+    private static OutlierResult Run(ObservationSystem system, SolverEngine engine, OutlierOptions options)
     {
         var fit = new IncrementalFit(engine, options.LowRankBlockSize);
         int checkable = 0;

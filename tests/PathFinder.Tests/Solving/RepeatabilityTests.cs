@@ -27,4 +27,44 @@ public sealed class RepeatabilityTests
             }
         }
     }
+
+    [Fact]
+    public async Task Solve_GivesBitForBitTheSameNumbers_WhileASuspectProcedureRunsBeside()
+    {
+        // Given the demo model, and a suspect procedure running on another thread (its folds use one BLAS thread,
+        // the solve's factorization all of them; OpenBLAS's thread count is global, so changing it while the other
+        // thread is inside a call once changed a result by 65 units in the last place: calls must take turns)
+        PropertyModel model = PropertyModel.Build(NetworkReader.Read(RepoPaths.Demo("combustion-lab")).Network, PropertyFamily.Enthalpy);
+        ObservationSystem system = model.ToObservationSystem();
+        double[] first = WeightedLeastSquares.Solve(system).Values.ToArray();
+        ObservationSystem busy = TestSystems.RandomFullRank(7, unknowns: 60, extraRows: 600);
+        using var stop = new CancellationTokenSource();
+        Task beside = Task.Run(() =>
+        {
+            while (!stop.IsCancellationRequested)
+            {
+                OutlierProcedure.Run(busy, new OutlierOptions { LowRankBlockSize = 4 });
+            }
+        });
+
+        // When it is solved again and again meanwhile
+        try
+        {
+            for (int run = 0; run < 30; run++)
+            {
+                double[] again = WeightedLeastSquares.Solve(system).Values.ToArray();
+
+                // Then every value is identical to the last bit
+                for (int i = 0; i < first.Length; i++)
+                {
+                    Assert.Equal(BitConverter.DoubleToInt64Bits(first[i]), BitConverter.DoubleToInt64Bits(again[i]));
+                }
+            }
+        }
+        finally
+        {
+            await stop.CancelAsync();
+            await beside;
+        }
+    }
 }
