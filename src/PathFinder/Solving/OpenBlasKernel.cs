@@ -68,15 +68,7 @@ internal sealed class OpenBlasKernel : IDenseKernel
             return true;
         }
 
-        byte uplo = (byte)'U';
-        int order = n;
-        int lda = n;
-        int info = 0;
-        lock (s_gate)
-        {
-            UseThreads(FactorizationThreads);
-            Dpotrf(ref uplo, ref order, ref a.First, ref lda, ref info, 1);
-        }
+        int info = CallUpper(Dpotrf, a, n, n);
         if (info < 0)
         {
             throw new InvalidOperationException($"dpotrf_ rejected argument {-info}.");
@@ -107,16 +99,7 @@ internal sealed class OpenBlasKernel : IDenseKernel
             return;
         }
 
-        byte uplo = (byte)'U';
-        int order = rank;
-        int lda = n;
-        int info = 0;
-        lock (s_gate)
-        {
-            UseThreads(FactorizationThreads);
-            Dpotri(ref uplo, ref order, ref a.First, ref lda, ref info, 1);
-        }
-
+        int info = CallUpper(Dpotri, a, rank, n);
         if (info != 0)
         {
             throw new InvalidOperationException($"dpotri_ failed with info = {info}.");
@@ -181,6 +164,21 @@ internal sealed class OpenBlasKernel : IDenseKernel
             UseThreads(1);
             Dgemm(ref transA, ref transB, ref order, ref columns, ref inner, ref minusOne, ref scaled.First, ref ld, ref alignedB.First, ref ld, ref beta, ref g.First, ref ld, 1, 1);
         }
+    }
+
+    /// <summary>Calls a LAPACK routine on the upper triangle of the leading order×order block, with the factorization threads.</summary>
+    /// <returns>LAPACK's info.</returns>
+    private static int CallUpper(UpperTriangleRoutine routine, AlignedBuffer a, int order, int leadingDimension)
+    {
+        byte uplo = (byte)'U';
+        int info = 0;
+        lock (s_gate)
+        {
+            UseThreads(FactorizationThreads);
+            routine(ref uplo, ref order, ref a.First, ref leadingDimension, ref info, 1);
+        }
+
+        return info;
     }
 
     /// <summary>Threads for the one-off factorization and inversion: every core.</summary>
@@ -282,6 +280,9 @@ internal sealed class OpenBlasKernel : IDenseKernel
     private static extern void Dsyrk(
         ref byte uplo, ref byte trans, ref int n, ref int k, ref double alpha, ref double a, ref int lda, ref double beta, ref double c, ref int ldc,
         nuint uploLength, nuint transLength);
+
+    /// <summary>The shape shared by dpotrf_ and dpotri_.</summary>
+    private delegate void UpperTriangleRoutine(ref byte uplo, ref int n, ref double a, ref int lda, ref int info, nuint uploLength);
 
     [DllImport(LibraryName, EntryPoint = "dpotrf_", ExactSpelling = true)]
     private static extern void Dpotrf(ref byte uplo, ref int n, ref double a, ref int lda, ref int info, nuint uploLength);
