@@ -187,9 +187,11 @@ internal sealed class OpenBlasKernel : IDenseKernel
     /// <summary>Sets OpenBLAS's thread count for the next call (the caller holds <see cref="s_gate"/>).</summary>
     /// <remarks>
     /// <para>
-    /// Each operation always runs with the same number of threads, so results repeat to the last bit: OpenBLAS splits
-    /// the work by thread count and rounds differently with one thread than with two. The count is global to the
-    /// library, hence the gate: concurrent solves (the explorer runs analyses in the background) take turns.
+    /// Each operation always runs with the same number of threads, so results repeat to the last bit: how OpenBLAS
+    /// splits a computation (and so rounds it) may depend on the thread count. The count is global to the library,
+    /// and changing it while another thread was inside a call once changed that call's result in the last digits
+    /// (a repeatability test caught it), hence the gate: concurrent solves (the explorer analyses in the background)
+    /// take turns.
     /// </para>
     /// <para>
     /// Factorizations use every core. The low-rank folds of the suspect procedure use one: they are short and
