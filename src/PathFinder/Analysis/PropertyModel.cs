@@ -122,7 +122,9 @@ public sealed class PropertyModel
             }
         }
 
-        var vectors = prepared.Select(item => ToVector(item.Equation, IsFixed, index)).ToArray();
+        // Each vector depends on its equation alone (the index and the fixed flags are complete and only read now).
+        var vectors = new SparseVector[prepared.Count];
+        ForEachIndex(vectors.Length, i => vectors[i] = ToVector(prepared[i].Equation, family, fixedByInstance, index));
         return new PropertyModel(family, reference, unknowns, prepared, vectors, warnings);
     }
 
@@ -183,11 +185,11 @@ public sealed class PropertyModel
     public ObservationSystem ToObservationSystem(IReadOnlyList<double>? uncertaintyOverride = null)
     {
         var observations = new Observation[Measurements.Count];
-        for (int i = 0; i < observations.Length; i++)
+        ForEachIndex(observations.Length, i =>
         {
             double uncertainty = uncertaintyOverride?[i] ?? Measurements[i].Uncertainty;
             observations[i] = new Observation(RowOf(Vectors[i]), Measurements[i].Value, uncertainty);
-        }
+        });
 
         return new ObservationSystem(Unknowns.Count, observations);
     }
@@ -196,18 +198,39 @@ public sealed class PropertyModel
     /// <remarks>Built on first use and then shared (the model and the route network are both immutable), so a second search to another target starts at once.</remarks>
     public RouteNetwork ToRouteNetwork() => _routeNetwork.Value;
 
-    private static SparseVector ToVector(ChemicalEquation equation, Func<Species, bool> isFixed, Dictionary<Species, int> index)
+    private static SparseVector ToVector(ChemicalEquation equation, PropertyFamily family, Dictionary<Species, bool> fixedByInstance, Dictionary<Species, int> index)
     {
         var entries = new List<KeyValuePair<int, Fraction>>(equation.Terms.Count);
         foreach (EquationTerm term in equation.Terms)
         {
-            if (!isFixed(term.Species))
+            if (index.TryGetValue(term.Species, out int position))
             {
-                entries.Add(new KeyValuePair<int, Fraction>(index[term.Species], term.Coefficient));
+                entries.Add(new KeyValuePair<int, Fraction>(position, term.Coefficient));
+            }
+            else if (!(fixedByInstance.TryGetValue(term.Species, out bool isFixed) ? isFixed : family.IsFixed(term.Species)))
+            {
+                throw new InvalidOperationException($"{term.Species.Name} is neither an unknown nor fixed by convention.");
             }
         }
 
         return SparseVector.Create(entries);
+    }
+
+    /// <summary>Runs <paramref name="body"/> for 0..count−1, on several cores when there are enough items to pay for it.</summary>
+    /// <remarks>Used where each item is computed alone into its own slot, so the result does not depend on the order.</remarks>
+    private static void ForEachIndex(int count, Action<int> body)
+    {
+        const int ParallelFrom = 4096;
+        if (count >= ParallelFrom && Environment.ProcessorCount > 1)
+        {
+            Parallel.For(0, count, body);
+            return;
+        }
+
+        for (int i = 0; i < count; i++)
+        {
+            body(i);
+        }
     }
 
     private static PreparedMeasurement Prepare(Measurement measurement, double reference, IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities, List<Diagnostic> warnings)
