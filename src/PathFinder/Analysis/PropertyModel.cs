@@ -7,6 +7,7 @@ using PathFinder.Quantities;
 using PathFinder.Routes;
 using PathFinder.Solving;
 using PathFinder.Thermodynamics;
+using PathFinder.Threading;
 
 namespace PathFinder.Analysis;
 
@@ -124,7 +125,7 @@ public sealed class PropertyModel
 
         // Each vector depends on its equation alone (the index and the fixed flags are complete and only read now).
         var vectors = new SparseVector[prepared.Count];
-        ForEachIndex(vectors.Length, i => vectors[i] = ToVector(prepared[i].Equation, family, fixedByInstance, index));
+        IndexedWork.For(vectors.Length, i => vectors[i] = ToVector(prepared[i].Equation, family, fixedByInstance, index));
         return new PropertyModel(family, reference, unknowns, prepared, vectors, warnings);
     }
 
@@ -185,7 +186,7 @@ public sealed class PropertyModel
     public ObservationSystem ToObservationSystem(IReadOnlyList<double>? uncertaintyOverride = null)
     {
         var observations = new Observation[Measurements.Count];
-        ForEachIndex(observations.Length, i =>
+        IndexedWork.For(observations.Length, i =>
         {
             double uncertainty = uncertaintyOverride?[i] ?? Measurements[i].Uncertainty;
             observations[i] = new Observation(RowOf(Vectors[i]), Measurements[i].Value, uncertainty);
@@ -214,23 +215,6 @@ public sealed class PropertyModel
         }
 
         return SparseVector.Create(entries);
-    }
-
-    /// <summary>Runs <paramref name="body"/> for 0..count−1, on several cores when there are enough items to pay for it.</summary>
-    /// <remarks>Used where each item is computed alone into its own slot, so the result does not depend on the order.</remarks>
-    private static void ForEachIndex(int count, Action<int> body)
-    {
-        const int ParallelFrom = 4096;
-        if (count >= ParallelFrom && Environment.ProcessorCount > 1)
-        {
-            Parallel.For(0, count, body);
-            return;
-        }
-
-        for (int i = 0; i < count; i++)
-        {
-            body(i);
-        }
     }
 
     private static PreparedMeasurement Prepare(Measurement measurement, double reference, IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities, List<Diagnostic> warnings)

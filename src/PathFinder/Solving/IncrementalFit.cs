@@ -1,5 +1,6 @@
 using System.Runtime.CompilerServices;
 using System.Runtime.Intrinsics;
+using PathFinder.Threading;
 
 namespace PathFinder.Solving;
 
@@ -503,8 +504,9 @@ internal sealed class IncrementalFit
     private void Refresh(int c)
     {
         ComponentSlots slots = _components[c];
-        for (int s = slots.Start; s < slots.End; s++)
+        IndexedWork.For(slots.End - slots.Start, offset =>
         {
+            int s = slots.Start + offset;
             int i = _observationAt[s];
             (double fitted, double quadratic) = _engine.FitObservation(i);
             double u = _engine.Uncertainty(i);
@@ -512,7 +514,7 @@ internal sealed class IncrementalFit
             _quadratic[s] = quadratic;
             _variance[s] = u * u;
             _t[s] = 0.0;
-        }
+        });
 
         // With t = 0 the "change" is none: the same scan finds the current worst.
         int bestSlot = -1;

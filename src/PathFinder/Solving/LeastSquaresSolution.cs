@@ -1,3 +1,5 @@
+using PathFinder.Threading;
+
 namespace PathFinder.Solving;
 
 /// <summary>The weighted least-squares solution of an <see cref="ObservationSystem"/> with everything derived from it.</summary>
@@ -37,11 +39,11 @@ public sealed class LeastSquaresSolution
         UndeterminedUnknowns = Enumerable.Range(0, n).Where(j => !_determined[j]).ToArray();
         Rank = engine.Components.Sum(c => c.Rank);
         _diagnostics = new ObservationDiagnostics[engine.ObservationCount];
+        IndexedWork.For(_diagnostics.Length, i => _diagnostics[i] = Diagnose(i));
         double chiSquared = 0.0;
-        for (int i = 0; i < _diagnostics.Length; i++)
+        foreach (ObservationDiagnostics diagnostics in _diagnostics)
         {
-            _diagnostics[i] = Diagnose(i);
-            double r = _diagnostics[i].Residual / _diagnostics[i].Uncertainty;
+            double r = diagnostics.Residual / diagnostics.Uncertainty;
             chiSquared += r * r;
         }
 
