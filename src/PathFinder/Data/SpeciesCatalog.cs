@@ -128,7 +128,9 @@ public sealed class SpeciesCatalog
         ParseResult<Species> parsed = ParseShared(text);
         if (parsed.TryGetValue(out Species? species) && _declaredByIdentity.TryGetValue(species.Key, out List<Species>? isomers))
         {
-            return isomers.Count == 1 ? ParseResult<Species>.Ok(isomers[0]) : ParseResult<Species>.Fail(0, "ambiguous-species", "", "");
+            return isomers.Count == 1
+                ? ParseResult<Species>.Ok(isomers[0])
+                : ParseResult<Species>.Fail(0, "ambiguous-species", $"'{text}' matches several declared isomers: {string.Join(", ", isomers.Select(isomer => isomer.Label))}", "write the species key from species.csv instead of the formula");
         }
 
         return parsed;
@@ -138,25 +140,11 @@ public sealed class SpeciesCatalog
 
     private ParseResult<Species> ResolveOnce(string text)
     {
-        if (_byKey.TryGetValue(text, out Species? declared))
+        // Keys, isomers and failures resolve as they are; a plain formula is also recorded as a spelling.
+        ParseResult<Species> resolved = ResolveWithoutRecording(text);
+        if (!resolved.TryGetValue(out Species? species) || _byKey.ContainsKey(text) || _declaredByIdentity.ContainsKey(species.Key))
         {
-            return ParseResult<Species>.Ok(declared);
-        }
-
-        ParseResult<Species> parsed = ParseShared(text);
-        if (!parsed.TryGetValue(out Species? species))
-        {
-            return parsed;
-        }
-
-        if (_declaredByIdentity.TryGetValue(species.Key, out List<Species>? isomers))
-        {
-            if (isomers.Count == 1)
-            {
-                return ParseResult<Species>.Ok(isomers[0]);
-            }
-
-            return ParseResult<Species>.Fail(0, "ambiguous-species", $"'{text}' matches several declared isomers: {string.Join(", ", isomers.Select(isomer => isomer.Label))}", "write the species key from species.csv instead of the formula");
+            return resolved;
         }
 
         if (!_firstWritten.TryGetValue(species.Key, out Species? first))

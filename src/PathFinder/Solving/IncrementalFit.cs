@@ -303,6 +303,16 @@ internal sealed class IncrementalFit
         // i's own z uses its new uncertainty: put it in place for the pass, then restore.
         double oldVariance = _variance[own];
         _variance[own] = uncertainty * uncertainty;
+        (int bestSlot, double bestSquare) = BestOfGroups(slots, shift, factor);
+        _variance[own] = oldVariance;
+        slots.PendingBestSlot = bestSlot;
+        slots.PendingBestSquare = bestSquare;
+        return (bestSlot, bestSquare);
+    }
+
+    /// <summary>The worst slot of a component after the change (lowest observation index on ties) and its z², or (−1, −1).</summary>
+    private (int Slot, double Square) BestOfGroups(ComponentSlots slots, double shift, double factor)
+    {
         int bestSlot = -1;
         double bestSquare = -1.0;
         foreach (WidthGroup group in slots.Groups)
@@ -315,9 +325,6 @@ internal sealed class IncrementalFit
             }
         }
 
-        _variance[own] = oldVariance;
-        slots.PendingBestSlot = bestSlot;
-        slots.PendingBestSquare = bestSquare;
         return (bestSlot, bestSquare);
     }
 
@@ -517,20 +524,7 @@ internal sealed class IncrementalFit
         });
 
         // With t = 0 the "change" is none: the same scan finds the current worst.
-        int bestSlot = -1;
-        double bestSquare = -1.0;
-        foreach (WidthGroup group in slots.Groups)
-        {
-            (int slot, double square) = BestInGroup(group, 0.0, 0.0);
-            if (slot >= 0 && (square > bestSquare || (square == bestSquare && _observationAt[slot] < _observationAt[bestSlot])))
-            {
-                bestSlot = slot;
-                bestSquare = square;
-            }
-        }
-
-        slots.BestSlot = bestSlot;
-        slots.BestSquare = bestSquare;
+        (slots.BestSlot, slots.BestSquare) = BestOfGroups(slots, 0.0, 0.0);
     }
 
     private LowRank LowRankOf(int c) => _lowRank[c] ??= new LowRank(_engine.Components[c].Size, Math.Max(1, Math.Min(_blockSize, _engine.Components[c].Size)));

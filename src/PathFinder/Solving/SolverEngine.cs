@@ -121,9 +121,6 @@ internal sealed class SolverEngine
 
     public double Uncertainty(int i) => _uncertainties[i];
 
-    /// <summary>The current uncertainties of all observations.</summary>
-    internal ReadOnlySpan<double> Uncertainties => _uncertainties;
-
     /// <summary>The system with the current (possibly adjusted) uncertainties.</summary>
     public ObservationSystem CurrentSystem() =>
         new(UnknownCount, _rows.Select((o, i) => o.WithUncertainty(_uncertainties[i])));
