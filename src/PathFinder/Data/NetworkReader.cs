@@ -313,13 +313,12 @@ public static class NetworkReader
         Parallel.For(0, texts.Count, i =>
         {
             var speciesTexts = new List<string>();
-            ParseResult<ChemicalEquation> result = EquationParser.Parse(texts[i], species =>
+            (ParseResult<ChemicalEquation> result, IReadOnlyList<string> imbalances, string? signature) = ParseChecked(texts[i], species =>
             {
                 speciesTexts.Add(species);
                 return catalog.ResolveWithoutRecording(species);
             });
-            IReadOnlyList<string> imbalances = result.TryGetValue(out ChemicalEquation? value) ? value.FindImbalances() : [];
-            results[i] = new PreparsedEquation(result, imbalances, value is not null && imbalances.Count == 0 ? ReactionSignature(value) : null, speciesTexts.ToArray());
+            results[i] = new PreparsedEquation(result, imbalances, signature, speciesTexts.ToArray());
         });
 
         for (int i = 0; i < texts.Count; i++)
@@ -328,11 +327,11 @@ public static class NetworkReader
         }
     }
 
-    /// <summary>Parses one equation in row order with the catalog (the fallback of <see cref="PreparseEquations"/>).</summary>
+    /// <summary>Parses one equation and checks its balance.</summary>
     /// <returns>The parse, its imbalances, and the reaction signature when it parsed and balances (else null).</returns>
-    private static (ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances, string? Signature) ParseSequentially(string text, SpeciesCatalog catalog)
+    private static (ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances, string? Signature) ParseChecked(string text, Func<string, ParseResult<Species>> resolveSpecies)
     {
-        ParseResult<ChemicalEquation> result = EquationParser.Parse(text, catalog.Resolve);
+        ParseResult<ChemicalEquation> result = EquationParser.Parse(text, resolveSpecies);
         IReadOnlyList<string> imbalances = result.TryGetValue(out ChemicalEquation? value) ? value.FindImbalances() : [];
         return (result, imbalances, value is not null && imbalances.Count == 0 ? ReactionSignature(value) : null);
     }
@@ -372,7 +371,7 @@ public static class NetworkReader
         // Repeated determinations repeat the equation text word for word; parse and balance-check each text once.
         if (!equations.ByText.TryGetValue(text, out ParsedEquation? known))
         {
-            (ParseResult<ChemicalEquation> result, IReadOnlyList<string> found, string? signature) = equations.TakePreparsed(text, catalog) ?? ParseSequentially(text, catalog);
+            (ParseResult<ChemicalEquation> result, IReadOnlyList<string> found, string? signature) = equations.TakePreparsed(text, catalog) ?? ParseChecked(text, catalog.Resolve);
             known = new ParsedEquation(result, found, signature is null ? -1 : equations.SignatureIdOf(signature));
             equations.ByText[text] = known;
         }

@@ -47,29 +47,23 @@ internal static class OpenBlasCoreType
     }
 
     /// <summary>Sets OPENBLAS_CORETYPE for this CPU unless the user already set it; call before the library loads.</summary>
-    /// <returns>The value in force afterwards (the user's, ours, or null).</returns>
-    public static string? Apply()
+    /// <remarks>Without a suitable family, or where setenv(3) is missing, OpenBLAS keeps its own choice (the kernel name it reports shows which).</remarks>
+    public static void Apply()
     {
-        string? user = Environment.GetEnvironmentVariable(VariableName);
-        if (!string.IsNullOrEmpty(user))
-        {
-            return user;
-        }
-
         string? chosen = ForThisCpu();
-        if (chosen is null)
+        if (chosen is null || !string.IsNullOrEmpty(Environment.GetEnvironmentVariable(VariableName)))
         {
-            return null;
+            return;
         }
 
         try
         {
             // overwrite = 0: a value already in the C environment (set by a parent process) wins.
-            return SetEnvironment(VariableName, chosen, 0) == 0 ? chosen : null;
+            _ = SetEnvironment(VariableName, chosen, 0);
         }
         catch (Exception exception) when (exception is DllNotFoundException or EntryPointNotFoundException)
         {
-            return null;
+            // Not fatal: only the speed of the dense steps is at stake.
         }
     }
 
