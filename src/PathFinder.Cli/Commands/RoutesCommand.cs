@@ -53,9 +53,9 @@ public sealed class RoutesCommand
         OptionParsing.Positive(maxSteps, "--max-steps");
         OptionParsing.Positive(top, "--top");
         OptionParsing.Positive(timeBudget, "--time-budget");
-        if (temperature is { } t && (!double.IsFinite(t) || t <= 0 || t > 10000))
+        if (temperature is { } t)
         {
-            throw new UserInputException("--temperature must be in kelvin, above 0 and at most 10000");
+            OptionParsing.Temperature(t);
         }
 
         AnalysisSession? session = AnalysisSession.Open(path, context, skipInvalid, out int exitCode);
