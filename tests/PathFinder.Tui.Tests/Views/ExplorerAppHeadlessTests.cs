@@ -23,10 +23,8 @@ public sealed class ExplorerAppHeadlessTests : IDisposable
     {
         // Given the explorer on the demo network at 100×30
         var screens = new Dictionary<string, string>();
-        using (IApplication app = Application.Create(new VirtualTimeProvider()))
+        using (IApplication app = Headless(100, 30))
         {
-            app.Init(DriverRegistry.Names.ANSI);
-            app.Driver!.SetScreenSize(100, 30);
             ExplorerViewModel vm = ExplorerApp.CreateViewModel(app, _demo.Folder, SolvedAnalysis.Analyzer);
             using ExplorerWindow window = ExplorerApp.CreateWindow(app, vm);
 
@@ -87,10 +85,8 @@ public sealed class ExplorerAppHeadlessTests : IDisposable
         Assert.Contains("C03,exclude,slipped digit,", File.ReadAllText(_demo.CurationPath), StringComparison.Ordinal);
 
         // And when the network is opened again, C03 is still shown excluded
-        using (IApplication app = Application.Create(new VirtualTimeProvider()))
+        using (IApplication app = Headless(100, 30))
         {
-            app.Init(DriverRegistry.Names.ANSI);
-            app.Driver!.SetScreenSize(100, 30);
             ExplorerViewModel vm = ExplorerApp.CreateViewModel(app, _demo.Folder, SolvedAnalysis.Analyzer);
             using ExplorerWindow window = ExplorerApp.CreateWindow(app, vm);
             SessionToken? token = app.Begin(window);
@@ -113,9 +109,7 @@ public sealed class ExplorerAppHeadlessTests : IDisposable
     public void Every_screen_key_shows_its_screen_and_F1_lists_the_keys_at_80_by_24()
     {
         var screens = new Dictionary<string, string>();
-        using IApplication app = Application.Create(new VirtualTimeProvider());
-        app.Init(DriverRegistry.Names.ANSI);
-        app.Driver!.SetScreenSize(80, 24);
+        using IApplication app = Headless(80, 24);
         ExplorerViewModel vm = ExplorerApp.CreateViewModel(app, _demo.Folder, SolvedAnalysis.Analyzer);
         using ExplorerWindow window = ExplorerApp.CreateWindow(app, vm);
         var steps = new Queue<(string Name, Func<bool> Ready, Action Act)>();
@@ -150,10 +144,8 @@ public sealed class ExplorerAppHeadlessTests : IDisposable
         // Given the explorer on the demo network at 80×24, on the consistency screen
         var screens = new Dictionary<string, string>();
         string? before = null;
-        using (IApplication app = Application.Create(new VirtualTimeProvider()))
+        using (IApplication app = Headless(80, 24))
         {
-            app.Init(DriverRegistry.Names.ANSI);
-            app.Driver!.SetScreenSize(80, 24);
             ExplorerViewModel vm = ExplorerApp.CreateViewModel(app, _demo.Folder, SolvedAnalysis.Analyzer);
             using ExplorerWindow window = ExplorerApp.CreateWindow(app, vm);
             var steps = new Queue<(string Name, Func<bool> Ready, Action Act)>();
@@ -222,10 +214,8 @@ public sealed class ExplorerAppHeadlessTests : IDisposable
         Assert.DoesNotContain(flaggedBefore, screens["after"], StringComparison.Ordinal);
 
         // And when the network is opened again, the saved exclusion holds and the analysis has no suspect
-        using (IApplication app = Application.Create(new VirtualTimeProvider()))
+        using (IApplication app = Headless(80, 24))
         {
-            app.Init(DriverRegistry.Names.ANSI);
-            app.Driver!.SetScreenSize(80, 24);
             ExplorerViewModel vm = ExplorerApp.CreateViewModel(app, _demo.Folder, SolvedAnalysis.Analyzer);
             using ExplorerWindow window = ExplorerApp.CreateWindow(app, vm);
             var steps = new Queue<(string Name, Func<bool> Ready, Action Act)>();
@@ -273,6 +263,15 @@ public sealed class ExplorerAppHeadlessTests : IDisposable
         }
 
         Assert.True(steps.Count == 0, steps.Count == 0 ? "" : $"step '{steps.Peek().Name}' never became ready; screen:\n{ScreenText(app)}");
+    }
+
+    /// <summary>A headless application with the ANSI driver and a screen of the given size, on virtual time.</summary>
+    private static IApplication Headless(int width, int height)
+    {
+        IApplication app = Application.Create(new VirtualTimeProvider());
+        app.Init(DriverRegistry.Names.ANSI);
+        app.Driver!.SetScreenSize(width, height);
+        return app;
     }
 
     private static string ScreenText(IApplication app) => app.Driver!.ToString() ?? "";
