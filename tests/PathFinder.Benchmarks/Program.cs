@@ -18,7 +18,7 @@ internal static class Program
         "  check [species] [measurements] [seed]       'solve --no-adjust' and 'check' through the CLI code, CSV included (default 2000 30000 1)\n" +
         "  diagrams [nodes] [seed]                     diagram layout and SVG (default 300 1)\n" +
         "  explorer [species] [measurements] [seed]    terminal explorer analysis (default 2000 30000 1)\n" +
-        "  consistency [species] [measurements] [seed] solver + suspect procedure on the model alone (default 2000 30000 1)\n" +
+        "  consistency [species] [measurements] [seed] [runs]  solver + suspect procedure on the model alone (default 2000 30000 1 2)\n" +
         "  solver [unknowns] [observations] [seed]     least-squares solver alone (default 2000 20000 1)\n" +
         "  engine [species] [measurements] [seed]      route engine alone on a family-shaped random network (default 2000 30000 1)";
 
@@ -47,7 +47,7 @@ internal static class Program
                 ExplorerBenchmark.Run(output, Arg(1, 2000), Arg(2, 30000), Arg(3, 1));
                 return 0;
             case "consistency":
-                ConsistencyBenchmark.Run(output, Arg(1, 2000), Arg(2, 30000), Arg(3, 1));
+                ConsistencyBenchmark.Run(output, Arg(1, 2000), Arg(2, 30000), Arg(3, 1), Arg(4, 2));
                 return 0;
             case "solver":
                 SolverBenchmark.Run(output, Arg(1, 2000), Arg(2, 20000), Arg(3, 1));

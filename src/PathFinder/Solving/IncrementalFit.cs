@@ -1,4 +1,6 @@
+using System.Diagnostics;
 using System.Runtime.CompilerServices;
+using System.Runtime.InteropServices;
 using System.Runtime.Intrinsics;
 using PathFinder.Threading;
 
@@ -47,6 +49,15 @@ internal sealed class IncrementalFit
     private readonly ComponentSlots[] _components;
     private readonly LowRank?[] _lowRank;
     private double[] _gBuffer = [];
+
+    // The last committed change, whose ŷ/q update over its component is still to be applied: the next pass over that
+    // component applies it on the way (one pass per step instead of three), and single rows read it on the fly.
+    private int _pendingComponent = -1;
+    private double _pendingShift;
+    private double _pendingFactor;
+
+    // True when _t holds tₗ of the current probe (its first evaluation computed them).
+    private bool _probeProducts;
 
     public IncrementalFit(SolverEngine engine, int blockSize)
     {
@@ -105,7 +116,7 @@ internal sealed class IncrementalFit
     public double NormalizedResidual(int i)
     {
         int s = _slotOf[i];
-        return ZOf(_values[s] - _fitted[s], _variance[s], _quadratic[s]);
+        return ZOf(_values[s] - Fitted(s), _variance[s], Quadratic(s));
     }
 
     /// <summary>The current uncertainty of observation i.</summary>
@@ -117,7 +128,7 @@ internal sealed class IncrementalFit
     /// <summary>The checkable observation with the largest |z| (lowest index on ties), or −1.</summary>
     public int Worst() => WorstExcept(-1, -1);
 
-    /// <summary>Prepares g = G·aᵢ and tₗ = aₗᵀg for every observation l of i's component.</summary>
+    /// <summary>Prepares g = G·aᵢ; the first evaluation of the probe computes tₗ = aₗᵀg for every observation l of i's component.</summary>
     /// <remarks>The probe shares buffers with the next one: it is valid until the next call.</remarks>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public Probe Prepare(int i)
@@ -164,7 +175,12 @@ internal sealed class IncrementalFit
         }
 
         ManagedKernel.AxpyMany(lowRank.Alphas.AsSpan(0, used), lowRank.Offsets.AsSpan(0, used), lowRank.Vectors, g);
-        MultiplyRows(_components[c], g, _t);
+        if (_pendingComponent != c)
+        {
+            ApplyPending();
+        }
+
+        _probeProducts = false;
         return new Probe(i, c, _gBuffer);
     }
 
@@ -202,7 +218,12 @@ internal sealed class IncrementalFit
         ManagedKernel.Axpy(shift, probe.G.AsSpan(0, component.Size), component.Solution);
         _engine.StoreUncertainty(i, uncertainty);
         _variance[_slotOf[i]] = uncertainty * uncertainty;
-        ApplyChange(slots, shift, factor);
+
+        // ŷ and q of the other rows follow in the next pass over the component (or ApplyPending).
+        _pendingComponent = c;
+        _pendingShift = shift;
+        _pendingFactor = factor;
+        _probeProducts = false;
         slots.BestSlot = slots.PendingBestSlot;
         slots.BestSquare = slots.PendingBestSquare;
 
@@ -231,6 +252,7 @@ internal sealed class IncrementalFit
     /// <summary>Folds every pending low-rank list into the dense matrices, so the engine holds the current G.</summary>
     public void FoldAll()
     {
+        ApplyPending();
         for (int c = 0; c < _lowRank.Length; c++)
         {
             if (_lowRank[c] is { Count: > 0 })
@@ -297,13 +319,16 @@ internal sealed class IncrementalFit
         int i = probe.Observation;
         int own = _slotOf[i];
         double factor = ChangeFactor(i, uncertainty);
-        double shift = factor * (_values[own] - _fitted[own]);
+        double shift = factor * (_values[own] - Fitted(own));
         ComponentSlots slots = _components[probe.Component];
 
         // i's own z uses its new uncertainty: put it in place for the pass, then restore.
         double oldVariance = _variance[own];
         _variance[own] = uncertainty * uncertainty;
-        (int bestSlot, double bestSquare) = BestOfGroups(slots, shift, factor);
+        (int bestSlot, double bestSquare) = _probeProducts
+            ? BestOfGroups(slots, shift, factor)
+            : SweepOfGroups(slots, probe.G.AsSpan(0, _engine.Components[probe.Component].Size), shift, factor);
+        _probeProducts = true;
         _variance[own] = oldVariance;
         slots.PendingBestSlot = bestSlot;
         slots.PendingBestSquare = bestSquare;
@@ -421,46 +446,173 @@ internal sealed class IncrementalFit
         }
     }
 
-    /// <summary>tₗ = aₗᵀg for every row of a component, stored at the row's slot.</summary>
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private void MultiplyRows(ComponentSlots slots, ReadOnlySpan<double> g, Span<double> t)
+    /// <summary>One pass over a component: applies the pending change, computes tₗ = aₗᵀg, and finds the worst slot after the probed change.</summary>
+    /// <returns>As <see cref="BestOfGroups"/>: the worst slot (lowest observation index on ties) and its z², or (−1, −1).</returns>
+    private (int Slot, double Square) SweepOfGroups(ComponentSlots slots, ReadOnlySpan<double> g, double shift, double factor)
     {
+        bool pending = _pendingComponent >= 0;
+        Debug.Assert(!pending || _components[_pendingComponent] == slots, "A pending change of another component is applied when the probe is prepared.");
+        int bestSlot = -1;
+        double bestSquare = -1.0;
         foreach (WidthGroup group in slots.Groups)
         {
-            int width = group.Width;
-            int count = group.Count;
-            ReadOnlySpan<int> local = group.Local;
-            ReadOnlySpan<double> coefficients = group.Coefficients;
-            int r = 0;
-            if (Vector256.IsHardwareAccelerated)
+            (int slot, double square) = pending
+                ? SweepGroup<ApplyPendingChange>(group, g, shift, factor)
+                : SweepGroup<NoPendingChange>(group, g, shift, factor);
+            if (slot >= 0 && (square > bestSquare || (square == bestSquare && _observationAt[slot] < _observationAt[bestSlot])))
             {
-                for (; r + Lanes <= count; r += Lanes)
-                {
-                    Vector256<double> sum = Vector256<double>.Zero;
-                    for (int e = 0; e < width; e++)
-                    {
-                        int o = (e * count) + r;
-                        Vector256<double> gathered = Vector256.Create(g[local[o]], g[local[o + 1]], g[local[o + 2]], g[local[o + 3]]);
-                        sum += Vector256.Create(coefficients.Slice(o, Lanes)) * gathered;
-                    }
-
-                    sum.CopyTo(t.Slice(group.Start + r, Lanes));
-                }
+                bestSlot = slot;
+                bestSquare = square;
             }
+        }
 
-            for (; r < count; r++)
+        _pendingComponent = -1;
+        return (bestSlot, bestSquare);
+    }
+
+    /// <summary>The pass of <see cref="SweepOfGroups"/> over one group of rows.</summary>
+    /// <remarks>
+    /// Per row: ŷ ← ŷ + shift₀·t₀ and q ← q − factor₀·t₀² for the pending change (its t₀ still in place), then the new
+    /// t = aᵀg (summed in the row's own order) and z² = (v − ŷ − shift·t)²/(u² − q + factor·t²) as in
+    /// <see cref="BestInGroup"/>. The arithmetic is the same, operation for operation, as applying the change and then
+    /// evaluating in separate passes, so results do not depend on which is done. Indices come from the fit's own
+    /// layout (always within g), so the loads skip bounds checks.
+    /// </remarks>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private (int Slot, double Square) SweepGroup<TPending>(WidthGroup group, ReadOnlySpan<double> g, double shift, double factor)
+        where TPending : struct
+    {
+        bool applyPending = typeof(TPending) == typeof(ApplyPendingChange);
+        int width = group.Width;
+        int count = group.Count;
+        int start = group.Start;
+        ref int local = ref MemoryMarshal.GetArrayDataReference(group.Local);
+        ref double coefficients = ref MemoryMarshal.GetArrayDataReference(group.Coefficients);
+        ref double gFirst = ref MemoryMarshal.GetReference(g);
+        ref double t = ref Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(_t), start);
+        ref double values = ref Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(_values), start);
+        ref double fitted = ref Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(_fitted), start);
+        ref double quadratic = ref Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(_quadratic), start);
+        ref double variance = ref Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(_variance), start);
+        double pendingShift = _pendingShift;
+        double pendingFactor = _pendingFactor;
+        double best = -1.0;
+        int bestRow = -1;
+        int r = 0;
+        if (Vector256.IsHardwareAccelerated && count >= Lanes)
+        {
+            var vPendingShift = Vector256.Create(pendingShift);
+            var vPendingFactor = Vector256.Create(pendingFactor);
+            var vShift = Vector256.Create(shift);
+            var vFactor = Vector256.Create(factor);
+            var vCheckability = Vector256.Create(_checkability);
+            var vBest = Vector256.Create(-1.0);
+            var vBestRow = Vector256.Create(-1.0);
+            var vRow = Vector256.Create(0.0, 1.0, 2.0, 3.0);
+            var vStep = Vector256.Create((double)Lanes);
+            var minusOne = Vector256.Create(-1.0);
+            for (; r + Lanes <= count; r += Lanes)
             {
-                double sum = 0.0;
+                nuint at = (nuint)r;
+                Vector256<double> rowFitted = Vector256.LoadUnsafe(ref fitted, at);
+                Vector256<double> rowQuadratic = Vector256.LoadUnsafe(ref quadratic, at);
+                if (applyPending)
+                {
+                    Vector256<double> old = Vector256.LoadUnsafe(ref t, at);
+                    rowFitted += vPendingShift * old;
+                    rowQuadratic -= vPendingFactor * old * old;
+                    rowFitted.StoreUnsafe(ref fitted, at);
+                    rowQuadratic.StoreUnsafe(ref quadratic, at);
+                }
+
+                Vector256<double> sum = Vector256<double>.Zero;
                 for (int e = 0; e < width; e++)
                 {
                     int o = (e * count) + r;
-                    sum += coefficients[o] * g[local[o]];
+                    ref int index = ref Unsafe.Add(ref local, o);
+                    Vector256<double> gathered = Vector256.Create(
+                        Unsafe.Add(ref gFirst, index),
+                        Unsafe.Add(ref gFirst, Unsafe.Add(ref index, 1)),
+                        Unsafe.Add(ref gFirst, Unsafe.Add(ref index, 2)),
+                        Unsafe.Add(ref gFirst, Unsafe.Add(ref index, 3)));
+                    sum += Vector256.LoadUnsafe(ref coefficients, (nuint)o) * gathered;
                 }
 
-                t[group.Start + r] = sum;
+                sum.StoreUnsafe(ref t, at);
+                Vector256<double> rowVariance = Vector256.LoadUnsafe(ref variance, at);
+                Vector256<double> residual = Vector256.LoadUnsafe(ref values, at) - (rowFitted + (vShift * sum));
+                Vector256<double> rest = rowVariance - (rowQuadratic - (vFactor * sum * sum));
+                Vector256<double> checkable = Vector256.GreaterThan(rest, vCheckability * rowVariance);
+                Vector256<double> square = Vector256.ConditionalSelect(checkable, residual * residual / rest, minusOne);
+                Vector256<double> better = Vector256.GreaterThan(square, vBest);
+                vBest = Vector256.ConditionalSelect(better, square, vBest);
+                vBestRow = Vector256.ConditionalSelect(better, vRow, vBestRow);
+                vRow += vStep;
+            }
+
+            for (int lane = 0; lane < Lanes; lane++)
+            {
+                double value = vBest[lane];
+                int row = (int)vBestRow[lane];
+                if (row >= 0 && (value > best || (value == best && row < bestRow)))
+                {
+                    best = value;
+                    bestRow = row;
+                }
             }
         }
+
+        for (; r < count; r++)
+        {
+            if (applyPending)
+            {
+                double old = Unsafe.Add(ref t, r);
+                Unsafe.Add(ref fitted, r) += pendingShift * old;
+                Unsafe.Add(ref quadratic, r) -= pendingFactor * old * old;
+            }
+
+            double sum = 0.0;
+            for (int e = 0; e < width; e++)
+            {
+                int o = (e * count) + r;
+                sum += Unsafe.Add(ref coefficients, o) * Unsafe.Add(ref gFirst, Unsafe.Add(ref local, o));
+            }
+
+            Unsafe.Add(ref t, r) = sum;
+            double rowVariance = Unsafe.Add(ref variance, r);
+            double residual = Unsafe.Add(ref values, r) - (Unsafe.Add(ref fitted, r) + (shift * sum));
+            double rest = rowVariance - (Unsafe.Add(ref quadratic, r) - (factor * sum * sum));
+            if (rest > _checkability * rowVariance)
+            {
+                double square = residual * residual / rest;
+                if (square > best || bestRow < 0)
+                {
+                    best = square;
+                    bestRow = r;
+                }
+            }
+        }
+
+        return bestRow < 0 ? (-1, best) : (start + bestRow, best);
     }
+
+    /// <summary>Applies the pending change (if any) to its component's ŷ and q.</summary>
+    private void ApplyPending()
+    {
+        if (_pendingComponent >= 0)
+        {
+            ApplyChange(_components[_pendingComponent], _pendingShift, _pendingFactor);
+            _pendingComponent = -1;
+        }
+    }
+
+    /// <summary>ŷ of slot s, including the pending change.</summary>
+    private double Fitted(int s) => IsPending(s) ? _fitted[s] + (_pendingShift * _t[s]) : _fitted[s];
+
+    /// <summary>q = aᵀGa of slot s, including the pending change.</summary>
+    private double Quadratic(int s) => IsPending(s) ? _quadratic[s] - (_pendingFactor * _t[s] * _t[s]) : _quadratic[s];
+
+    private bool IsPending(int s) => _pendingComponent >= 0 && s >= _components[_pendingComponent].Start && s < _components[_pendingComponent].End;
 
     /// <summary>The worst observation over all components, taking <paramref name="candidate"/> (with z² <paramref name="candidateSquare"/>) for component <paramref name="replaced"/>.</summary>
     private int WorstExcept(int replaced, int candidate, double candidateSquare = -1.0)
@@ -498,7 +650,7 @@ internal sealed class IncrementalFit
     {
         double old = _engine.Uncertainty(i);
         double deltaWeight = (1.0 / (uncertainty * uncertainty)) - (1.0 / (old * old));
-        return deltaWeight / (1.0 + (deltaWeight * _quadratic[_slotOf[i]]));
+        return deltaWeight / (1.0 + (deltaWeight * Quadratic(_slotOf[i])));
     }
 
     private double ZOf(double residual, double variance, double quadratic)
@@ -510,6 +662,11 @@ internal sealed class IncrementalFit
     /// <summary>Recomputes ŷ and q of component c's observations from the dense G and x̂, and its worst observation.</summary>
     private void Refresh(int c)
     {
+        if (_pendingComponent == c)
+        {
+            _pendingComponent = -1;
+        }
+
         ComponentSlots slots = _components[c];
         IndexedWork.For(slots.End - slots.Start, offset =>
         {
@@ -528,6 +685,12 @@ internal sealed class IncrementalFit
     }
 
     private LowRank LowRankOf(int c) => _lowRank[c] ??= new LowRank(_engine.Components[c].Size, Math.Max(1, Math.Min(_blockSize, _engine.Components[c].Size)));
+
+    /// <summary>Marks <see cref="SweepGroup{TPending}"/> to apply a pending change (specialized at compile time).</summary>
+    private struct ApplyPendingChange;
+
+    /// <summary>Marks <see cref="SweepGroup{TPending}"/> to find no pending change.</summary>
+    private struct NoPendingChange;
 
     /// <summary>g = G·aᵢ (first k entries) for a prepared observation; tₗ for its component is held by the fit.</summary>
     internal sealed record Probe(int Observation, int Component, double[] G);
