@@ -1,6 +1,8 @@
 using PathFinder.Analysis;
 using PathFinder.Chemistry;
 using PathFinder.Quantities;
+using PathFinder.Routes;
+using System.Text.Json;
 
 namespace PathFinder.Cli.Output;
 
@@ -61,6 +63,7 @@ public static class CheckOutput
                 independentCycles = family.IndependentCycles,
                 cyclesFound = family.CyclesFound,
                 cyclesComplete = family.CyclesComplete,
+                cycleSearchCut = CutNames(family.CycleCut),
                 chiSquared = family.AsGiven.ChiSquared,
                 degreesOfFreedom = family.AsGiven.DegreesOfFreedom,
                 birgeRatio = Json.Number(family.AsGiven.BirgeRatio),
@@ -113,12 +116,12 @@ public static class CheckOutput
             output.WriteLine($"== {family.Family} ({symbol}, {unit}): {family.Model.Measurements.Count} measurements, {family.Model.Unknowns.Count} species, rank {family.AsGiven.Rank}, {family.IndependentCycles} independent cycles");
             output.WriteLine($"   χ² = {Text.Number(family.AsGiven.ChiSquared)} with {family.AsGiven.DegreesOfFreedom} degrees of freedom; Birge ratio {Text.Number(family.AsGiven.BirgeRatio)} as given, {Text.Number(family.Adjusted.BirgeRatio)} after adjustment");
             int flagged = family.FlaggedCycles.Count();
-            string completeness = family.CyclesComplete
-                ? $"all minimal cycles up to {report.Options.MaxCycleSize} measurements"
-                : family.CycleCut == PathFinder.Routes.SearchCut.StepBound
-                    ? $"all up to {report.Options.MaxCycleSize} measurements; longer ones may exist (--max-cycle)"
-                    : $"search cut short by {family.CycleCut}";
-            output.WriteLine($"   Cycles: {family.CyclesFound} minimal ({completeness}); {flagged} fail to close (|z| > {Text.Number(report.Options.Threshold, 1)})");
+            string completeness = Completeness(family.CycleCut, report.Options);
+            // Only the worst MaxCycles are kept, so on a large network the count of failures is of those.
+            string failures = family.Cycles.Count < family.CyclesFound
+                ? $"{flagged} of the {family.Cycles.Count} worst kept fail to close"
+                : $"{flagged} fail to close";
+            output.WriteLine($"   Cycles: {family.CyclesFound} minimal ({completeness}); {failures} (|z| > {Text.Number(report.Options.Threshold, 1)})");
             foreach (CycleCheck cycle in family.Cycles.Take(showCycles))
             {
                 string members = string.Join(" ", cycle.Members.Select(member => member.Factor == Fractions.Fraction.One ? member.Measurement.Id : $"{member.Measurement.Id}({RationalText.Format(member.Factor)})"));
@@ -177,4 +180,40 @@ public static class CheckOutput
             : "Result: INCONSISTENT (exit code 1). Review the suspects before using derived values.");
         output.WriteLine(Text.Caution);
     }
+
+    /// <summary>How complete the cycle list is, in words.</summary>
+    private static string Completeness(SearchCut cut, ConsistencyOptions options)
+    {
+        if (cut == SearchCut.None)
+        {
+            return $"all minimal cycles up to {options.MaxCycleSize} measurements";
+        }
+
+        if (cut == SearchCut.StepBound)
+        {
+            return $"all up to {options.MaxCycleSize} measurements; longer ones may exist (--max-cycle)";
+        }
+
+        var reasons = new List<string>();
+        if (cut.HasFlag(SearchCut.WorkBudget))
+        {
+            reasons.Add($"a sample: the enumeration stopped after its {options.CycleWorkBudget:N0} search steps, at the same point on every run");
+        }
+
+        if (cut.HasFlag(SearchCut.TimeBudget))
+        {
+            reasons.Add($"a sample: the enumeration stopped after {options.CycleTimeBudget.TotalSeconds:0.#} s, so the list may differ between runs");
+        }
+
+        if (cut.HasFlag(SearchCut.Cancelled))
+        {
+            reasons.Add("cancelled");
+        }
+
+        return string.Join("; ", reasons);
+    }
+
+    /// <summary>The reasons that cut a search, as JSON names ("stepBound", "workBudget", ...).</summary>
+    private static string[] CutNames(SearchCut cut) =>
+        [.. Enum.GetValues<SearchCut>().Where(flag => flag != SearchCut.None && cut.HasFlag(flag)).Select(flag => JsonNamingPolicy.CamelCase.ConvertName(flag.ToString()))];
 }

@@ -35,14 +35,16 @@ public static class ConsistencyCheck
     {
         ArgumentNullException.ThrowIfNull(model);
         options ??= new ConsistencyOptions();
-        // The solve first, with every core for its dense algebra; then the cycle search (which needs only the
-        // measurements) runs on another core beside the suspect procedure, whose dense folds use one thread.
+        // The solve first, with every core for its dense algebra (a search beside it would slow its threaded
+        // factorization by more than it gains); then the cycle search, which needs only the measurements, runs
+        // on another core beside the suspect procedure, whose dense folds use one thread.
         LeastSquaresSolution asGiven = WeightedLeastSquares.Solve(model.ToObservationSystem());
         Task<CycleSearchResult> cycleSearch = Task.Run(() => FindCycles.In(model.ToRouteNetwork(), new CycleSearchOptions
         {
             MaxSize = options.MaxCycleSize,
             MaxCycles = options.MaxCycles,
             TimeBudget = options.CycleTimeBudget,
+            WorkBudget = options.CycleWorkBudget,
             CancellationToken = options.CancellationToken,
         }));
 

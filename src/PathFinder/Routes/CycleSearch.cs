@@ -24,12 +24,16 @@ public sealed class CycleSearch
         _options = options ?? new CycleSearchOptions();
         ArgumentOutOfRangeException.ThrowIfLessThan(_options.MaxSize, 1);
         ArgumentOutOfRangeException.ThrowIfLessThan(_options.MaxCycles, 0);
+        if (_options.WorkBudget is < 0)
+        {
+            throw new ArgumentOutOfRangeException(nameof(options), _options.WorkBudget, "The work budget must not be negative.");
+        }
     }
 
     /// <summary>Runs the search.</summary>
     public CycleSearchResult Run()
     {
-        var budget = new SearchBudget(_options.TimeBudget, _options.CancellationToken);
+        var budget = new SearchBudget(_options.TimeBudget, _options.CancellationToken, _options.WorkBudget);
         var kept = new PriorityQueue<Candidate, (double, int, long)>();
         long found = 0, order = 0;
 
@@ -112,6 +116,7 @@ public sealed class CycleSearch
             Cut = budget.Cut,
             IndependentCycleCount = _network.Count - rank,
             ExactnessCertified = certified,
+            SearchSteps = budget.Steps,
             Elapsed = budget.Clock.Elapsed,
         };
     }

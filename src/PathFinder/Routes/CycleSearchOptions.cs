@@ -12,6 +12,9 @@ public sealed record CycleSearchOptions
     /// <summary>Wall-clock budget; null means none (default).</summary>
     public TimeSpan? TimeBudget { get; init; }
 
+    /// <summary>Work budget in search steps; null means none (default). Unlike <see cref="TimeBudget"/> it cuts the search at the same point on every machine and every run.</summary>
+    public long? WorkBudget { get; init; }
+
     /// <summary>Token that stops the search early; the partial result is returned with <see cref="SearchCut.Cancelled"/>.</summary>
     public CancellationToken CancellationToken { get; init; }
 }

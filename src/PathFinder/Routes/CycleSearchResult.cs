@@ -21,6 +21,9 @@ public sealed record CycleSearchResult
     /// <summary>True when the Hadamard bound proves the modular pruning exact (no cycle lost to arithmetic modulo 2^61 − 1).</summary>
     public required bool ExactnessCertified { get; init; }
 
+    /// <summary>Search steps taken (see <see cref="CycleSearchOptions.WorkBudget"/>).</summary>
+    public long SearchSteps { get; init; }
+
     /// <summary>Wall-clock time of the search.</summary>
     public required TimeSpan Elapsed { get; init; }
 }

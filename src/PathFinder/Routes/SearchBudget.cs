@@ -2,21 +2,25 @@ using System.Diagnostics;
 
 namespace PathFinder.Routes;
 
-/// <summary>Tracks the time budget, cancellation and early stop shared by one search.</summary>
+/// <summary>Tracks the time budget, the work budget, cancellation and early stop shared by one search.</summary>
 internal sealed class SearchBudget
 {
     private readonly TimeSpan? _limit;
+    private readonly long? _stepLimit;
     private readonly CancellationToken _token;
-    private int _tick;
 
-    public SearchBudget(TimeSpan? limit, CancellationToken token)
+    public SearchBudget(TimeSpan? limit, CancellationToken token, long? stepLimit = null)
     {
         _limit = limit;
+        _stepLimit = stepLimit;
         _token = token;
         Clock = Stopwatch.StartNew();
     }
 
     public Stopwatch Clock { get; }
+
+    /// <summary>Search steps taken so far (calls of <see cref="ShouldStop"/>): the same for the same input on any machine.</summary>
+    public long Steps { get; private set; }
 
     public SearchCut Cut { get; private set; }
 
@@ -30,7 +34,7 @@ internal sealed class SearchBudget
         Stopped = true;
     }
 
-    /// <summary>Returns true when the search must stop; checks the clock only every 256 calls.</summary>
+    /// <summary>Counts one search step; returns true when the search must stop. Checks the clock only every 256 steps.</summary>
     public bool ShouldStop()
     {
         if (Stopped)
@@ -38,7 +42,13 @@ internal sealed class SearchBudget
             return true;
         }
 
-        if ((++_tick & 255) != 0)
+        if (++Steps > _stepLimit)
+        {
+            Stop(SearchCut.WorkBudget);
+            return true;
+        }
+
+        if ((Steps & 255) != 0)
         {
             return false;
         }

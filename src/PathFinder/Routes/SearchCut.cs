@@ -18,4 +18,7 @@ public enum SearchCut
 
     /// <summary>The search stopped after the requested number of results (<c>StopAfter</c>).</summary>
     StoppedEarly = 8,
+
+    /// <summary>The work budget (a number of search steps) ran out: unlike a time budget, the same input gives the same result on any machine.</summary>
+    WorkBudget = 16,
 }

@@ -1,5 +1,7 @@
 using PathFinder.Algebra;
+using PathFinder.Analysis;
 using PathFinder.Routes;
+using PathFinder.Synthetic;
 
 namespace PathFinder.Tests.Routes;
 
@@ -59,5 +61,49 @@ public class CycleSearchTests
         }
 
         Assert.True(cut > 10);
+    }
+
+    [Fact]
+    public void WorkBudget_CutsAtTheSamePointOnEveryRun_AndMoreWorkFindsMore()
+    {
+        // Given a network with far more minimal cycles than a small budget reaches
+        SyntheticNetwork synthetic = SyntheticNetworkGenerator.Generate(new SyntheticNetworkOptions { Seed = 3, SpeciesCount = 150, MeasurementCount = 1500 });
+        RouteNetwork network = PropertyModel.Build(synthetic.Network, PropertyFamily.Enthalpy).ToRouteNetwork();
+
+        // When searched twice with the same work budget, and once with a larger one
+        var options = new CycleSearchOptions { WorkBudget = 3_000 };
+        CycleSearchResult first = FindCycles.In(network, options);
+        CycleSearchResult second = FindCycles.In(network, options);
+        CycleSearchResult larger = FindCycles.In(network, options with { WorkBudget = 12_000 });
+
+        // Then the cut is the work budget, both runs keep exactly the same cycles, and the larger budget finds more
+        Assert.True(first.Cut.HasFlag(SearchCut.WorkBudget));
+        Assert.False(first.Complete);
+        Assert.Equal(3_001, first.SearchSteps);
+        Assert.Equal(first.CyclesFound, second.CyclesFound);
+        Assert.Equal(
+            first.Cycles.Select(c => RandomNetworks.Key(c.Measurements, c.Factors)),
+            second.Cycles.Select(c => RandomNetworks.Key(c.Measurements, c.Factors)));
+        Assert.True(larger.CyclesFound > first.CyclesFound, $"{larger.CyclesFound} vs {first.CyclesFound}");
+    }
+
+    [Fact]
+    public void WorkBudget_AboveTheWholeSearch_ChangesNothing()
+    {
+        for (int seed = 0; seed < 100; seed++)
+        {
+            (RouteNetwork network, _) = RandomNetworks.Create(seed);
+            CycleSearchResult unbounded = FindCycles.In(network, new CycleSearchOptions { MaxSize = 11, MaxCycles = int.MaxValue });
+            CycleSearchResult budgeted = FindCycles.In(network, new CycleSearchOptions { MaxSize = 11, MaxCycles = int.MaxValue, WorkBudget = unbounded.SearchSteps });
+            Assert.Equal(unbounded.Cut, budgeted.Cut);
+            Assert.Equal(unbounded.CyclesFound, budgeted.CyclesFound);
+        }
+    }
+
+    [Fact]
+    public void WorkBudget_Negative_IsRefused()
+    {
+        (RouteNetwork network, _) = RandomNetworks.Create(1);
+        Assert.Throws<ArgumentOutOfRangeException>(() => new CycleSearch(network, new CycleSearchOptions { WorkBudget = -1 }));
     }
 }
