@@ -5,26 +5,95 @@ using PathFinder.Thermodynamics;
 namespace PathFinder.Data;
 
 /// <summary>What reading a network produced: the usable measurements and every problem found.</summary>
-/// <param name="Network">The network of measurements that passed validation (rows with errors are left out).</param>
-/// <param name="Diagnostics">Errors and warnings, in file and line order.</param>
-/// <param name="Files">The measurement files read.</param>
-/// <param name="SpeciesFile">The species declaration file used, if any.</param>
-/// <param name="HeatCapacityFile">The heat-capacity file beside the network, if any.</param>
-/// <param name="HeatCapacities">Heat-capacity models by species, from <paramref name="HeatCapacityFile"/>.</param>
-public sealed record NetworkReadResult(
-    ReactionNetwork Network,
-    IReadOnlyList<Diagnostic> Diagnostics,
-    IReadOnlyList<string> Files,
-    string? SpeciesFile,
-    string? HeatCapacityFile,
-    IReadOnlyDictionary<Species, IHeatCapacity> HeatCapacities)
+/// <remarks>
+/// Network-wide warnings (repeated measurements, single-use species, merged spellings, missing heat capacities)
+/// are worked out the first time <see cref="Diagnostics"/> or <see cref="Warnings"/> is read: on a large network
+/// they are thousands of messages, and the analysis commands, which stop only on errors, never show them.
+/// </remarks>
+public sealed class NetworkReadResult
 {
+    private readonly IReadOnlyList<Diagnostic> _rowDiagnostics;
+    private readonly Lazy<IReadOnlyList<Diagnostic>> _diagnostics;
+
+    /// <summary>A result whose diagnostics are all known.</summary>
+    /// <param name="network">The network of measurements that passed validation (rows with errors are left out).</param>
+    /// <param name="diagnostics">Errors and warnings, in file and line order.</param>
+    /// <param name="files">The measurement files read.</param>
+    /// <param name="speciesFile">The species declaration file used, if any.</param>
+    /// <param name="heatCapacityFile">The heat-capacity file beside the network, if any.</param>
+    /// <param name="heatCapacities">Heat-capacity models by species, from <paramref name="heatCapacityFile"/>.</param>
+    public NetworkReadResult(
+        ReactionNetwork network,
+        IReadOnlyList<Diagnostic> diagnostics,
+        IReadOnlyList<string> files,
+        string? speciesFile,
+        string? heatCapacityFile,
+        IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities)
+        : this(network, diagnostics, () => [], files, speciesFile, heatCapacityFile, heatCapacities)
+    {
+    }
+
+    /// <summary>A result whose network-wide warnings are found on first use.</summary>
+    /// <param name="network">The network of measurements that passed validation.</param>
+    /// <param name="rowDiagnostics">Every error, and the warnings found while reading the files.</param>
+    /// <param name="networkWarnings">Finds the network-wide warnings (warnings only; called at most once).</param>
+    /// <param name="files">The measurement files read.</param>
+    /// <param name="speciesFile">The species declaration file used, if any.</param>
+    /// <param name="heatCapacityFile">The heat-capacity file beside the network, if any.</param>
+    /// <param name="heatCapacities">Heat-capacity models by species.</param>
+    internal NetworkReadResult(
+        ReactionNetwork network,
+        IReadOnlyList<Diagnostic> rowDiagnostics,
+        Func<IEnumerable<Diagnostic>> networkWarnings,
+        IReadOnlyList<string> files,
+        string? speciesFile,
+        string? heatCapacityFile,
+        IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities)
+    {
+        ArgumentNullException.ThrowIfNull(network);
+        ArgumentNullException.ThrowIfNull(rowDiagnostics);
+        ArgumentNullException.ThrowIfNull(networkWarnings);
+        Network = network;
+        Files = files;
+        SpeciesFile = speciesFile;
+        HeatCapacityFile = heatCapacityFile;
+        HeatCapacities = heatCapacities;
+        _rowDiagnostics = InFileOrder(rowDiagnostics);
+        _diagnostics = new Lazy<IReadOnlyList<Diagnostic>>(() => InFileOrder(rowDiagnostics.Concat(networkWarnings())));
+    }
+
+    /// <summary>The network of measurements that passed validation (rows with errors are left out).</summary>
+    public ReactionNetwork Network { get; }
+
+    /// <summary>Errors and warnings, in file and line order.</summary>
+    public IReadOnlyList<Diagnostic> Diagnostics => _diagnostics.Value;
+
+    /// <summary>The measurement files read.</summary>
+    public IReadOnlyList<string> Files { get; }
+
+    /// <summary>The species declaration file used, if any.</summary>
+    public string? SpeciesFile { get; }
+
+    /// <summary>The heat-capacity file beside the network, if any.</summary>
+    public string? HeatCapacityFile { get; }
+
+    /// <summary>Heat-capacity models by species, from <see cref="HeatCapacityFile"/>.</summary>
+    public IReadOnlyDictionary<Species, IHeatCapacity> HeatCapacities { get; }
+
     /// <summary>Whether any error was found.</summary>
-    public bool HasErrors => Diagnostics.Any(diagnostic => diagnostic.Severity == Severity.Error);
+    public bool HasErrors => _rowDiagnostics.Any(diagnostic => diagnostic.Severity == Severity.Error);
 
-    /// <summary>The errors.</summary>
-    public IEnumerable<Diagnostic> Errors => Diagnostics.Where(diagnostic => diagnostic.Severity == Severity.Error);
+    /// <summary>The errors, in file and line order.</summary>
+    public IEnumerable<Diagnostic> Errors => _rowDiagnostics.Where(diagnostic => diagnostic.Severity == Severity.Error);
 
-    /// <summary>The warnings.</summary>
+    /// <summary>The warnings, in file and line order.</summary>
     public IEnumerable<Diagnostic> Warnings => Diagnostics.Where(diagnostic => diagnostic.Severity == Severity.Warning);
+
+    // A stable sort: diagnostics of one place keep the order they were found in.
+    private static List<Diagnostic> InFileOrder(IEnumerable<Diagnostic> diagnostics) =>
+        diagnostics
+            .OrderBy(diagnostic => diagnostic.Location.File, StringComparer.Ordinal)
+            .ThenBy(diagnostic => diagnostic.Location.Line)
+            .ThenBy(diagnostic => diagnostic.Location.Column)
+            .ToList();
 }

@@ -67,13 +67,20 @@ public static class NetworkReader
             ReadFile(file, catalog, equations, measurements, signatureIds, firstById, diagnostics);
         }
 
-        AddNetworkWarnings(measurements, signatureIds, catalog, heatCapacities, diagnostics);
-        List<Diagnostic> ordered = diagnostics
-            .OrderBy(diagnostic => diagnostic.Location.File, StringComparer.Ordinal)
-            .ThenBy(diagnostic => diagnostic.Location.Line)
-            .ThenBy(diagnostic => diagnostic.Location.Column)
-            .ToList();
-        return new NetworkReadResult(new ReactionNetwork(name, measurements), ordered, files, speciesFile, heatCapacityFile, heatCapacities);
+        var network = new ReactionNetwork(name, measurements);
+        return new NetworkReadResult(
+            network,
+            diagnostics,
+            () =>
+            {
+                var warnings = new List<Diagnostic>();
+                AddNetworkWarnings(measurements, signatureIds, catalog, heatCapacities, warnings);
+                return warnings;
+            },
+            files,
+            speciesFile,
+            heatCapacityFile,
+            heatCapacities);
     }
 
     private static readonly IReadOnlyDictionary<Species, IHeatCapacity> NoHeatCapacities = new Dictionary<Species, IHeatCapacity>();
