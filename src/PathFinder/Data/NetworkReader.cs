@@ -61,10 +61,9 @@ public static class NetworkReader
         var measurements = new List<Measurement>();
         var firstById = new Dictionary<string, SourceLocation>(StringComparer.Ordinal);
         var equations = new EquationCache();
-        var signatureIds = new List<int>();
         foreach (string file in files)
         {
-            ReadFile(file, catalog, equations, measurements, signatureIds, firstById, diagnostics);
+            ReadFile(file, catalog, equations, measurements, firstById, diagnostics);
         }
 
         var network = new ReactionNetwork(name, measurements);
@@ -74,7 +73,7 @@ public static class NetworkReader
             () =>
             {
                 var warnings = new List<Diagnostic>();
-                AddNetworkWarnings(measurements, signatureIds, catalog, heatCapacities, warnings);
+                AddNetworkWarnings(measurements, catalog, heatCapacities, warnings);
                 return warnings;
             },
             files,
@@ -114,7 +113,7 @@ public static class NetworkReader
     }
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private static void ReadFile(string file, SpeciesCatalog catalog, EquationCache equations, List<Measurement> measurements, List<int> signatureIds, Dictionary<string, SourceLocation> firstById, List<Diagnostic> diagnostics)
+    private static void ReadFile(string file, SpeciesCatalog catalog, EquationCache equations, List<Measurement> measurements, Dictionary<string, SourceLocation> firstById, List<Diagnostic> diagnostics)
     {
         CsvTable? table = CsvTable.Read(file, file, diagnostics);
         if (table is null)
@@ -152,19 +151,17 @@ public static class NetworkReader
                 duplicate = true;
             }
 
-            Measurement? measurement = ReadRow(row, table, map, catalog, equations, defaultSource, diagnostics, out int signatureId);
+            Measurement? measurement = ReadRow(row, table, map, catalog, equations, defaultSource, diagnostics);
             if (measurement is not null && !duplicate)
             {
                 measurements.Add(measurement);
-                signatureIds.Add(signatureId);
             }
         }
     }
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private static Measurement? ReadRow(CsvRow row, CsvTable table, ColumnMap columns, SpeciesCatalog catalog, EquationCache equations, string defaultSource, List<Diagnostic> diagnostics, out int signatureId)
+    private static Measurement? ReadRow(CsvRow row, CsvTable table, ColumnMap columns, SpeciesCatalog catalog, EquationCache equations, string defaultSource, List<Diagnostic> diagnostics)
     {
-        signatureId = -1;
         int before = diagnostics.Count;
         if (row.Fields.Count > table.Header.Count)
         {
@@ -189,7 +186,7 @@ public static class NetworkReader
             diagnostics.Add(Diagnostic.Error("unknown-property", row.LocationOf(columns.Property, "property"), $"unknown property '{propertyText}'", $"use one of {string.Join(", ", ThermoProperties.Codes)}"));
         }
 
-        ChemicalEquation? equation = ReadEquation(row, columns.Equation, catalog, equations, propertyKnown ? property : null, diagnostics, out int equationSignature);
+        ChemicalEquation? equation = ReadEquation(row, columns.Equation, catalog, equations, propertyKnown ? property : null, diagnostics);
 
         EnergyUnit unit = propertyKnown ? property.CanonicalUnit() : EnergyUnit.KilojoulePerMole;
         string unitText = row.FieldOrEmpty(columns.Unit);
@@ -257,7 +254,6 @@ public static class NetworkReader
             return null;
         }
 
-        signatureId = equationSignature;
         Dictionary<string, string>? notes = null;
         for (int i = 0; i < table.Header.Count; i++)
         {
@@ -320,12 +316,12 @@ public static class NetworkReader
         Parallel.For(0, texts.Count, i =>
         {
             var speciesTexts = new List<string>();
-            (ParseResult<ChemicalEquation> result, IReadOnlyList<string> imbalances, string? signature) = ParseChecked(texts[i], species =>
+            (ParseResult<ChemicalEquation> result, IReadOnlyList<string> imbalances) = ParseChecked(texts[i], species =>
             {
                 speciesTexts.Add(species);
                 return catalog.ResolveWithoutRecording(species);
             });
-            results[i] = new PreparsedEquation(result, imbalances, signature, speciesTexts.ToArray());
+            results[i] = new PreparsedEquation(result, imbalances, speciesTexts.ToArray());
         });
 
         for (int i = 0; i < texts.Count; i++)
@@ -335,18 +331,16 @@ public static class NetworkReader
     }
 
     /// <summary>Parses one equation and checks its balance.</summary>
-    /// <returns>The parse, its imbalances, and the reaction signature when it parsed and balances (else null).</returns>
-    private static (ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances, string? Signature) ParseChecked(string text, Func<string, ParseResult<Species>> resolveSpecies)
+    /// <returns>The parse and its imbalances.</returns>
+    private static (ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances) ParseChecked(string text, Func<string, ParseResult<Species>> resolveSpecies)
     {
         ParseResult<ChemicalEquation> result = EquationParser.Parse(text, resolveSpecies);
-        IReadOnlyList<string> imbalances = result.TryGetValue(out ChemicalEquation? value) ? value.FindImbalances() : [];
-        return (result, imbalances, value is not null && imbalances.Count == 0 ? ReactionSignature(value) : null);
+        return (result, result.TryGetValue(out ChemicalEquation? value) ? value.FindImbalances() : []);
     }
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private static ChemicalEquation? ReadEquation(CsvRow row, int column, SpeciesCatalog catalog, EquationCache equations, ThermoProperty? property, List<Diagnostic> diagnostics, out int signatureId)
+    private static ChemicalEquation? ReadEquation(CsvRow row, int column, SpeciesCatalog catalog, EquationCache equations, ThermoProperty? property, List<Diagnostic> diagnostics)
     {
-        signatureId = -1;
         string raw = column < row.Fields.Count ? row.Fields[column] : "";
         int leading = raw.Length - raw.TrimStart().Length;
         string text = raw.Trim();
@@ -370,16 +364,14 @@ public static class NetworkReader
                 return null;
             }
 
-            ChemicalEquation single = ChemicalEquation.FromTerms([new EquationTerm(value, Fraction.One)]);
-            signatureId = equations.SignatureIdOf(single);
-            return single;
+            return ChemicalEquation.FromTerms([new EquationTerm(value, Fraction.One)]);
         }
 
         // Repeated determinations repeat the equation text word for word; parse and balance-check each text once.
         if (!equations.ByText.TryGetValue(text, out ParsedEquation? known))
         {
-            (ParseResult<ChemicalEquation> result, IReadOnlyList<string> found, string? signature) = equations.TakePreparsed(text, catalog) ?? ParseChecked(text, catalog.Resolve);
-            known = new ParsedEquation(result, found, signature is null ? -1 : equations.SignatureIdOf(signature));
+            (ParseResult<ChemicalEquation> result, IReadOnlyList<string> found) = equations.TakePreparsed(text, catalog) ?? ParseChecked(text, catalog.Resolve);
+            known = new ParsedEquation(result, found);
             equations.ByText[text] = known;
         }
 
@@ -397,7 +389,6 @@ public static class NetworkReader
             return null;
         }
 
-        signatureId = known.SignatureId;
         return parsed;
     }
 
@@ -435,14 +426,23 @@ public static class NetworkReader
     }
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private static void AddNetworkWarnings(List<Measurement> measurements, List<int> signatureIds, SpeciesCatalog catalog, IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities, List<Diagnostic> diagnostics)
+    private static void AddNetworkWarnings(List<Measurement> measurements, SpeciesCatalog catalog, IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities, List<Diagnostic> diagnostics)
     {
-        var seen = new Dictionary<(string Source, ThermoProperty Property, int Reaction), Measurement>();
+        var seen = new Dictionary<(string Source, ThermoProperty Property, string Reaction), Measurement>();
+
+        // Rows that repeat an equation text share its parsed equation: work its signature out once.
+        var signatures = new Dictionary<ChemicalEquation, string>(ReferenceEqualityComparer.Instance);
         var uses = new Dictionary<Species, List<Measurement>>();
         for (int i = 0; i < measurements.Count; i++)
         {
             Measurement measurement = measurements[i];
-            var key = (measurement.Source, measurement.Property, signatureIds[i]);
+            if (!signatures.TryGetValue(measurement.Equation, out string? signature))
+            {
+                signature = ReactionSignature(measurement.Equation);
+                signatures[measurement.Equation] = signature;
+            }
+
+            var key = (measurement.Source, measurement.Property, signature);
             if (seen.TryGetValue(key, out Measurement? first))
             {
                 diagnostics.Add(Diagnostic.Warning("repeated-measurement", measurement.Location with { Field = "equation" }, $"'{measurement.Id}' measures the same reaction as '{first.Id}' in source '{measurement.Source}'", "if both are independent determinations keep them; if one is a copy, drop it"));
@@ -599,17 +599,14 @@ public static class NetworkReader
     /// <summary>The parse of one equation text and its element/charge imbalances, kept for texts that recur.</summary>
     /// <param name="Result">The parse.</param>
     /// <param name="Imbalances">The element and charge imbalances, empty when balanced.</param>
-    /// <param name="SignatureId">The id of the reaction up to scale (see <see cref="EquationCache.SignatureIdOf(string)"/>), -1 when unusable.</param>
-    private sealed record ParsedEquation(ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances, int SignatureId);
+    private sealed record ParsedEquation(ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances);
 
     /// <summary>An equation parsed ahead of the row loop, with the species texts it resolved, in order.</summary>
-    private sealed record PreparsedEquation(ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances, string? Signature, string[] SpeciesTexts);
+    private sealed record PreparsedEquation(ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances, string[] SpeciesTexts);
 
-    /// <summary>Equation texts already read, and a small id per reaction signature so that repeats are found by integer.</summary>
+    /// <summary>Equation texts already read, and those parsed ahead.</summary>
     private sealed class EquationCache
     {
-        private readonly Dictionary<string, int> _signatureIds = new(StringComparer.Ordinal);
-
         public Dictionary<string, ParsedEquation> ByText { get; } = new(StringComparer.Ordinal);
 
         /// <summary>Equations parsed on all cores before the row loop (see <see cref="PreparseEquations"/>).</summary>
@@ -617,7 +614,7 @@ public static class NetworkReader
 
         /// <summary>The pre-parsed equation of a text, valid in row order, or null (parse it in order then).</summary>
         /// <remarks>Replays the species texts through the catalog, as a parse in row order would, and checks every species is the instance the pre-parse used.</remarks>
-        public (ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances, string? Signature)? TakePreparsed(string text, SpeciesCatalog catalog)
+        public (ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances)? TakePreparsed(string text, SpeciesCatalog catalog)
         {
             if (!Preparsed.Remove(text, out PreparsedEquation? preparsed) || !preparsed.Result.TryGetValue(out _))
             {
@@ -632,22 +629,7 @@ public static class NetworkReader
                 same &= inOrder.TryGetValue(out Species? a) && ahead.TryGetValue(out Species? b) && ReferenceEquals(a, b);
             }
 
-            return same ? (preparsed.Result, preparsed.Imbalances, preparsed.Signature) : null;
-        }
-
-        /// <summary>Equal ids for equations that are the same reaction up to a positive scale factor.</summary>
-        public int SignatureIdOf(ChemicalEquation equation) => SignatureIdOf(ReactionSignature(equation));
-
-        /// <summary>The id of a reaction signature (see <see cref="ReactionSignature"/>).</summary>
-        public int SignatureIdOf(string signature)
-        {
-            if (!_signatureIds.TryGetValue(signature, out int id))
-            {
-                id = _signatureIds.Count;
-                _signatureIds[signature] = id;
-            }
-
-            return id;
+            return same ? (preparsed.Result, preparsed.Imbalances) : null;
         }
     }
 }
