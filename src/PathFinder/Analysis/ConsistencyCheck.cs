@@ -37,7 +37,8 @@ public static class ConsistencyCheck
         options ??= new ConsistencyOptions();
         // The solve first, with every core for its dense algebra (a search beside it would slow its threaded
         // factorization by more than it gains); then the cycle search, which needs only the measurements, runs
-        // on another core beside the suspect procedure, whose dense folds use one thread.
+        // on another core beside the suspect procedure (its short work budget leaves that core to the
+        // procedure's dense folds soon after).
         LeastSquaresSolution asGiven = WeightedLeastSquares.Solve(model.ToObservationSystem());
         Task<CycleSearchResult> cycleSearch = Task.Run(() => FindCycles.In(model.ToRouteNetwork(), new CycleSearchOptions
         {

@@ -43,7 +43,7 @@ internal sealed class OpenBlasKernel : IDenseKernel
         var piv = new int[n];
         lock (s_gate)
         {
-            UseThreads(FactorizationThreads);
+            UseThreads(AllCores);
             Dpstrf(ref uplo, ref order, ref a.First, ref lda, piv, ref rank, ref tol, work, ref info, 1);
         }
 
@@ -142,7 +142,7 @@ internal sealed class OpenBlasKernel : IDenseKernel
             double alpha = allNegative ? 1.0 : -1.0;
             lock (s_gate)
             {
-                UseThreads(1);
+                UseThreads(AllCores);
                 Dsyrk(ref uplo, ref trans, ref order, ref inner, ref alpha, ref scaled.First, ref ld, ref beta, ref g.First, ref ld, 1, 1);
             }
 
@@ -161,7 +161,7 @@ internal sealed class OpenBlasKernel : IDenseKernel
         using var alignedB = new AlignedCopy(vectors, n * rank);
         lock (s_gate)
         {
-            UseThreads(1);
+            UseThreads(AllCores);
             Dgemm(ref transA, ref transB, ref order, ref columns, ref inner, ref minusOne, ref scaled.First, ref ld, ref alignedB.First, ref ld, ref beta, ref g.First, ref ld, 1, 1);
         }
     }
@@ -174,15 +174,15 @@ internal sealed class OpenBlasKernel : IDenseKernel
         int info = 0;
         lock (s_gate)
         {
-            UseThreads(FactorizationThreads);
+            UseThreads(AllCores);
             routine(ref uplo, ref order, ref a.First, ref leadingDimension, ref info, 1);
         }
 
         return info;
     }
 
-    /// <summary>Threads for the one-off factorization and inversion: every core.</summary>
-    private static int FactorizationThreads => Environment.ProcessorCount;
+    /// <summary>Threads for every call: all cores.</summary>
+    private static int AllCores => Environment.ProcessorCount;
 
     /// <summary>Sets OpenBLAS's thread count for the next call (the caller holds <see cref="s_gate"/>).</summary>
     /// <remarks>
@@ -194,9 +194,11 @@ internal sealed class OpenBlasKernel : IDenseKernel
     /// take turns.
     /// </para>
     /// <para>
-    /// Factorizations use every core. The low-rank folds of the suspect procedure use one: they are short and
-    /// alternate with managed work, and between calls OpenBLAS's worker threads spin for a while, which slowed the
-    /// managed work and the cycle search running beside it (measured; see the benchmark baseline).
+    /// Every call uses every core, the suspect procedure's low-rank folds too. Those once ran on one thread because
+    /// between calls OpenBLAS's idle workers spun for about 0.1 s and took the core from the managed work and the
+    /// cycle search beside it; since <see cref="OpenBlasSettings"/> makes them sleep at once, two threads make the
+    /// procedure faster even while the cycle search runs (measured; see the benchmark baseline), and the folds'
+    /// results were identical to the last bit with one thread and with two.
     /// </para>
     /// </remarks>
     private static void UseThreads(int count)
@@ -246,7 +248,7 @@ internal sealed class OpenBlasKernel : IDenseKernel
     private static bool Probe()
     {
         // Must happen before the first load: OpenBLAS chooses its kernels once, when it is loaded.
-        OpenBlasCoreType.Apply();
+        OpenBlasSettings.Apply();
         if (!NativeLibrary.TryLoad(LibraryName, out IntPtr handle))
         {
             return false;

@@ -32,9 +32,9 @@ public sealed class RepeatabilityTests
     [Fact]
     public async Task Solve_GivesBitForBitTheSameNumbers_WhileASuspectProcedureRunsBeside()
     {
-        // Given the demo model, and a suspect procedure running on another thread (its folds use one BLAS thread,
-        // the solve's factorization all of them; OpenBLAS's thread count is global, so changing it while the other
-        // thread is inside a call once changed a result by 65 units in the last place: calls must take turns)
+        // Given the demo model, and a suspect procedure running on another thread (OpenBLAS's thread count is
+        // global, and changing it while the other thread was inside a call once changed a result by 65 units in the
+        // last place: calls must take turns)
         PropertyModel model = PropertyModel.Build(NetworkReader.Read(RepoPaths.Demo("combustion-lab")).Network, PropertyFamily.Enthalpy);
         ObservationSystem system = model.ToObservationSystem();
         double[] first = WeightedLeastSquares.Solve(system).Values.ToArray();

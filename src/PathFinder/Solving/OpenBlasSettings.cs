@@ -3,7 +3,7 @@ using System.Runtime.Intrinsics.X86;
 
 namespace PathFinder.Solving;
 
-/// <summary>Tells OpenBLAS which kernels to use when its own CPU detection would fall back to generic ones.</summary>
+/// <summary>Settings OpenBLAS reads from the environment when it loads: its kernels and how long its idle threads spin.</summary>
 /// <remarks>
 /// <para>
 /// A multi-architecture OpenBLAS picks its kernels from the CPU's family and model number when the library is
@@ -19,14 +19,27 @@ namespace PathFinder.Solving;
 /// the kernels chosen never need more than the CPU has. The variable must reach the C library's environment,
 /// which <see cref="Environment.SetEnvironmentVariable(string, string)"/> does not do on Linux, hence setenv(3).
 /// </para>
+/// <para>
+/// After a threaded call OpenBLAS's worker threads spin (yielding) for 2^28 cycles, about 0.1 s, before they sleep.
+/// The suspect procedure makes a threaded dense update every few tens of milliseconds, so the workers would spin
+/// through the whole procedure and take the other cores from the cycle search running beside it. With
+/// OPENBLAS_THREAD_TIMEOUT = 4 (2^4 cycles, OpenBLAS's smallest) they sleep at once and are woken for the next call,
+/// which costs microseconds against the milliseconds of the calls themselves.
+/// </para>
 /// </remarks>
-internal static class OpenBlasCoreType
+internal static class OpenBlasSettings
 {
-    /// <summary>The name of the variable OpenBLAS reads.</summary>
-    public const string VariableName = "OPENBLAS_CORETYPE";
+    /// <summary>The name of the variable that chooses the kernels.</summary>
+    public const string CoreTypeVariable = "OPENBLAS_CORETYPE";
+
+    /// <summary>The name of the variable that sets how long idle worker threads spin (2^value cycles).</summary>
+    public const string ThreadTimeoutVariable = "OPENBLAS_THREAD_TIMEOUT";
+
+    /// <summary>The spin time set: 2^4 cycles, the smallest OpenBLAS accepts.</summary>
+    public const string ThreadTimeout = "4";
 
     /// <summary>The kernel family suited to this CPU, or null when nothing better than OpenBLAS's own choice is known.</summary>
-    public static string? ForThisCpu()
+    public static string? CoreTypeForThisCpu()
     {
         if (!OperatingSystem.IsLinux() || RuntimeInformation.ProcessArchitecture != Architecture.X64)
         {
@@ -46,12 +59,17 @@ internal static class OpenBlasCoreType
         return Avx.IsSupported ? "Sandybridge" : null;
     }
 
-    /// <summary>Sets OPENBLAS_CORETYPE for this CPU unless the user already set it; call before the library loads.</summary>
+    /// <summary>Sets OPENBLAS_CORETYPE for this CPU and OPENBLAS_THREAD_TIMEOUT, each unless the user already set it; call before the library loads.</summary>
     /// <remarks>Without a suitable family, or where setenv(3) is missing, OpenBLAS keeps its own choice (the kernel name it reports shows which).</remarks>
     public static void Apply()
     {
-        string? chosen = ForThisCpu();
-        if (chosen is null || !string.IsNullOrEmpty(Environment.GetEnvironmentVariable(VariableName)))
+        SetUnlessSet(CoreTypeVariable, CoreTypeForThisCpu());
+        SetUnlessSet(ThreadTimeoutVariable, ThreadTimeout);
+    }
+
+    private static void SetUnlessSet(string name, string? value)
+    {
+        if (value is null || !string.IsNullOrEmpty(Environment.GetEnvironmentVariable(name)))
         {
             return;
         }
@@ -59,7 +77,7 @@ internal static class OpenBlasCoreType
         try
         {
             // overwrite = 0: a value already in the C environment (set by a parent process) wins.
-            _ = SetEnvironment(VariableName, chosen, 0);
+            _ = SetEnvironment(name, value, 0);
         }
         catch (Exception exception) when (exception is DllNotFoundException or EntryPointNotFoundException)
         {

@@ -1,16 +1,17 @@
+using System.Runtime.InteropServices;
 using System.Runtime.Intrinsics.X86;
 using PathFinder.Solving;
 
 namespace PathFinder.Tests.Solving;
 
 /// <summary>The OpenBLAS kernels chosen must use what the CPU has, and never fall back to generic ones on a CPU with AVX2.</summary>
-public sealed class OpenBlasCoreTypeTests
+public sealed class OpenBlasSettingsTests
 {
     [Fact]
     public void ForThisCpu_NeverAsksForMoreThanTheCpuHas()
     {
         // Given the instruction sets the runtime reports, when choosing a kernel family
-        string? chosen = OpenBlasCoreType.ForThisCpu();
+        string? chosen = OpenBlasSettings.CoreTypeForThisCpu();
 
         // Then AVX-512 kernels are chosen only with AVX-512, AVX2 kernels only with AVX2 and FMA (OpenBLAS's families, from its documentation; from memory)
         switch (chosen)
@@ -37,7 +38,7 @@ public sealed class OpenBlasCoreTypeTests
     public void NativeBackend_OnAnAvx2Cpu_DoesNotRunTheGenericKernels()
     {
         // Given a machine where the native backend loads and the user did not pick kernels themselves
-        if (!WeightedLeastSquares.IsNativeBackendAvailable || !Avx2.IsSupported || !string.IsNullOrEmpty(Environment.GetEnvironmentVariable(OpenBlasCoreType.VariableName)))
+        if (!WeightedLeastSquares.IsNativeBackendAvailable || !Avx2.IsSupported || !string.IsNullOrEmpty(Environment.GetEnvironmentVariable(OpenBlasSettings.CoreTypeVariable)))
         {
             return;
         }
@@ -48,4 +49,21 @@ public sealed class OpenBlasCoreTypeTests
         Assert.NotNull(kernels);
         Assert.DoesNotContain(kernels, new[] { "Prescott", "Core2", "Nehalem", "Katmai", "Coppermine", "Northwood", "Banias", "Atom" });
     }
+
+    [Fact]
+    public void NativeBackend_LetsIdleWorkersSleepAtOnce()
+    {
+        // Given a machine where the native backend loads and the user did not set the spin time themselves
+        if (!WeightedLeastSquares.IsNativeBackendAvailable || !string.IsNullOrEmpty(Environment.GetEnvironmentVariable(OpenBlasSettings.ThreadTimeoutVariable)))
+        {
+            return;
+        }
+
+        // Then the C environment OpenBLAS read at load time holds the shortest spin (2^4 cycles, OpenBLAS's minimum;
+        // from its documentation of OPENBLAS_THREAD_TIMEOUT, from memory)
+        Assert.Equal(OpenBlasSettings.ThreadTimeout, Marshal.PtrToStringUTF8(GetEnvironment(OpenBlasSettings.ThreadTimeoutVariable)));
+    }
+
+    [DllImport("libc", EntryPoint = "getenv", ExactSpelling = true)]
+    private static extern IntPtr GetEnvironment([MarshalAs(UnmanagedType.LPUTF8Str)] string name);
 }
