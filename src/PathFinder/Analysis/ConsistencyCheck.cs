@@ -49,6 +49,10 @@ public static class ConsistencyCheck
             CancellationToken = options.CancellationToken,
         }));
 
+        // The per-measurement diagnostics of the data as given are needed only after the procedure: that core works
+        // them out once the cycle search is done (the procedure works on a copy of the factorization).
+        Task givenDiagnostics = cycleSearch.ContinueWith(_ => asGiven.Observations.Count, TaskScheduler.Default);
+
         // Start from the solution just computed: the procedure copies its factorization instead of redoing it.
         OutlierResult? outliers = options.RunSuspectProcedure
             ? OutlierProcedure.Run(asGiven, new OutlierOptions { Threshold = options.Threshold, InflationFactor = options.InflationFactor })
@@ -57,6 +61,7 @@ public static class ConsistencyCheck
         IReadOnlyList<OutlierSuspect> outlierSuspects = outliers?.Suspects ?? [];
         IReadOnlyList<UncertaintyAdjustment> adjustments = outliers?.Adjustments ?? [];
 
+        givenDiagnostics.GetAwaiter().GetResult();
         var suspectIndices = new HashSet<int>(outlierSuspects.Select(suspect => suspect.ObservationIndex));
         var checks = new MeasurementCheck[model.Measurements.Count];
         for (int i = 0; i < checks.Length; i++)

@@ -15,7 +15,7 @@ public sealed class LeastSquaresSolution
     private readonly double[] _values;
     private readonly double[] _uncertainties;
     private readonly bool[] _determined;
-    private readonly ObservationDiagnostics[] _diagnostics;
+    private readonly Lazy<ObservationDiagnostics[]> _diagnostics;
     private readonly Lazy<IReadOnlyList<RelativeGroup>> _relativeGroups;
 
     internal LeastSquaresSolution(SolverEngine engine)
@@ -38,16 +38,27 @@ public sealed class LeastSquaresSolution
 
         UndeterminedUnknowns = Enumerable.Range(0, n).Where(j => !_determined[j]).ToArray();
         Rank = engine.Components.Sum(c => c.Rank);
-        _diagnostics = new ObservationDiagnostics[engine.ObservationCount];
-        IndexedWork.For(_diagnostics.Length, i => _diagnostics[i] = Diagnose(i));
-        double chiSquared = 0.0;
-        foreach (ObservationDiagnostics diagnostics in _diagnostics)
+        // χ² needs only the fitted values; the per-observation diagnostics (a quadratic form in the covariance
+        // each) are worked out when first asked for, which a plain solve never does.
+        var residuals = new double[engine.ObservationCount];
+        IndexedWork.For(residuals.Length, i =>
         {
-            double r = diagnostics.Residual / diagnostics.Uncertainty;
-            chiSquared += r * r;
+            double r = (_engine.Row(i).Value - _engine.FittedValue(i)) / _engine.Uncertainty(i);
+            residuals[i] = r * r;
+        });
+        double chiSquared = 0.0;
+        foreach (double r2 in residuals)
+        {
+            chiSquared += r2;
         }
 
         ChiSquared = chiSquared;
+        _diagnostics = new Lazy<ObservationDiagnostics[]>(() =>
+        {
+            var diagnostics = new ObservationDiagnostics[_engine.ObservationCount];
+            IndexedWork.For(diagnostics.Length, i => diagnostics[i] = Diagnose(i));
+            return diagnostics;
+        });
         _relativeGroups = new Lazy<IReadOnlyList<RelativeGroup>>(FindRelativeGroups);
     }
 
@@ -91,7 +102,8 @@ public sealed class LeastSquaresSolution
     public IReadOnlyList<RelativeGroup> RelativeGroups => _relativeGroups.Value;
 
     /// <summary>Per-observation residuals, leverages, normalized residuals and leave-one-out predictions, by index.</summary>
-    public IReadOnlyList<ObservationDiagnostics> Observations => _diagnostics;
+    /// <remarks>Worked out on first use (on all cores for large systems) and kept.</remarks>
+    public IReadOnlyList<ObservationDiagnostics> Observations => _diagnostics.Value;
 
     /// <summary>Whether unknown j is determined by the data.</summary>
     public bool IsDetermined(int unknown) => _determined[unknown];

@@ -156,6 +156,22 @@ internal sealed class SolverEngine
     /// <summary>Factors component c afresh from the rows and the current uncertainties.</summary>
     internal void Refactor(int c) => _components[c].Factor(_rows, _uncertainties, _localOf, _kernel, Options);
 
+    /// <summary>The fitted value aᵢᵀx̂ of observation i, summed in the same order as <see cref="FitObservation"/>.</summary>
+    public double FittedValue(int i)
+    {
+        ComponentFactorization component = _components[_componentOfObservation[i]];
+        SparseRow row = _rows[i].Row;
+        ReadOnlySpan<int> idx = row.Indices;
+        ReadOnlySpan<double> coef = row.Coefficients;
+        double fitted = 0.0;
+        for (int p = 0; p < idx.Length; p++)
+        {
+            fitted += coef[p] * component.Solution[_localOf[idx[p]]];
+        }
+
+        return fitted;
+    }
+
     /// <summary>The fitted value aᵢᵀx̂ and the quadratic form aᵢᵀGaᵢ of observation i.</summary>
     public (double Fitted, double Quadratic) FitObservation(int i)
     {
