@@ -511,6 +511,7 @@ internal sealed class IncrementalFit
             var vRow = Vector256.Create(0.0, 1.0, 2.0, 3.0);
             var vStep = Vector256.Create((double)Lanes);
             var minusOne = Vector256.Create(-1.0);
+            var vMargin = Vector256.Create(1.0 - 1e-12);
             for (; r + Lanes <= count; r += Lanes)
             {
                 nuint at = (nuint)r;
@@ -543,10 +544,18 @@ internal sealed class IncrementalFit
                 Vector256<double> residual = Vector256.LoadUnsafe(ref values, at) - (rowFitted + (vShift * sum));
                 Vector256<double> rest = rowVariance - (rowQuadratic - (vFactor * sum * sum));
                 Vector256<double> checkable = Vector256.GreaterThan(rest, vCheckability * rowVariance);
-                Vector256<double> square = Vector256.ConditionalSelect(checkable, residual * residual / rest, minusOne);
-                Vector256<double> better = Vector256.GreaterThan(square, vBest);
-                vBest = Vector256.ConditionalSelect(better, square, vBest);
-                vBestRow = Vector256.ConditionalSelect(better, vRow, vBestRow);
+
+                // The division only where a lane may beat its best: r²/u'² > best needs r² > best·u'² (u'² > 0 where
+                // checkable), tested with a margin far above rounding, so every lane skipped would have lost anyway.
+                Vector256<double> numerator = residual * residual;
+                if (!Vector256.EqualsAll(checkable & Vector256.GreaterThan(numerator, vBest * rest * vMargin), Vector256<double>.Zero))
+                {
+                    Vector256<double> square = Vector256.ConditionalSelect(checkable, numerator / rest, minusOne);
+                    Vector256<double> better = Vector256.GreaterThan(square, vBest);
+                    vBest = Vector256.ConditionalSelect(better, square, vBest);
+                    vBestRow = Vector256.ConditionalSelect(better, vRow, vBestRow);
+                }
+
                 vRow += vStep;
             }
 
