@@ -56,9 +56,6 @@ internal sealed class IncrementalFit
     private double _pendingShift;
     private double _pendingFactor;
 
-    // True when _t holds tₗ of the current probe (its first evaluation computed them).
-    private bool _probeProducts;
-
     public IncrementalFit(SolverEngine engine, int blockSize)
     {
         _engine = engine;
@@ -180,7 +177,6 @@ internal sealed class IncrementalFit
             ApplyPending();
         }
 
-        _probeProducts = false;
         return new Probe(i, c, _gBuffer);
     }
 
@@ -223,7 +219,6 @@ internal sealed class IncrementalFit
         _pendingComponent = c;
         _pendingShift = shift;
         _pendingFactor = factor;
-        _probeProducts = false;
         slots.BestSlot = slots.PendingBestSlot;
         slots.BestSquare = slots.PendingBestSquare;
 
@@ -325,100 +320,13 @@ internal sealed class IncrementalFit
         // i's own z uses its new uncertainty: put it in place for the pass, then restore.
         double oldVariance = _variance[own];
         _variance[own] = uncertainty * uncertainty;
-        (int bestSlot, double bestSquare) = _probeProducts
-            ? BestOfGroups(slots, shift, factor)
-            : SweepOfGroups(slots, probe.G.AsSpan(0, _engine.Components[probe.Component].Size), shift, factor);
-        _probeProducts = true;
+        // A second evaluation of the same probe (another uncertainty) computes the same products again: rare, and one
+        // pass then serves every case.
+        (int bestSlot, double bestSquare) = SweepOfGroups(slots, probe.G.AsSpan(0, _engine.Components[probe.Component].Size), shift, factor);
         _variance[own] = oldVariance;
         slots.PendingBestSlot = bestSlot;
         slots.PendingBestSquare = bestSquare;
         return (bestSlot, bestSquare);
-    }
-
-    /// <summary>The worst slot of a component after the change (lowest observation index on ties) and its z², or (−1, −1).</summary>
-    private (int Slot, double Square) BestOfGroups(ComponentSlots slots, double shift, double factor)
-    {
-        int bestSlot = -1;
-        double bestSquare = -1.0;
-        foreach (WidthGroup group in slots.Groups)
-        {
-            (int slot, double square) = BestInGroup(group, shift, factor);
-            if (slot >= 0 && (square > bestSquare || (square == bestSquare && _observationAt[slot] < _observationAt[bestSlot])))
-            {
-                bestSlot = slot;
-                bestSquare = square;
-            }
-        }
-
-        return (bestSlot, bestSquare);
-    }
-
-    /// <summary>The largest z² = (v − ŷ')²/(u² − q') over the checkable rows of a group after the change, and its slot.</summary>
-    /// <remarks>
-    /// ŷ' = ŷ + shift·t and q' = q − factor·t²; z² is compared instead of |z| to save a square root per row.
-    /// Within a group slots ascend with the observation index, so the first slot holding the largest value
-    /// (strictly-greater updates per SIMD lane, then the lowest slot among tied lanes) is the lowest index.
-    /// </remarks>
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private (int Slot, double Square) BestInGroup(WidthGroup group, double shift, double factor)
-    {
-        int s = group.Start;
-        int end = group.Start + group.Count;
-        double best = -1.0;
-        int bestSlot = -1;
-        if (Vector256.IsHardwareAccelerated && group.Count >= Lanes)
-        {
-            var vShift = Vector256.Create(shift);
-            var vFactor = Vector256.Create(factor);
-            var vCheckability = Vector256.Create(_checkability);
-            var vBest = Vector256.Create(-1.0);
-            var vBestSlot = Vector256.Create(-1.0);
-            var vSlot = Vector256.Create(s, s + 1.0, s + 2.0, s + 3.0);
-            var vStep = Vector256.Create((double)Lanes);
-            var minusOne = Vector256.Create(-1.0);
-            for (; s + Lanes <= end; s += Lanes)
-            {
-                var t = Vector256.Create(_t.AsSpan(s, Lanes));
-                var variance = Vector256.Create(_variance.AsSpan(s, Lanes));
-                Vector256<double> residual = Vector256.Create(_values.AsSpan(s, Lanes)) - (Vector256.Create(_fitted.AsSpan(s, Lanes)) + (vShift * t));
-                Vector256<double> rest = variance - (Vector256.Create(_quadratic.AsSpan(s, Lanes)) - (vFactor * t * t));
-                Vector256<double> checkable = Vector256.GreaterThan(rest, vCheckability * variance);
-                Vector256<double> square = Vector256.ConditionalSelect(checkable, residual * residual / rest, minusOne);
-                Vector256<double> better = Vector256.GreaterThan(square, vBest);
-                vBest = Vector256.ConditionalSelect(better, square, vBest);
-                vBestSlot = Vector256.ConditionalSelect(better, vSlot, vBestSlot);
-                vSlot += vStep;
-            }
-
-            for (int lane = 0; lane < Lanes; lane++)
-            {
-                double value = vBest[lane];
-                int slot = (int)vBestSlot[lane];
-                if (slot >= 0 && (value > best || (value == best && slot < bestSlot)))
-                {
-                    best = value;
-                    bestSlot = slot;
-                }
-            }
-        }
-
-        for (; s < end; s++)
-        {
-            double t = _t[s];
-            double residual = _values[s] - (_fitted[s] + (shift * t));
-            double rest = _variance[s] - (_quadratic[s] - (factor * t * t));
-            if (rest > _checkability * _variance[s])
-            {
-                double square = residual * residual / rest;
-                if (square > best || bestSlot < 0)
-                {
-                    best = square;
-                    bestSlot = s;
-                }
-            }
-        }
-
-        return (bestSlot, best);
     }
 
     /// <summary>ŷ ← ŷ + shift·t and q ← q − factor·t² over a component's slots.</summary>
@@ -447,7 +355,7 @@ internal sealed class IncrementalFit
     }
 
     /// <summary>One pass over a component: applies the pending change, computes tₗ = aₗᵀg, and finds the worst slot after the probed change.</summary>
-    /// <returns>As <see cref="BestOfGroups"/>: the worst slot (lowest observation index on ties) and its z², or (−1, −1).</returns>
+    /// <returns>The worst slot after the change (lowest observation index on ties) and its z², or (−1, −1).</returns>
     private (int Slot, double Square) SweepOfGroups(ComponentSlots slots, ReadOnlySpan<double> g, double shift, double factor)
     {
         bool pending = _pendingComponent >= 0;
@@ -473,10 +381,11 @@ internal sealed class IncrementalFit
     /// <summary>The pass of <see cref="SweepOfGroups"/> over one group of rows.</summary>
     /// <remarks>
     /// Per row: ŷ ← ŷ + shift₀·t₀ and q ← q − factor₀·t₀² for the pending change (its t₀ still in place), then the new
-    /// t = aᵀg (summed in the row's own order) and z² = (v − ŷ − shift·t)²/(u² − q + factor·t²) as in
-    /// <see cref="BestInGroup"/>. The arithmetic is the same, operation for operation, as applying the change and then
-    /// evaluating in separate passes, so results do not depend on which is done. Indices come from the fit's own
-    /// layout (always within g), so the loads skip bounds checks.
+    /// t = aᵀg (summed in the row's own order) and z² = (v − ŷ − shift·t)²/(u² − q + factor·t²), compared instead of
+    /// |z| to save a square root per row. The vector and scalar paths perform the same operations, so results do not
+    /// depend on the hardware. Within a group slots ascend with the observation index, so the first slot holding the
+    /// largest value (strictly-greater updates per SIMD lane, then the lowest row among tied lanes) is the lowest
+    /// index. Indices come from the fit's own layout (always within g), so the loads skip bounds checks.
     /// </remarks>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private (int Slot, double Square) SweepGroup<TPending>(WidthGroup group, ReadOnlySpan<double> g, double shift, double factor)
@@ -673,7 +582,12 @@ internal sealed class IncrementalFit
     {
         if (_pendingComponent == c)
         {
+            // Recomputed from the engine below.
             _pendingComponent = -1;
+        }
+        else
+        {
+            ApplyPending();
         }
 
         ComponentSlots slots = _components[c];
@@ -689,8 +603,8 @@ internal sealed class IncrementalFit
             _t[s] = 0.0;
         });
 
-        // With t = 0 the "change" is none: the same scan finds the current worst.
-        (slots.BestSlot, slots.BestSquare) = BestOfGroups(slots, 0.0, 0.0);
+        // With g = 0 (so t = 0) the "change" is none: the same pass finds the current worst.
+        (slots.BestSlot, slots.BestSquare) = SweepOfGroups(slots, new double[_engine.Components[c].Size], 0.0, 0.0);
     }
 
     private LowRank LowRankOf(int c) => _lowRank[c] ??= new LowRank(_engine.Components[c].Size, Math.Max(1, Math.Min(_blockSize, _engine.Components[c].Size)));
