@@ -1,4 +1,5 @@
 using System.Runtime.CompilerServices;
+using System.Runtime.InteropServices;
 using System.Text;
 using Fractions;
 
@@ -13,6 +14,12 @@ namespace PathFinder.Chemistry;
 public sealed class ChemicalEquation
 {
     private readonly EquationTerm[] _terms;
+
+    [ThreadStatic]
+    private static List<Species>? t_species;
+
+    [ThreadStatic]
+    private static List<Fraction>? t_sums;
 
     private ChemicalEquation(EquationTerm[] terms, bool isFormation)
     {
@@ -250,11 +257,25 @@ public sealed class ChemicalEquation
     }
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private static ChemicalEquation FromTerms(IEnumerable<EquationTerm> terms, bool isFormation)
+    private static ChemicalEquation FromTerms(IEnumerable<EquationTerm> terms, bool isFormation) =>
+        terms switch
+        {
+            EquationTerm[] array => FromTerms(array, isFormation),
+            List<EquationTerm> list => FromTerms(CollectionsMarshal.AsSpan(list), isFormation),
+            _ => FromTerms(terms.ToArray(), isFormation),
+        };
+
+    /// <summary>Builds an equation from signed terms held by the caller (the parser's reused buffer).</summary>
+    internal static ChemicalEquation FromTerms(ReadOnlySpan<EquationTerm> terms) => FromTerms(terms, isFormation: false);
+
+    private static ChemicalEquation FromTerms(ReadOnlySpan<EquationTerm> terms, bool isFormation)
     {
+        // Reused per thread: every equation read passes here, and nothing in here comes back to this method.
+        List<Species> species = t_species ??= new List<Species>(16);
+        List<Fraction> sums = t_sums ??= new List<Fraction>(16);
+        species.Clear();
+        sums.Clear();
         // Equations are short: species are matched by a linear scan, and a dictionary is only built for long sums.
-        var species = new List<Species>(terms is ICollection<EquationTerm> collection ? collection.Count : 8);
-        var sums = new List<Fraction>(species.Capacity);
         Dictionary<Species, int>? index = null;
         foreach (EquationTerm term in terms)
         {

@@ -1,4 +1,5 @@
 using System.Runtime.CompilerServices;
+using System.Runtime.InteropServices;
 using Fractions;
 using PathFinder.Diagnostics;
 
@@ -18,6 +19,12 @@ public static class EquationParser
     private static readonly string[] Arrows = ["<=>", "->", "→", "="];
 
     private static readonly System.Buffers.SearchValues<char> ArrowStarts = System.Buffers.SearchValues.Create("<-→=");
+
+    [ThreadStatic]
+    private static List<EquationTerm>? t_terms;
+
+    [ThreadStatic]
+    private static List<(int Start, int Length)>? t_words;
 
     /// <summary>Reads an equation, resolving species with <see cref="SpeciesParser"/>. Never throws for bad input.</summary>
     public static ParseResult<ChemicalEquation> Parse(string text) => Parse(text, SpeciesParser.Parse);
@@ -39,15 +46,32 @@ public static class EquationParser
             return ParseResult<ChemicalEquation>.Fail(arrowFailure);
         }
 
+        // One reused buffer per thread for the terms of both sides (taken while in use, in case of re-entry).
+        List<EquationTerm> terms = t_terms ?? new List<EquationTerm>(16);
+        t_terms = null;
+        try
+        {
+            return Parse(text, resolveSpecies, arrowAt, arrowLength, terms);
+        }
+        finally
+        {
+            terms.Clear();
+            t_terms = terms;
+        }
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static ParseResult<ChemicalEquation> Parse(string text, Func<string, ParseResult<Species>> resolveSpecies, int arrowAt, int arrowLength, List<EquationTerm> terms)
+    {
         if (arrowAt < 0)
         {
-            ParseResult<List<EquationTerm>> single = ReadSide(text, 0, text.Length, resolveSpecies, sign: 1);
-            if (!single.TryGetValue(out List<EquationTerm>? terms))
+            ParseFailure? single = ReadSide(text, 0, text.Length, resolveSpecies, sign: 1, terms);
+            if (single is not null)
             {
                 // Without an arrow, a structural error (two species with no '+' between them) marks where the arrow was forgotten.
-                return single.Failure.Code == "bad-equation"
-                    ? ParseResult<ChemicalEquation>.Fail(single.Failure.Offset, "missing-arrow", "the equation has no arrow", "write reactants -> products; a single species alone (no coefficient) means its formation from the elements")
-                    : ParseResult<ChemicalEquation>.Fail(single.Failure);
+                return single.Code == "bad-equation"
+                    ? ParseResult<ChemicalEquation>.Fail(single.Offset, "missing-arrow", "the equation has no arrow", "write reactants -> products; a single species alone (no coefficient) means its formation from the elements")
+                    : ParseResult<ChemicalEquation>.Fail(single);
             }
 
             if (terms.Count != 1 || terms[0].Coefficient != Fraction.One)
@@ -64,25 +88,27 @@ public static class EquationParser
             return ParseResult<ChemicalEquation>.Ok(formation);
         }
 
-        ParseResult<List<EquationTerm>> left = ReadSide(text, 0, arrowAt, resolveSpecies, sign: -1);
-        if (!left.TryGetValue(out List<EquationTerm>? reactants))
+        ParseFailure? left = ReadSide(text, 0, arrowAt, resolveSpecies, sign: -1, terms);
+        if (left is not null)
         {
-            return ParseResult<ChemicalEquation>.Fail(left.Failure);
+            return ParseResult<ChemicalEquation>.Fail(left);
         }
 
-        ParseResult<List<EquationTerm>> right = ReadSide(text, arrowAt + arrowLength, text.Length, resolveSpecies, sign: 1);
-        if (!right.TryGetValue(out List<EquationTerm>? products))
+        int reactants = terms.Count;
+        ParseFailure? right = ReadSide(text, arrowAt + arrowLength, text.Length, resolveSpecies, sign: 1, terms);
+        if (right is not null)
         {
-            return ParseResult<ChemicalEquation>.Fail(right.Failure);
+            return ParseResult<ChemicalEquation>.Fail(right);
         }
 
-        if (reactants.Count == 0 || products.Count == 0)
+        int products = terms.Count - reactants;
+        if (reactants == 0 || products == 0)
         {
-            int where = reactants.Count == 0 ? 0 : arrowAt + arrowLength;
-            return ParseResult<ChemicalEquation>.Fail(where, "bad-equation", reactants.Count == 0 ? "nothing before the arrow" : "nothing after the arrow", "write reactants -> products");
+            int where = reactants == 0 ? 0 : arrowAt + arrowLength;
+            return ParseResult<ChemicalEquation>.Fail(where, "bad-equation", reactants == 0 ? "nothing before the arrow" : "nothing after the arrow", "write reactants -> products");
         }
 
-        ChemicalEquation equation = ChemicalEquation.FromTerms(reactants.Concat(products));
+        ChemicalEquation equation = ChemicalEquation.FromTerms(CollectionsMarshal.AsSpan(terms));
         if (equation.IsEmpty)
         {
             return ParseResult<ChemicalEquation>.Fail(0, "bad-equation", "every species cancels: the equation is empty", "check the equation");
@@ -131,11 +157,27 @@ public static class EquationParser
     }
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private static ParseResult<List<EquationTerm>> ReadSide(string text, int start, int end, Func<string, ParseResult<Species>> resolveSpecies, int sign)
+    private static ParseFailure? ReadSide(string text, int start, int end, Func<string, ParseResult<Species>> resolveSpecies, int sign, List<EquationTerm> terms)
     {
-        // Words are kept as (start, length) in the text; only species names and messages become strings.
-        var terms = new List<EquationTerm>(8);
-        var words = new List<(int Start, int Length)>(24);
+        // Words are kept as (start, length) in the text; only species names and messages become strings. The list
+        // is reused per thread (taken while in use, in case of re-entry through the species resolver).
+        List<(int Start, int Length)> words = t_words ?? new List<(int Start, int Length)>(24);
+        t_words = null;
+        try
+        {
+            return ReadSide(text, start, end, resolveSpecies, sign, terms, words);
+        }
+        finally
+        {
+            words.Clear();
+            t_words = words;
+        }
+    }
+
+    /// <summary>Appends one side's terms to <paramref name="terms"/>; returns the first failure, or null.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static ParseFailure? ReadSide(string text, int start, int end, Func<string, ParseResult<Species>> resolveSpecies, int sign, List<EquationTerm> terms, List<(int Start, int Length)> words)
+    {
         int i = start;
         while (i <= end)
         {
@@ -172,25 +214,26 @@ public static class EquationParser
             int count = w - termStart;
             if (count == 0)
             {
-                if (last && terms.Count == 0 && words.Count == 0)
+                if (last && words.Count == 0)
                 {
+                    // An empty side: the caller reports it.
                     break;
                 }
 
-                return ParseResult<List<EquationTerm>>.Fail(offset, "bad-equation", "a '+' has no species on one side", "separate species with ' + ' and write nothing else between them");
+                return new ParseFailure(offset, "a '+' has no species on one side", "separate species with ' + ' and write nothing else between them", "bad-equation");
             }
 
             ParseFailure? failure = ReadTerm(text, words, termStart, count, resolveSpecies, sign, out EquationTerm value);
             if (failure is not null)
             {
-                return ParseResult<List<EquationTerm>>.Fail(failure);
+                return failure;
             }
 
             terms.Add(value);
             termStart = w + 1;
         }
 
-        return ParseResult<List<EquationTerm>>.Ok(terms);
+        return null;
     }
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
