@@ -28,14 +28,44 @@ public sealed class SparseVector : IEquatable<SparseVector>
     public static SparseVector Create(IEnumerable<KeyValuePair<int, Fraction>> entries)
     {
         ArgumentNullException.ThrowIfNull(entries);
-        var sums = new SortedDictionary<int, Fraction>();
+        (int Index, Fraction Value)[] buffer = entries is ICollection<KeyValuePair<int, Fraction>> collection
+            ? new (int, Fraction)[collection.Count]
+            : [];
+        int n = 0;
         foreach (KeyValuePair<int, Fraction> e in entries)
         {
             ArgumentOutOfRangeException.ThrowIfNegative(e.Key);
-            sums[e.Key] = sums.TryGetValue(e.Key, out Fraction f) ? f + e.Value : e.Value;
+            if (n == buffer.Length)
+            {
+                Array.Resize(ref buffer, Math.Max(4, n * 2));
+            }
+
+            buffer[n++] = (e.Key, e.Value);
         }
 
-        return FromSorted(sums.Where(kv => !kv.Value.IsZero).Select(kv => (kv.Key, kv.Value)));
+        int distinct = IndexedEntries.SortAndSum(buffer.AsSpan(0, n), static (a, b) => a + b);
+        int kept = 0;
+        for (int i = 0; i < distinct; i++)
+        {
+            if (!buffer[i].Value.IsZero)
+            {
+                kept++;
+            }
+        }
+
+        var indices = new int[kept];
+        var values = new Fraction[kept];
+        int next = 0;
+        for (int i = 0; i < distinct; i++)
+        {
+            if (!buffer[i].Value.IsZero)
+            {
+                indices[next] = buffer[i].Index;
+                values[next++] = Normalize(buffer[i].Value);
+            }
+        }
+
+        return new SparseVector(indices, values);
     }
 
     /// <summary>Creates a vector from (index, value) tuples; repeated indices are summed and zeros dropped.</summary>

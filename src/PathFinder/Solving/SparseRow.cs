@@ -1,3 +1,5 @@
+using PathFinder.Algebra;
+
 namespace PathFinder.Solving;
 
 /// <summary>An immutable sparse vector over the unknowns: sorted column indices with non-zero coefficients.</summary>
@@ -33,7 +35,6 @@ public sealed class SparseRow
     /// <exception cref="ArgumentOutOfRangeException">An index is negative or a coefficient is not finite.</exception>
     public static SparseRow Of(params ReadOnlySpan<(int Index, double Coefficient)> entries)
     {
-        var map = new SortedDictionary<int, double>();
         foreach ((int index, double coefficient) in entries)
         {
             ArgumentOutOfRangeException.ThrowIfNegative(index, nameof(entries));
@@ -41,19 +42,19 @@ public sealed class SparseRow
             {
                 throw new ArgumentOutOfRangeException(nameof(entries), coefficient, "Coefficients must be finite.");
             }
-
-            map[index] = map.TryGetValue(index, out double existing) ? existing + coefficient : coefficient;
         }
 
-        var indices = new List<int>(map.Count);
-        var coefficients = new List<double>(map.Count);
-        foreach (KeyValuePair<int, double> pair in map)
+        (int Index, double Value)[] buffer = entries.ToArray();
+        int distinct = IndexedEntries.SortAndSum(buffer.AsSpan(), static (a, b) => a + b);
+        var indices = new List<int>(distinct);
+        var coefficients = new List<double>(distinct);
+        for (int i = 0; i < distinct; i++)
         {
             // Exact zero on purpose: only a coefficient that cancelled exactly is structurally absent.
-            if (pair.Value != 0.0)
+            if (buffer[i].Value != 0.0)
             {
-                indices.Add(pair.Key);
-                coefficients.Add(pair.Value);
+                indices.Add(buffer[i].Index);
+                coefficients.Add(buffer[i].Value);
             }
         }
 
