@@ -34,7 +34,6 @@ public sealed class SparseVector : IEquatable<SparseVector>
         int n = 0;
         foreach (KeyValuePair<int, Fraction> e in entries)
         {
-            ArgumentOutOfRangeException.ThrowIfNegative(e.Key);
             if (n == buffer.Length)
             {
                 Array.Resize(ref buffer, Math.Max(4, n * 2));
@@ -43,11 +42,22 @@ public sealed class SparseVector : IEquatable<SparseVector>
             buffer[n++] = (e.Key, e.Value);
         }
 
-        int distinct = IndexedEntries.SortAndSum(buffer.AsSpan(0, n), static (a, b) => a + b);
+        return FromEntries(buffer.AsSpan(0, n));
+    }
+
+    /// <summary>Creates a vector from (index, value) entries, sorting and netting them in place (the caller's buffer).</summary>
+    internal static SparseVector FromEntries(Span<(int Index, Fraction Value)> entries)
+    {
+        foreach ((int index, _) in entries)
+        {
+            ArgumentOutOfRangeException.ThrowIfNegative(index, nameof(entries));
+        }
+
+        int distinct = IndexedEntries.SortAndSum(entries, static (a, b) => a + b);
         int kept = 0;
         for (int i = 0; i < distinct; i++)
         {
-            if (!buffer[i].Value.IsZero)
+            if (!entries[i].Value.IsZero)
             {
                 kept++;
             }
@@ -58,10 +68,10 @@ public sealed class SparseVector : IEquatable<SparseVector>
         int next = 0;
         for (int i = 0; i < distinct; i++)
         {
-            if (!buffer[i].Value.IsZero)
+            if (!entries[i].Value.IsZero)
             {
-                indices[next] = buffer[i].Index;
-                values[next++] = Normalize(buffer[i].Value);
+                indices[next] = entries[i].Index;
+                values[next++] = Normalize(entries[i].Value);
             }
         }
 
@@ -69,8 +79,11 @@ public sealed class SparseVector : IEquatable<SparseVector>
     }
 
     /// <summary>Creates a vector from (index, value) tuples; repeated indices are summed and zeros dropped.</summary>
-    public static SparseVector Create(params (int Index, Fraction Value)[] entries) =>
-        Create(entries.Select(e => new KeyValuePair<int, Fraction>(e.Index, e.Value)));
+    public static SparseVector Create(params (int Index, Fraction Value)[] entries)
+    {
+        ArgumentNullException.ThrowIfNull(entries);
+        return FromEntries(entries.ToArray());
+    }
 
     /// <summary>Creates the vector value·e_index.</summary>
     public static SparseVector Unit(int index, Fraction value)

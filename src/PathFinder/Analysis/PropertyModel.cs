@@ -201,12 +201,13 @@ public sealed class PropertyModel
 
     private static SparseVector ToVector(ChemicalEquation equation, PropertyFamily family, Dictionary<Species, bool> fixedByInstance, Dictionary<Species, int> index)
     {
-        var entries = new List<KeyValuePair<int, Fraction>>(equation.Terms.Count);
+        var entries = new (int Index, Fraction Value)[equation.Terms.Count];
+        int count = 0;
         foreach (EquationTerm term in equation.Terms)
         {
             if (index.TryGetValue(term.Species, out int position))
             {
-                entries.Add(new KeyValuePair<int, Fraction>(position, term.Coefficient));
+                entries[count++] = (position, term.Coefficient);
             }
             else if (!(fixedByInstance.TryGetValue(term.Species, out bool isFixed) ? isFixed : family.IsFixed(term.Species)))
             {
@@ -214,7 +215,7 @@ public sealed class PropertyModel
             }
         }
 
-        return SparseVector.Create(entries);
+        return SparseVector.FromEntries(entries.AsSpan(0, count));
     }
 
     private static PreparedMeasurement Prepare(Measurement measurement, double reference, IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities, List<Diagnostic> warnings)
