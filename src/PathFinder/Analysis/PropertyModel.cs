@@ -125,7 +125,7 @@ public sealed class PropertyModel
 
         // Each vector depends on its equation alone (the index and the fixed flags are complete and only read now).
         var vectors = new SparseVector[prepared.Count];
-        IndexedWork.For(vectors.Length, i => vectors[i] = ToVector(prepared[i].Equation, family, fixedByInstance, index));
+        IndexedWork.For(vectors.Length, i => vectors[i] = ToVector(prepared[i].Equation, fixedByInstance, index));
         return new PropertyModel(family, reference, unknowns, prepared, vectors, warnings);
     }
 
@@ -199,7 +199,7 @@ public sealed class PropertyModel
     /// <remarks>Built on first use and then shared (the model and the route network are both immutable), so a second search to another target starts at once.</remarks>
     public RouteNetwork ToRouteNetwork() => _routeNetwork.Value;
 
-    private static SparseVector ToVector(ChemicalEquation equation, PropertyFamily family, Dictionary<Species, bool> fixedByInstance, Dictionary<Species, int> index)
+    private static SparseVector ToVector(ChemicalEquation equation, Dictionary<Species, bool> fixedByInstance, Dictionary<Species, int> index)
     {
         var entries = new (int Index, Fraction Value)[equation.Terms.Count];
         int count = 0;
@@ -209,7 +209,7 @@ public sealed class PropertyModel
             {
                 entries[count++] = (position, term.Coefficient);
             }
-            else if (!(fixedByInstance.TryGetValue(term.Species, out bool isFixed) ? isFixed : family.IsFixed(term.Species)))
+            else if (!fixedByInstance.GetValueOrDefault(term.Species))
             {
                 throw new InvalidOperationException($"{term.Species.Name} is neither an unknown nor fixed by convention.");
             }

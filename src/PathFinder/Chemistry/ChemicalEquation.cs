@@ -256,7 +256,6 @@ public sealed class ChemicalEquation
         }
     }
 
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static ChemicalEquation FromTerms(IEnumerable<EquationTerm> terms, bool isFormation) =>
         terms switch
         {

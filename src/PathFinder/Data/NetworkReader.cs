@@ -315,13 +315,14 @@ public static class NetworkReader
         var results = new PreparsedEquation[texts.Count];
         Parallel.For(0, texts.Count, i =>
         {
-            var speciesTexts = new List<string>();
-            (ParseResult<ChemicalEquation> result, IReadOnlyList<string> imbalances) = ParseChecked(texts[i], species =>
+            var resolved = new List<(string Text, Species? Species)>();
+            (ParseResult<ChemicalEquation> result, IReadOnlyList<string> imbalances) = ParseChecked(texts[i], text =>
             {
-                speciesTexts.Add(species);
-                return catalog.ResolveWithoutRecording(species);
+                ParseResult<Species> species = catalog.ResolveWithoutRecording(text);
+                resolved.Add((text, species.TryGetValue(out Species? value) ? value : null));
+                return species;
             });
-            results[i] = new PreparsedEquation(result, imbalances, speciesTexts.ToArray());
+            results[i] = new PreparsedEquation(result, imbalances, resolved.ToArray());
         });
 
         for (int i = 0; i < texts.Count; i++)
@@ -601,8 +602,8 @@ public static class NetworkReader
     /// <param name="Imbalances">The element and charge imbalances, empty when balanced.</param>
     private sealed record ParsedEquation(ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances);
 
-    /// <summary>An equation parsed ahead of the row loop, with the species texts it resolved, in order.</summary>
-    private sealed record PreparsedEquation(ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances, string[] SpeciesTexts);
+    /// <summary>An equation parsed ahead of the row loop, with the species texts it resolved and the instances they gave, in order.</summary>
+    private sealed record PreparsedEquation(ParseResult<ChemicalEquation> Result, IReadOnlyList<string> Imbalances, (string Text, Species? Species)[] Resolved);
 
     /// <summary>Equation texts already read, and those parsed ahead.</summary>
     private sealed class EquationCache
@@ -622,11 +623,9 @@ public static class NetworkReader
             }
 
             bool same = true;
-            foreach (string speciesText in preparsed.SpeciesTexts)
+            foreach ((string speciesText, Species? ahead) in preparsed.Resolved)
             {
-                ParseResult<Species> inOrder = catalog.Resolve(speciesText);
-                ParseResult<Species> ahead = catalog.ResolveWithoutRecording(speciesText);
-                same &= inOrder.TryGetValue(out Species? a) && ahead.TryGetValue(out Species? b) && ReferenceEquals(a, b);
+                same &= catalog.Resolve(speciesText).TryGetValue(out Species? inOrder) && ReferenceEquals(inOrder, ahead);
             }
 
             return same ? (preparsed.Result, preparsed.Imbalances) : null;

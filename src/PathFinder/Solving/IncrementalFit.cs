@@ -24,7 +24,7 @@ namespace PathFinder.Solving;
 /// the same observation is committed as one rank-one change. The result equals doing them one by one.
 /// </para>
 /// <para>
-/// The O(m·nnz) pass runs once or twice per step, thousands of times, so its layout matters: observations are
+/// The O(m·nnz) pass runs once per step, thousands of times, so its layout matters: observations are
 /// kept in "slot" order, grouped by component and within a component by their number of nonzeros, with each
 /// group's indices stored column by column. Four rows are then evaluated at once in SIMD registers with a fixed
 /// trip count and contiguous loads; each row's tₗ is still summed in the row's own order, and the vector and
