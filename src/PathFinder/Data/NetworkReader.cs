@@ -196,9 +196,14 @@ public static class NetworkReader
             {
                 diagnostics.Add(Diagnostic.Error("unknown-unit", row.LocationOf(columns.Unit, "unit"), $"unknown unit '{unitText}'", $"use one of {string.Join(", ", EnergyUnit.AcceptedSymbols)}"));
             }
-            else if (propertyKnown && (parsedUnit.Dimension == UnitDimension.MolarEnergy) != property.IsEnergy())
+            else if (propertyKnown && parsedUnit.Dimension != property.Dimension())
             {
-                string expected = property.IsEnergy() ? "an energy unit such as kJ/mol" : "an entropy unit such as J/(mol·K)";
+                string expected = property.Dimension() switch
+                {
+                    UnitDimension.MolarEnergy => "an energy unit such as kJ/mol",
+                    UnitDimension.MolarEntropy => "an entropy unit such as J/(mol·K)",
+                    _ => "no unit (leave the cell empty or write 1): an equilibrium constant's logarithm is a pure number",
+                };
                 diagnostics.Add(Diagnostic.Error("wrong-unit", row.LocationOf(columns.Unit, "unit"), $"{property.Code()} cannot be in {parsedUnit.Symbol}", $"use {expected}"));
             }
             else

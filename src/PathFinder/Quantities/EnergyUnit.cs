@@ -1,6 +1,6 @@
 namespace PathFinder.Quantities;
 
-/// <summary>A unit of molar energy or molar entropy, with its exact factor to the canonical unit.</summary>
+/// <summary>A unit of molar energy, molar entropy or a pure number, with its exact factor to the canonical unit.</summary>
 /// <remarks>
 /// Canonical units: kJ/mol for energies, J/(mol·K) for entropies. Per-particle units are converted with the
 /// CODATA 2018 exact constants: 1 eV = e·N_A = 96.485 332 12... kJ/mol; 1 cm⁻¹ = h·c·(100 m⁻¹)·N_A =
@@ -38,11 +38,14 @@ public sealed record EnergyUnit(string Symbol, UnitDimension Dimension, double T
     /// <summary>kJ/(mol·K).</summary>
     public static EnergyUnit KilojoulePerMoleKelvin { get; } = new("kJ/(mol·K)", UnitDimension.MolarEntropy, 1000.0);
 
+    /// <summary>The unit of a pure number (ln K, log₁₀ K), written <c>1</c> or left empty.</summary>
+    public static EnergyUnit Dimensionless { get; } = new("1", UnitDimension.Dimensionless, 1.0);
+
     private static readonly Dictionary<string, EnergyUnit> Aliases = BuildAliases();
 
     /// <summary>The symbols accepted in data, one per unit, for messages.</summary>
     public static IReadOnlyList<string> AcceptedSymbols { get; } =
-        ["kJ/mol", "J/mol", "kcal/mol", "cal/mol", "eV", "cm-1", "J/(mol·K)", "cal/(mol·K)", "kJ/(mol·K)"];
+        ["kJ/mol", "J/mol", "kcal/mol", "cal/mol", "eV", "cm-1", "J/(mol·K)", "cal/(mol·K)", "kJ/(mol·K)", "1"];
 
     /// <summary>Reads a unit symbol; spaces, case of "mol", "·", "*", "-1" exponents and ⁻¹ are tolerated.</summary>
     public static bool TryParse(string text, out EnergyUnit unit) => Aliases.TryGetValue(Normalise(text), out unit!);
@@ -87,6 +90,7 @@ public sealed record EnergyUnit(string Symbol, UnitDimension Dimension, double T
         Add(JoulePerMoleKelvin, "J/(mol·K)", "J/mol/K", "J/(mol K)", "J/K/mol", "J mol-1 K-1", "J/(K·mol)", "J/molK");
         Add(CaloriePerMoleKelvin, "cal/(mol·K)", "cal/mol/K", "cal/K/mol", "cal mol-1 K-1", "e.u.", "eu");
         Add(KilojoulePerMoleKelvin, "kJ/(mol·K)", "kJ/mol/K", "kJ/K/mol", "kJ mol-1 K-1");
+        Add(Dimensionless, "1");
         return table;
     }
 }

@@ -17,4 +17,10 @@ public enum ThermoProperty
 
     /// <summary>Absolute (third-law) entropy S° of one species, data code <c>S</c>.</summary>
     AbsoluteEntropy,
+
+    /// <summary>Natural logarithm of a reaction's equilibrium constant, ln K (dimensionless), data code <c>lnK</c>; ΔrG°(T) = −RT·ln K.</summary>
+    LnEquilibriumConstant,
+
+    /// <summary>Decimal logarithm of a reaction's equilibrium constant, log₁₀ K (dimensionless), data code <c>log10K</c>; ln K = ln 10 · log₁₀ K.</summary>
+    Log10EquilibriumConstant,
 }

@@ -8,4 +8,7 @@ public enum UnitDimension
 
     /// <summary>Molar entropy (ΔS, S°), canonical unit J/(mol·K).</summary>
     MolarEntropy,
+
+    /// <summary>A pure number (ln K, log₁₀ K), unit <c>1</c>.</summary>
+    Dimensionless,
 }
