@@ -12,6 +12,9 @@ public static class NetworkFiles
     /// <summary>Curation decisions (exclusions with reasons) in a folder network.</summary>
     public const string CurationFileName = "curation.csv";
 
+    /// <summary>Declared systematic uncertainties per source: <c>source,systematic,unit[,note]</c>.</summary>
+    public const string SourcesFileName = "sources.csv";
+
     /// <summary>The measurement files of a network: the file itself, or every other <c>*.csv</c> in the folder, sorted.</summary>
     public static IReadOnlyList<string> MeasurementFiles(string path)
     {
@@ -45,7 +48,9 @@ public static class NetworkFiles
         fileName.Equals(SpeciesFileName, StringComparison.OrdinalIgnoreCase)
         || fileName.Equals(HeatCapacityFileName, StringComparison.OrdinalIgnoreCase)
         || fileName.Equals(CurationFileName, StringComparison.OrdinalIgnoreCase)
+        || fileName.Equals(SourcesFileName, StringComparison.OrdinalIgnoreCase)
         || fileName.EndsWith("." + SpeciesFileName, StringComparison.OrdinalIgnoreCase)
         || fileName.EndsWith("." + HeatCapacityFileName, StringComparison.OrdinalIgnoreCase)
-        || fileName.EndsWith("." + CurationFileName, StringComparison.OrdinalIgnoreCase);
+        || fileName.EndsWith("." + CurationFileName, StringComparison.OrdinalIgnoreCase)
+        || fileName.EndsWith("." + SourcesFileName, StringComparison.OrdinalIgnoreCase);
 }

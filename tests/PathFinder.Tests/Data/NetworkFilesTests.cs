@@ -17,6 +17,7 @@ public sealed class NetworkFilesTests : IDisposable
         _folder.Write("species.csv", "");
         _folder.Write("heat-capacity.csv", "");
         _folder.Write("curation.csv", "");
+        _folder.Write("sources.csv", "");
         _folder.Write("notes.txt", "");
 
         IReadOnlyList<string> files = NetworkFiles.MeasurementFiles(_folder.Path);
@@ -46,6 +47,9 @@ public sealed class NetworkFilesTests : IDisposable
     [InlineData("Species.CSV", true)]
     [InlineData("lab.heat-capacity.csv", true)]
     [InlineData("lab.curation.csv", true)]
+    [InlineData("sources.csv", true)]
+    [InlineData("lab.sources.csv", true)]
+    [InlineData("open-sources.csv", false)]
     [InlineData("lab.csv", false)]
     [InlineData("my-species.csv", false)]
     public void IsAuxiliary_RecognisesTheCompanionTables(string name, bool expected)
