@@ -134,7 +134,7 @@ public static class NetworkReader
 
         if (table.DecimalComma)
         {
-            diagnostics.Add(Diagnostic.Warning("decimal-comma", new SourceLocation(file, table.HeaderLine, 1), "the file is semicolon-separated (a comma-decimal spreadsheet export); numbers were read with decimal commas", "no action needed; export with a comma separator and decimal points to silence this"));
+            diagnostics.Add(CsvNumber.DecimalCommaWarning(table));
         }
 
         string defaultSource = Path.GetFileNameWithoutExtension(file);
@@ -212,8 +212,8 @@ public static class NetworkReader
             }
         }
 
-        double? value = ReadNumber(row, columns.Value, "value", table.DecimalComma, diagnostics);
-        double? uncertainty = ReadNumber(row, columns.Uncertainty, "uncertainty", table.DecimalComma, diagnostics);
+        double? value = CsvNumber.Read(row, columns.Value, "value", table.DecimalComma, diagnostics);
+        double? uncertainty = CsvNumber.Read(row, columns.Uncertainty, "uncertainty", table.DecimalComma, diagnostics);
         if (uncertainty is <= 0.0)
         {
             diagnostics.Add(Diagnostic.Error("bad-uncertainty", row.LocationOf(columns.Uncertainty, "uncertainty"), $"the uncertainty must be positive, not {uncertainty.Value.ToString(CultureInfo.InvariantCulture)}", "give the standard uncertainty of the value (a zero uncertainty would make it exact)"));
@@ -223,7 +223,7 @@ public static class NetworkReader
         double coverage = 1.0;
         if (columns.Coverage >= 0 && row.FieldOrEmpty(columns.Coverage).Length > 0)
         {
-            double? k = ReadNumber(row, columns.Coverage, "coverage", table.DecimalComma, diagnostics);
+            double? k = CsvNumber.Read(row, columns.Coverage, "coverage", table.DecimalComma, diagnostics);
             if (k is < 1.0 or > 10.0)
             {
                 diagnostics.Add(Diagnostic.Error("bad-coverage", row.LocationOf(columns.Coverage, "coverage"), $"the coverage factor k = {k.Value.ToString(CultureInfo.InvariantCulture)} is outside 1..10", "k is usually 2 (about 95 %); leave the field blank for a standard uncertainty"));
@@ -237,7 +237,7 @@ public static class NetworkReader
         double temperature = PhysicalConstants.StandardTemperature;
         if (columns.Temperature >= 0 && row.FieldOrEmpty(columns.Temperature).Length > 0)
         {
-            double? t = ReadNumber(row, columns.Temperature, "temperature", table.DecimalComma, diagnostics);
+            double? t = CsvNumber.Read(row, columns.Temperature, "temperature", table.DecimalComma, diagnostics);
             if (t is <= 0.0 or > 10000.0)
             {
                 diagnostics.Add(Diagnostic.Error("bad-temperature", row.LocationOf(columns.Temperature, "temperature"), $"the temperature {t.Value.ToString(CultureInfo.InvariantCulture)} K is impossible here", "give the temperature in kelvin, above 0 and at most 10000 K (298.15 for 25 °C)"));
@@ -396,39 +396,6 @@ public static class NetworkReader
         }
 
         return parsed;
-    }
-
-    private static double? ReadNumber(CsvRow row, int column, string field, bool decimalComma, List<Diagnostic> diagnostics)
-    {
-        string text = row.FieldOrEmpty(column);
-        if (text.Length == 0)
-        {
-            diagnostics.Add(Diagnostic.Error("missing-number", row.LocationOf(column, field), $"the {field} is empty", $"give the {field} as a number such as -74.87"));
-            return null;
-        }
-
-        string normalised = decimalComma ? text.Replace(',', '.') : text;
-        if (normalised.Contains('−', StringComparison.Ordinal))
-        {
-            normalised = normalised.Replace('−', '-');
-        }
-
-        if (!double.TryParse(normalised, NumberStyles.Float, CultureInfo.InvariantCulture, out double number))
-        {
-            string hint = !decimalComma && text.Contains(',', StringComparison.Ordinal)
-                ? "use a decimal point (1.5), not a decimal comma"
-                : "write a plain number such as -74.87 or 1.2e3";
-            diagnostics.Add(Diagnostic.Error("bad-number", row.LocationOf(column, field), $"the {field} '{text}' is not a number", hint));
-            return null;
-        }
-
-        if (!double.IsFinite(number))
-        {
-            diagnostics.Add(Diagnostic.Error("bad-number", row.LocationOf(column, field), $"the {field} '{text}' is not a finite number", "give a finite value; leave the row out if there is none"));
-            return null;
-        }
-
-        return number;
     }
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
