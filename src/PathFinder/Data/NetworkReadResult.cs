@@ -22,14 +22,18 @@ public sealed class NetworkReadResult
     /// <param name="speciesFile">The species declaration file used, if any.</param>
     /// <param name="heatCapacityFile">The heat-capacity file beside the network, if any.</param>
     /// <param name="heatCapacities">Heat-capacity models by species, from <paramref name="heatCapacityFile"/>.</param>
+    /// <param name="sourcesFile">The file of declared source systematics beside the network, if any.</param>
+    /// <param name="sourceSystematics">The declarations read from <paramref name="sourcesFile"/>; none when null.</param>
     public NetworkReadResult(
         ReactionNetwork network,
         IReadOnlyList<Diagnostic> diagnostics,
         IReadOnlyList<string> files,
         string? speciesFile,
         string? heatCapacityFile,
-        IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities)
-        : this(network, diagnostics, () => [], files, speciesFile, heatCapacityFile, heatCapacities)
+        IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities,
+        string? sourcesFile = null,
+        IReadOnlyList<SourceSystematic>? sourceSystematics = null)
+        : this(network, diagnostics, () => [], files, speciesFile, heatCapacityFile, heatCapacities, sourcesFile, sourceSystematics)
     {
     }
 
@@ -41,6 +45,8 @@ public sealed class NetworkReadResult
     /// <param name="speciesFile">The species declaration file used, if any.</param>
     /// <param name="heatCapacityFile">The heat-capacity file beside the network, if any.</param>
     /// <param name="heatCapacities">Heat-capacity models by species.</param>
+    /// <param name="sourcesFile">The file of declared source systematics beside the network, if any.</param>
+    /// <param name="sourceSystematics">The declarations read from <paramref name="sourcesFile"/>; none when null.</param>
     internal NetworkReadResult(
         ReactionNetwork network,
         IReadOnlyList<Diagnostic> rowDiagnostics,
@@ -48,7 +54,9 @@ public sealed class NetworkReadResult
         IReadOnlyList<string> files,
         string? speciesFile,
         string? heatCapacityFile,
-        IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities)
+        IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities,
+        string? sourcesFile = null,
+        IReadOnlyList<SourceSystematic>? sourceSystematics = null)
     {
         ArgumentNullException.ThrowIfNull(network);
         ArgumentNullException.ThrowIfNull(rowDiagnostics);
@@ -58,6 +66,8 @@ public sealed class NetworkReadResult
         SpeciesFile = speciesFile;
         HeatCapacityFile = heatCapacityFile;
         HeatCapacities = heatCapacities;
+        SourcesFile = sourcesFile;
+        SourceSystematics = sourceSystematics ?? [];
         _rowDiagnostics = InFileOrder(rowDiagnostics);
         _diagnostics = new Lazy<IReadOnlyList<Diagnostic>>(() => InFileOrder(rowDiagnostics.Concat(networkWarnings())));
     }
@@ -79,6 +89,13 @@ public sealed class NetworkReadResult
 
     /// <summary>Heat-capacity models by species, from <see cref="HeatCapacityFile"/>.</summary>
     public IReadOnlyDictionary<Species, IHeatCapacity> HeatCapacities { get; }
+
+    /// <summary>The file of declared source systematics beside the network (<c>sources.csv</c>), if any.</summary>
+    public string? SourcesFile { get; }
+
+    /// <summary>The systematic uncertainty declared for each source, from <see cref="SourcesFile"/>, in file order; empty when there is no file.</summary>
+    /// <remarks>Declarations with errors are left out; every source named here is named by rows of the data, before any curation.</remarks>
+    public IReadOnlyList<SourceSystematic> SourceSystematics { get; }
 
     /// <summary>Whether any error was found.</summary>
     public bool HasErrors => _rowDiagnostics.Any(diagnostic => diagnostic.Severity == Severity.Error);

@@ -61,10 +61,16 @@ public static class NetworkReader
         var measurements = new List<Measurement>();
         var firstById = new Dictionary<string, SourceLocation>(StringComparer.Ordinal);
         var equations = new EquationCache();
+        var sources = new HashSet<string>(StringComparer.Ordinal);
         foreach (string file in files)
         {
-            ReadFile(file, catalog, equations, measurements, firstById, diagnostics);
+            ReadFile(file, catalog, equations, measurements, firstById, sources, diagnostics);
         }
+
+        // After the measurements: a declaration must name a source of the data (before any curation exclusion).
+        string sourcesPath = NetworkFiles.Companion(path, NetworkFiles.SourcesFileName);
+        string? sourcesFile = File.Exists(sourcesPath) ? sourcesPath : null;
+        IReadOnlyList<SourceSystematic> systematics = SourceSystematicsReader.Read(sourcesFile, sources, diagnostics);
 
         var network = new ReactionNetwork(name, measurements);
         return new NetworkReadResult(
@@ -79,7 +85,9 @@ public static class NetworkReader
             files,
             speciesFile,
             heatCapacityFile,
-            heatCapacities);
+            heatCapacities,
+            sourcesFile,
+            systematics);
     }
 
     private static readonly IReadOnlyDictionary<Species, IHeatCapacity> NoHeatCapacities = new Dictionary<Species, IHeatCapacity>();
@@ -113,12 +121,20 @@ public static class NetworkReader
     }
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private static void ReadFile(string file, SpeciesCatalog catalog, EquationCache equations, List<Measurement> measurements, Dictionary<string, SourceLocation> firstById, List<Diagnostic> diagnostics)
+    private static void ReadFile(string file, SpeciesCatalog catalog, EquationCache equations, List<Measurement> measurements, Dictionary<string, SourceLocation> firstById, HashSet<string> sources, List<Diagnostic> diagnostics)
     {
         CsvTable? table = CsvTable.Read(file, file, diagnostics);
         if (table is null)
         {
             return;
+        }
+
+        // Every row's source counts, valid or not, so that a bad row or header is not echoed by sources.csv as an unknown source.
+        string defaultSource = Path.GetFileNameWithoutExtension(file);
+        int sourceColumn = table.IndexOf("source");
+        foreach (CsvRow row in table.Rows)
+        {
+            sources.Add(SourceOf(row, sourceColumn, defaultSource));
         }
 
         var columns = RequiredColumns.Concat(OptionalColumns).ToDictionary(column => column, table.IndexOf, StringComparer.Ordinal);
@@ -137,7 +153,6 @@ public static class NetworkReader
             diagnostics.Add(CsvNumber.DecimalCommaWarning(table));
         }
 
-        string defaultSource = Path.GetFileNameWithoutExtension(file);
         var map = new ColumnMap(columns, table.Header.Count);
         PreparseEquations(table, map, catalog, equations);
         foreach (CsvRow row in table.Rows)
@@ -248,11 +263,7 @@ public static class NetworkReader
             }
         }
 
-        string source = columns.Source >= 0 ? row.FieldOrEmpty(columns.Source) : "";
-        if (source.Length == 0)
-        {
-            source = defaultSource;
-        }
+        string source = SourceOf(row, columns.Source, defaultSource);
 
         if (diagnostics.Count > before || equation is null || value is null || uncertainty is null || id.Length == 0)
         {
@@ -283,6 +294,13 @@ public static class NetworkReader
             Location = row.LocationOf(columns.Equation, "equation"),
             Notes = notes ?? NoNotes,
         };
+    }
+
+    /// <summary>The row's source: its <c>source</c> field, or the file's default when the column is absent or the field blank.</summary>
+    private static string SourceOf(CsvRow row, int column, string defaultSource)
+    {
+        string source = column >= 0 ? row.FieldOrEmpty(column) : "";
+        return source.Length == 0 ? defaultSource : source;
     }
 
     /// <summary>Parses and balance-checks every distinct equation text of a file on all cores, ahead of the row loop.</summary>
