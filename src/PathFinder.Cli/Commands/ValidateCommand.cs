@@ -42,6 +42,13 @@ public sealed class ValidateCommand
                 speciesFile = result.SpeciesFile,
                 heatCapacityFile = result.HeatCapacityFile,
                 heatCapacitySpecies = result.HeatCapacities.Keys.Select(species => species.Name),
+                sourcesFile = result.SourcesFile,
+                sourceSystematics = result.SourceSystematics.Select(declared => new
+                {
+                    source = declared.Source,
+                    systematic = declared.Systematic,
+                    unit = declared.IsEnergy ? EnergyUnit.KilojoulePerMole.Symbol : EnergyUnit.JoulePerMoleKelvin.Symbol,
+                }),
                 summary = new
                 {
                     measurements = summary.MeasurementCount,
@@ -68,6 +75,11 @@ public sealed class ValidateCommand
         if (result.HeatCapacityFile is not null)
         {
             output.WriteLine($"  heat capacity  {result.HeatCapacityFile} ({result.HeatCapacities.Count} species)");
+        }
+
+        if (result.SourcesFile is not null)
+        {
+            output.WriteLine($"  systematics    {result.SourcesFile} ({result.SourceSystematics.Count} source(s) declared)");
         }
 
         output.WriteLine($"  species        {summary.SpeciesCount}");

@@ -104,6 +104,56 @@ public sealed class ValidateCommandTests : IDisposable
     }
 
     [Fact]
+    public void Validate_SaysHowManySourcesDeclareASystematic()
+    {
+        // Given a folder network with two sources declared in sources.csv, one in kcal/mol
+        string sources = WriteSourcesNetwork("source,systematic,unit,note\ngroup A,0.3,kJ/mol,bomb calibration\ngroup B,0.5,kcal/mol,\n");
+
+        // When validated as text and as JSON
+        CliRun text = CliRun.Of("validate", _folder.Path);
+        CliRun json = CliRun.Of("validate", _folder.Path, "--json");
+
+        // Then the text names the file and the count, and the JSON lists each source in kJ/mol
+        Assert.Equal(0, text.ExitCode);
+        Assert.Contains($"  systematics    {sources} (2 source(s) declared)", text.Out, StringComparison.Ordinal);
+        Assert.Contains("Result: valid", text.Out, StringComparison.Ordinal);
+        Assert.Equal(0, json.ExitCode);
+        using JsonDocument document = JsonDocument.Parse(json.Out);
+        JsonElement root = document.RootElement;
+        Assert.Equal(sources, root.GetProperty("sourcesFile").GetString());
+        JsonElement[] declared = [.. root.GetProperty("sourceSystematics").EnumerateArray()];
+        Assert.Equal(["group A", "group B"], declared.Select(item => item.GetProperty("source").GetString()));
+        Assert.Equal(2.092, declared[1].GetProperty("systematic").GetDouble(), 1e-12);
+        Assert.Equal(["kJ/mol", "kJ/mol"], declared.Select(item => item.GetProperty("unit").GetString()));
+    }
+
+    [Fact]
+    public void Validate_WithoutSourcesFileHasAnEmptyList()
+    {
+        CliRun run = CliRun.Of("validate", RepoPaths.Demo("combustion-lab"), "--json");
+
+        using JsonDocument document = JsonDocument.Parse(run.Out);
+        Assert.Equal(JsonValueKind.Null, document.RootElement.GetProperty("sourcesFile").ValueKind);
+        Assert.Equal(0, document.RootElement.GetProperty("sourceSystematics").GetArrayLength());
+        Assert.DoesNotContain("systematics", CliRun.Of("validate", RepoPaths.Demo("combustion-lab")).Out, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Validate_BadSourcesFileExitsTwoWithLocatedErrors()
+    {
+        string sources = WriteSourcesNetwork("source,systematic,unit\nGroup A,0.3,kJ/mol\ngroup B,0.5,1\n");
+
+        CliRun run = CliRun.Of("validate", _folder.Path);
+
+        Assert.Equal(2, run.ExitCode);
+        Assert.Contains($"{sources}:2:1: error unknown-source: no measurement has the source 'Group A' Fix: did you mean 'group A'? Source names are case-sensitive", run.Out, StringComparison.Ordinal);
+        Assert.Contains($"{sources}:3:13: error wrong-unit: a systematic cannot be a pure number (unit 1)", run.Out, StringComparison.Ordinal);
+        Assert.Contains($"  systematics    {sources} (0 source(s) declared)", run.Out, StringComparison.Ordinal);
+        Assert.Contains("Result: INVALID", run.Out, StringComparison.Ordinal);
+        Assert.DoesNotContain("   at ", run.Out + run.Error, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Validate_WarningsAloneStillExitZero()
     {
         string file = _folder.Write("lab.csv", "id,equation,property,value,uncertainty\nm1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2\n");
@@ -138,5 +188,15 @@ public sealed class ValidateCommandTests : IDisposable
         Assert.Equal(2, run.ExitCode);
         using JsonDocument document = JsonDocument.Parse(run.Out);
         Assert.Equal("binary-file", document.RootElement.GetProperty("diagnostics")[0].GetProperty("code").GetString());
+    }
+
+    /// <summary>Writes a small valid network (sources group A and group B) and <paramref name="sources"/> as its sources.csv.</summary>
+    private string WriteSourcesNetwork(string sources)
+    {
+        _folder.Write("lab.csv", "id,equation,property,value,uncertainty,unit,temperature,source\n"
+            + "m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2,kJ/mol,,group A\n"
+            + "m2,CO2(g),dH,-393.51,0.13,kJ/mol,,group B\n"
+            + "m3,CO(g),dH,-110.53,0.17,kJ/mol,,group A\n");
+        return _folder.Write("sources.csv", sources);
     }
 }
