@@ -195,7 +195,11 @@ public static class SourceSystematicsReader
     }
 
     /// <summary>The data source closest to <paramref name="source"/> ignoring case, when it is a likely misspelling.</summary>
-    /// <remarks>A case-insensitive match wins; otherwise the smallest edit distance up to a third of the name's length (at least 1, at most 3).</remarks>
+    /// <remarks>
+    /// A case-insensitive match wins; otherwise the one source at the smallest edit distance, up to about a third of the
+    /// name's length (at least 1, at most 3). Several sources at that distance (<c>group-e</c> against <c>group-a</c> …
+    /// <c>group-d</c>) are no suggestion: naming one of them would be a guess.
+    /// </remarks>
     private static string? NearSpelling(string source, IReadOnlyList<string> sorted)
     {
         string? caseOnly = sorted.FirstOrDefault(name => name.Equals(source, StringComparison.OrdinalIgnoreCase));
@@ -204,9 +208,10 @@ public static class SourceSystematicsReader
             return caseOnly;
         }
 
-        int limit = Math.Clamp(source.Length / 3, 1, 3);
+        int limit = Math.Clamp((source.Length + 1) / 3, 1, 3);
         string? best = null;
         int bestDistance = limit + 1;
+        bool tied = false;
         string lower = source.ToLowerInvariant();
         foreach (string name in sorted)
         {
@@ -215,10 +220,15 @@ public static class SourceSystematicsReader
             {
                 best = name;
                 bestDistance = distance;
+                tied = false;
+            }
+            else if (distance == bestDistance)
+            {
+                tied = true;
             }
         }
 
-        return best;
+        return tied ? null : best;
     }
 
     /// <summary>The Levenshtein distance: the fewest insertions, deletions and substitutions turning one text into the other.</summary>

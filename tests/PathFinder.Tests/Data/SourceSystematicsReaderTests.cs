@@ -174,6 +174,8 @@ public sealed class SourceSystematicsReaderTests : IDisposable
     [Theory]
     [InlineData("Group A", "did you mean 'group A'? Source names are case-sensitive; the data's sources are 'group A', 'group B', 'group C'")]
     [InlineData("grop A", "did you mean 'group A'? Source names must match the data exactly; the data's sources are 'group A', 'group B', 'group C'")]
+    [InlineData("gruop C", "did you mean 'group C'? Source names must match the data exactly; the data's sources are 'group A', 'group B', 'group C'")]
+    [InlineData("group D", "write the source exactly as the data does; the data's sources are 'group A', 'group B', 'group C'")]
     [InlineData("Harbour Quay", "write the source exactly as the data does; the data's sources are 'group A', 'group B', 'group C'")]
     public void Read_UnknownSourceSuggestsANearSpellingAndListsTheSources(string source, string hint)
     {
