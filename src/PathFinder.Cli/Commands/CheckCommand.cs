@@ -52,7 +52,7 @@ public sealed class CheckCommand
         }
 
         var options = new ConsistencyOptions { Threshold = threshold, InflationFactor = inflation, MaxCycleSize = maxCycle };
-        ConsistencyReport report = ConsistencyCheck.Run(session.Network, session.HeatCapacities, options);
+        ConsistencyReport report = ConsistencyCheck.Run(session.Network, session.HeatCapacities, options, session.Systematics);
         if (json)
         {
             CheckOutput.WriteJson(context.Out, report);

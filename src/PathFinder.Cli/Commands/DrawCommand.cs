@@ -85,10 +85,10 @@ public sealed class DrawCommand
         PropertyModel model = session.Model(family);
 
         // Cycles are numbered as 'check' lists them, which needs the whole consistency analysis; other foci need only the suspects.
-        FamilyConsistency? consistency = request.Cycle is null ? null : ConsistencyCheck.Analyse(model);
+        ModelConsistency? consistency = request.Cycle is null ? null : ConsistencyCheck.Run(session.Network, session.HeatCapacities, systematics: session.Systematics).Analysis;
         IEnumerable<string> suspects = consistency is not null
             ? consistency.Suspects.Select(suspect => suspect.Measurement.Id)
-            : NetworkSolver.Solve(model).Suspects.Select(suspect => model.Measurements[suspect.ObservationIndex].Id);
+            : session.Solutions(adjust: true).Report(family)?.SuspectIds ?? [];
         var marks = new FigureMarks(suspects.ToHashSet(StringComparer.Ordinal), new HashSet<string>(StringComparer.Ordinal));
         SvgDiagram? diagram;
         if (request.Target is not null)
@@ -126,9 +126,14 @@ public sealed class DrawCommand
             }
 
             CycleCheck cycle = consistency.Cycles[number - 1];
+            if (request.Kind == "closure" && cycle.IsMixed)
+            {
+                return NothingToDraw(context, $"cycle {number} ties ΔG, ΔH and entropy data through G = H − TS, which has no level diagram: draw it with --kind network");
+            }
+
             diagram = request.Kind == "closure"
-                ? LevelDiagramRenderer.RenderCycle(FigureBuilder.CycleLevels(cycle, family)).Diagram
-                : RenderNetwork(FigureBuilder.CycleNetwork(cycle, family, marks), request.MaxNodes, context);
+                ? LevelDiagramRenderer.RenderCycle(FigureBuilder.CycleLevels(cycle)).Diagram
+                : RenderNetwork(FigureBuilder.CycleNetwork(cycle, marks), request.MaxNodes, context);
         }
         else
         {

@@ -81,10 +81,10 @@ public sealed class PlanCommand
         ChemicalEquation target = OptionParsing.Target(targetText, session.Network);
         ChemicalEquation[] candidates = settings.Candidates.Select(text => Candidate(text, session.Network)).ToArray();
         PropertyFamily family = PropertyFamilies.FamilyOf(property);
-        SolveReport? report = new NetworkSolutions(session.Network, session.HeatCapacities, settings.Adjust).Report(family);
+        SolveReport? report = session.Solutions(settings.Adjust).Report(family);
         if (report is null)
         {
-            context.Error.WriteLine($"not determined: the network has no {family.ResultProperty().Code()} data");
+            context.Error.WriteLine($"not determined: the network has no data that bear on {family.ResultProperty().Code()}");
             return ExitCodes.AnalysisProblem;
         }
 

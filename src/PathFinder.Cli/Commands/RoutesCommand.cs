@@ -67,13 +67,12 @@ public sealed class RoutesCommand
         ChemicalEquation target = OptionParsing.Target(targetText, session.Network);
         PropertyFamily family = PropertyFamilies.FamilyOf(property);
 
-        // One set of solutions serves the estimate beside the routes and the values at another temperature.
-        var solutions = new NetworkSolutions(session.Network, session.HeatCapacities, adjust: !noAdjust);
-        SolveReport? solved = solutions.Report(family);
-        PropertyModel model = solved?.Model ?? session.Model(family);
-        RouteReport report = RouteAnalysis.Find(model, target, new RouteSearchOptions { MaxSteps = maxSteps, MaxRoutes = top, TimeBudget = TimeSpan.FromSeconds(timeBudget) }, solved?.Solution);
+        // One joint solution serves the estimate beside the routes and the values at another temperature.
+        NetworkSolutions solutions = session.Solutions(adjust: !noAdjust);
+        PropertyModel model = session.Model(family);
+        RouteReport report = RouteAnalysis.Find(model, target, new RouteSearchOptions { MaxSteps = maxSteps, MaxRoutes = top, TimeBudget = TimeSpan.FromSeconds(timeBudget) }, solutions.DerivedEstimate(family, target));
         TargetConditions? atTemperature = temperature is { } kelvin ? TargetConditions.Evaluate(solutions, target, kelvin) : null;
-        var suspects = (solved?.Suspects ?? []).Select(suspect => model.Measurements[suspect.ObservationIndex].Id).ToHashSet(StringComparer.Ordinal);
+        var suspects = (solutions.Report(family)?.SuspectIds ?? []).ToHashSet(StringComparer.Ordinal);
         RouteOutput.Write(context.Out, report, model, property, explain, atTemperature, json, suspects);
         if (report.Routes.Count == 0)
         {

@@ -55,15 +55,15 @@ public sealed class SolveCommand
         }
 
         PropertyFamily family = PropertyFamilies.FamilyOf(property);
-        var solutions = new NetworkSolutions(session.Network, session.HeatCapacities, adjust: !noAdjust, new ConsistencyOptions { Threshold = threshold });
+        NetworkSolutions solutions = session.Solutions(adjust: !noAdjust, new ConsistencyOptions { Threshold = threshold });
         SolveReport report = solutions.Report(family)
-            ?? throw new UserInputException($"the network has no {family.ResultProperty().Code()} data to solve");
+            ?? throw new UserInputException(family switch
+            {
+                PropertyFamily.Enthalpy => "the network has no ΔH, ΔU, ΔG or K data: no ΔfH° to solve",
+                PropertyFamily.Entropy => "the network has no S°, ΔS, ΔG or K data: no S° to solve",
+                _ => "ΔfG° needs both ΔfH° and S°: the network has no data for one of them (give ΔG, K, or S° data beside ΔH)",
+            });
         TemperatureTable? atTemperature = temperature is { } kelvin ? TemperatureTable.Evaluate(solutions, family, kelvin) : null;
-        if (temperature is not null && atTemperature is null)
-        {
-            context.Error.WriteLine("note: ΔfG° at another temperature needs ΔH data; none given");
-        }
-
         SolveOutput.Write(context.Out, report, format, atTemperature);
         return ExitCodes.Success;
     }

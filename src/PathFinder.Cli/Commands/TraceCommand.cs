@@ -50,11 +50,11 @@ public sealed class TraceCommand
 
         ChemicalEquation target = OptionParsing.Target(targetText, session.Network);
         PropertyFamily family = PropertyFamilies.FamilyOf(property);
-        var solutions = new NetworkSolutions(session.Network, session.HeatCapacities, adjust: !noAdjust);
+        NetworkSolutions solutions = session.Solutions(adjust: !noAdjust);
         SolveReport? report = solutions.Report(family);
         if (report is null)
         {
-            context.Error.WriteLine($"not determined: the network has no {family.ResultProperty().Code()} data");
+            context.Error.WriteLine($"not determined: the network has no data that bear on {family.ResultProperty().Code()}");
             return ExitCodes.AnalysisProblem;
         }
 

@@ -51,8 +51,16 @@ public sealed record AnalysisSession(NetworkReadResult Read, ReactionNetwork Net
         return new AnalysisSession(read, applied.Network, applied.Excluded);
     }
 
-    /// <summary>The model of one family.</summary>
+    /// <summary>The route-search model of one family.</summary>
     public PropertyModel Model(PropertyFamily family) => PropertyModel.Build(Network, family, Read.HeatCapacities);
+
+    /// <summary>Declared systematic uncertainties of sources (<c>sources.csv</c>).</summary>
+    public IReadOnlyList<SourceSystematic> Systematics => Read.SourceSystematics;
+
+    /// <summary>The joint model and solution of the network (solved on first use).</summary>
+    /// <param name="adjust">Whether the suspect procedure runs before results are reported.</param>
+    /// <param name="options">Its settings.</param>
+    public NetworkSolutions Solutions(bool adjust, ConsistencyOptions? options = null) => new(Network, HeatCapacities, adjust, options, Systematics);
 
     /// <summary>Heat capacities by species.</summary>
     public IReadOnlyDictionary<Species, IHeatCapacity> HeatCapacities => Read.HeatCapacities;

@@ -13,71 +13,53 @@ public static class CheckOutput
     public static void WriteJson(TextWriter output, ConsistencyReport report)
     {
         ArgumentNullException.ThrowIfNull(report);
-        FamilyConsistency[] families = report.Families.ToArray();
+        ModelConsistency? analysis = report.Analysis;
         Json.Write(output, new
         {
             consistent = report.Consistent,
             threshold = report.Options.Threshold,
-            suspects = families.SelectMany(family => family.Suspects.Select(suspect => new
+            offsetSources = analysis?.OffsetSources.Select(source => source.Source) ?? [],
+            suspects = analysis?.Suspects.Select(Suspect) ?? [],
+            cycles = analysis?.Cycles.Select(cycle => new
             {
-                id = suspect.Measurement.Id,
-                property = suspect.Measurement.Measurement.Property.ToString(),
-                normalizedResidual = suspect.NormalizedResidual,
-                measured = suspect.Measured,
-                predicted = suspect.Predicted,
-                predictedUncertainty = suspect.PredictedUncertainty,
-                uncertainty = suspect.Measurement.Uncertainty,
-                inflation = suspect.Inflation,
-                unit = family.Model.Unit.Symbol,
-                source = suspect.Measurement.Source,
-                equation = suspect.Measurement.Equation.ToString(),
-            })),
-            cycles = families.SelectMany(family => family.Cycles.Select(cycle => new
-            {
-                family = family.Family.ToString(),
+                number = cycle.Number,
                 residual = cycle.Residual,
                 uncertainty = cycle.Uncertainty,
+                unit = cycle.Unit,
                 z = Json.Number(cycle.Z),
                 flagged = cycle.Flagged,
-                members = cycle.Members.Select(member => new { id = member.Measurement.Id, factor = RationalText.Format(member.Factor) }),
-            })),
-            sources = families.SelectMany(family => family.Sources.Select(source => new
+                mixed = cycle.IsMixed,
+                members = cycle.Members.Select(member => new { id = member.Measurement.Id, property = member.Measurement.Measurement.Property.Code(), factor = RationalText.Format(member.Factor) }),
+            }) ?? [],
+            sources = analysis?.Sources.Select(Source) ?? [],
+            model = analysis is null ? null : new
             {
-                family = family.Family.ToString(),
-                name = source.Source,
-                measurements = source.Measurements,
-                checkable = source.Checkable,
-                meanNormalizedResidual = Json.Number(source.MeanNormalizedResidual),
-                spreadNormalizedResidual = Json.Number(source.SpreadNormalizedResidual),
-                offsetZ = Json.Number(source.OffsetZ),
-                suspects = source.Suspects,
-                systematicOffset = source.SystematicOffset,
-            })),
-            families = families.Select(family => new
-            {
-                family = family.Family.ToString(),
-                unit = family.Model.Unit.Symbol,
-                measurements = family.Model.Measurements.Count,
-                unknowns = family.Model.Unknowns.Count,
-                rank = family.AsGiven.Rank,
-                independentCycles = family.IndependentCycles,
-                cyclesFound = family.CyclesFound,
-                cyclesComplete = family.CyclesComplete,
-                cycleSearchCut = CutNames(family.CycleCut),
-                chiSquared = family.AsGiven.ChiSquared,
-                degreesOfFreedom = family.AsGiven.DegreesOfFreedom,
-                birgeRatio = Json.Number(family.AsGiven.BirgeRatio),
-                birgeRatioAdjusted = Json.Number(family.Adjusted.BirgeRatio),
-                adjustments = family.Adjustments.Select(adjustment => new
+                measurements = analysis.Model.Measurements.Count,
+                byProperty = analysis.Model.Measurements.GroupBy(item => item.Measurement.Property).OrderBy(group => group.Key).ToDictionary(group => group.Key.Code(), group => group.Count()),
+                formationEnthalpies = analysis.Model.Unknowns.Count(unknown => unknown.Kind == UnknownKind.FormationEnthalpy),
+                entropies = analysis.Model.Unknowns.Count(unknown => unknown.Kind == UnknownKind.Entropy),
+                sourceOffsets = analysis.Model.Unknowns.Count(unknown => unknown.Kind == UnknownKind.SourceOffset),
+                rank = analysis.AsGiven.Rank,
+                independentCycles = analysis.IndependentCycles,
+                cyclesFound = analysis.CyclesFound,
+                cyclesComplete = analysis.CyclesComplete,
+                cycleSearchCut = CutNames(analysis.CycleCut),
+                chiSquared = analysis.AsGiven.ChiSquared,
+                degreesOfFreedom = analysis.AsGiven.DegreesOfFreedom,
+                birgeRatio = Json.Number(analysis.AsGiven.BirgeRatio),
+                birgeRatioAdjusted = Json.Number(analysis.Adjusted.BirgeRatio),
+                adjustments = analysis.Adjustments.Select(adjustment => new
                 {
-                    id = family.Model.Measurements[adjustment.ObservationIndex].Id,
+                    id = analysis.Model.IsPrior(adjustment.ObservationIndex) ? "offset(" + analysis.Model.Systematics[adjustment.ObservationIndex - analysis.Model.Measurements.Count].Source + ")" : analysis.Model.Measurements[adjustment.ObservationIndex].Id,
                     normalizedResidualBefore = adjustment.NormalizedResidualBefore,
                     oldUncertainty = adjustment.OldUncertainty,
                     newUncertainty = adjustment.NewUncertainty,
                 }),
-                measurementChecks = family.Measurements.Select(check => new
+                measurementChecks = analysis.Measurements.Select(check => new
                 {
                     id = check.Measurement.Id,
+                    property = check.Measurement.Measurement.Property.Code(),
+                    unit = check.Measurement.Unit.Symbol,
                     measured = check.Measurement.Value,
                     uncertainty = check.Measurement.Uncertainty,
                     fitted = check.Fitted,
@@ -87,21 +69,74 @@ public static class CheckOutput
                     predictedUncertainty = check.PredictedUncertainty,
                     status = check.Status,
                 }),
-            }),
-            crossChecks = report.CrossChecks.Select(check => new
-            {
-                reaction = check.Reaction.ToString(),
-                enthalpy = check.Enthalpy.Id,
-                entropy = check.Entropy.Id,
-                gibbs = check.Gibbs.Id,
-                temperature = check.Temperature,
-                residual = check.Residual,
-                uncertainty = check.Uncertainty,
-                z = Json.Number(check.Z),
-                flagged = check.Flagged,
-            }),
+            },
             caution = Text.Caution,
         });
+    }
+
+    /// <summary>A suspect as JSON; <c>likelyCause</c> only when a slip explains it.</summary>
+    private static Dictionary<string, object?> Suspect(SuspectReport suspect)
+    {
+        var json = new Dictionary<string, object?>
+        {
+            ["id"] = suspect.Measurement.Id,
+            ["property"] = suspect.Measurement.Measurement.Property.Code(),
+            ["normalizedResidual"] = suspect.NormalizedResidual,
+            ["measured"] = suspect.Measured,
+            ["predicted"] = suspect.Predicted,
+            ["predictedUncertainty"] = suspect.PredictedUncertainty,
+            ["uncertainty"] = suspect.Measurement.Uncertainty,
+            ["inflation"] = suspect.Inflation,
+            ["unit"] = suspect.Measurement.Unit.Symbol,
+            ["source"] = suspect.Measurement.Source,
+            ["equation"] = suspect.Measurement.Equation.ToString(),
+        };
+        if (suspect.LikelyCause is { } cause)
+        {
+            json["likelyCause"] = new { kind = cause.Kind.Code(), explainedValue = cause.ExplainedValue, detail = cause.Detail };
+        }
+
+        return json;
+    }
+
+    /// <summary>A source as JSON; <c>offset</c> and <c>offsetUncertainty</c> (kJ/mol, positive when it reads high) where an energy systematic is declared.</summary>
+    private static Dictionary<string, object?> Source(SourceCheck source)
+    {
+        var json = new Dictionary<string, object?>
+        {
+            ["name"] = source.Source,
+            ["measurements"] = source.Measurements,
+            ["checkable"] = source.Checkable,
+            ["meanNormalizedResidual"] = Json.Number(source.MeanNormalizedResidual),
+            ["spreadNormalizedResidual"] = Json.Number(source.SpreadNormalizedResidual),
+            ["offsetZ"] = Json.Number(source.OffsetZ),
+            ["suspects"] = source.Suspects,
+            ["systematicOffset"] = source.SystematicOffset,
+            ["inferredOffset"] = source.HasInferredOffset,
+        };
+        if (source.Offsets.FirstOrDefault(offset => !offset.IsInferred && offset.IsEnergy) is { } declared)
+        {
+            json["offset"] = declared.Value;
+            json["offsetUncertainty"] = declared.Uncertainty;
+        }
+
+        if (source.Offsets.Count > 0)
+        {
+            json["offsets"] = source.Offsets.Select(offset => new
+            {
+                unit = offset.Unit,
+                value = offset.Value,
+                uncertainty = offset.Uncertainty,
+                z = Json.Number(offset.Z),
+                declared = offset.Declared,
+                inferred = offset.IsInferred,
+                chiSquaredDrop = offset.IsInferred ? offset.ChiSquaredDrop : (double?)null,
+                bestSingleChiSquaredDrop = offset.IsInferred ? offset.BestSingleChiSquaredDrop : (double?)null,
+                rows = offset.Rows,
+            }).ToArray();
+        }
+
+        return json;
     }
 
     /// <summary>Writes the report as text.</summary>
@@ -109,76 +144,100 @@ public static class CheckOutput
     {
         ArgumentNullException.ThrowIfNull(output);
         ArgumentNullException.ThrowIfNull(report);
-        foreach (FamilyConsistency family in report.Families)
+        if (report.Analysis is { } analysis)
         {
-            string unit = family.Model.Unit.Symbol;
-            string symbol = family.Family.ResultProperty().Symbol();
-            output.WriteLine($"== {family.Family} ({symbol}, {unit}): {family.Model.Measurements.Count} measurements, {family.Model.Unknowns.Count} species, rank {family.AsGiven.Rank}, {family.IndependentCycles} independent cycles");
-            output.WriteLine($"   χ² = {Text.Number(family.AsGiven.ChiSquared)} with {family.AsGiven.DegreesOfFreedom} degrees of freedom; Birge ratio {Text.Number(family.AsGiven.BirgeRatio)} as given, {Text.Number(family.Adjusted.BirgeRatio)} after adjustment");
-            int flagged = family.FlaggedCycles.Count();
-            string completeness = Completeness(family.CycleCut, report.Options);
-            // Only the worst MaxCycles are kept, so on a large network the count of failures is of those.
-            string failures = family.Cycles.Count < family.CyclesFound
-                ? $"{flagged} of the {family.Cycles.Count} worst kept fail to close"
-                : $"{flagged} fail to close";
-            output.WriteLine($"   Cycles: {family.CyclesFound} minimal ({completeness}); {failures} (|z| > {Text.Number(report.Options.Threshold, 1)})");
-            foreach (CycleCheck cycle in family.Cycles.Take(showCycles))
-            {
-                string members = string.Join(" ", cycle.Members.Select(member => member.Factor == Fractions.Fraction.One ? member.Measurement.Id : $"{member.Measurement.Id}({RationalText.Format(member.Factor)})"));
-                string mark = cycle.Flagged ? "FAILS " : "closes";
-                output.WriteLine($"     {mark} z = {Text.Signed(cycle.Z),7}  residual {Text.Signed(cycle.Residual)} ± {Text.Number(cycle.Uncertainty)}  {members}");
-            }
-
-            output.WriteLine();
-            if (family.Suspects.Count == 0)
-            {
-                output.WriteLine("   Suspects: none. The measurements agree with each other within their uncertainties.");
-            }
-            else
-            {
-                output.WriteLine($"   Suspects ({family.Suspects.Count}, most serious first):");
-                foreach (SuspectReport suspect in family.Suspects)
-                {
-                    string predicted = suspect.Predicted is { } p
-                        ? $"the rest says {Text.Number(p)} ± {Text.Number(suspect.PredictedUncertainty ?? double.NaN)}"
-                        : "nothing else checks it";
-                    output.WriteLine($"     {suspect.Measurement.Id,-6} z = {Text.Signed(suspect.NormalizedResidual),7}  measured {Text.Number(suspect.Measured)} ± {Text.Number(suspect.Measurement.Uncertainty)}; {predicted} {unit}   [{suspect.Measurement.Source}]");
-                    output.WriteLine($"            {suspect.Measurement.Equation}");
-                }
-            }
-
-            if (family.Adjustments.Count > 0)
-            {
-                output.WriteLine($"   Adjustments made by the procedure: {family.Adjustments.Count} (each enlarges one uncertainty; see --json for all)");
-            }
-
-            output.WriteLine();
-            output.WriteLine("   Sources              n  checked   mean z   spread   offset z  suspects   (z: measured vs the rest, suspects left out)");
-            foreach (SourceCheck source in family.Sources)
-            {
-                string flag = source.SystematicOffset ? "  SYSTEMATIC OFFSET" : "";
-                output.WriteLine($"     {Text.Fit(source.Source, 18)} {source.Measurements,3}  {source.Checkable,7}  {Text.Signed(source.MeanNormalizedResidual),7}  {Text.Number(source.SpreadNormalizedResidual),7}  {Text.Signed(source.OffsetZ),8}  {source.Suspects,8}{flag}");
-            }
-
-            output.WriteLine();
+            WriteAnalysis(output, analysis, report.Options, showCycles);
         }
-
-        if (report.CrossChecks.Count > 0)
+        else
         {
-            output.WriteLine("== ΔG = ΔH − T·ΔS checks");
-            foreach (CrossPropertyCheck check in report.CrossChecks)
-            {
-                string mark = check.Flagged ? "FAILS " : "agrees";
-                output.WriteLine($"   {mark} z = {Text.Signed(check.Z)}  ΔG − (ΔH − TΔS) = {Text.Signed(check.Residual)} ± {Text.Number(check.Uncertainty)} kJ/mol at {Text.Number(check.Temperature)} K  ({check.Enthalpy.Id}, {check.Entropy.Id}, {check.Gibbs.Id}) {check.Reaction}");
-            }
-
-            output.WriteLine();
+            output.WriteLine("No usable measurement: nothing to check.");
         }
 
         output.WriteLine(report.Consistent
             ? "Result: consistent."
-            : "Result: INCONSISTENT (exit code 1). Review the suspects before using derived values.");
+            : "Result: INCONSISTENT (exit code 1). Review the sources and suspects before using derived values.");
         output.WriteLine(Text.Caution);
+    }
+
+    private static void WriteAnalysis(TextWriter output, ModelConsistency analysis, ConsistencyOptions options, int showCycles)
+    {
+        ThermoModel model = analysis.Model;
+        string data = string.Join(", ", model.Measurements.GroupBy(item => item.Measurement.Property).OrderBy(group => group.Key).Select(group => $"{group.Count()} {group.Key.Code()}"));
+        int enthalpies = model.Unknowns.Count(unknown => unknown.Kind == UnknownKind.FormationEnthalpy);
+        int entropies = model.Unknowns.Count(unknown => unknown.Kind == UnknownKind.Entropy);
+        int offsets = model.Unknowns.Count(unknown => unknown.Kind == UnknownKind.SourceOffset);
+        string unknowns = $"{enthalpies} ΔfH°, {entropies} S°" + (offsets > 0 ? $", {offsets} source offset{(offsets == 1 ? "" : "s")}" : "");
+        output.WriteLine($"== Joint model: {model.Measurements.Count} measurements ({data}); unknowns {unknowns}; rank {analysis.AsGiven.Rank}, {analysis.IndependentCycles} independent cycles");
+        output.WriteLine($"   χ² = {Text.Number(analysis.AsGiven.ChiSquared)} with {analysis.AsGiven.DegreesOfFreedom} degrees of freedom; Birge ratio {Text.Number(analysis.AsGiven.BirgeRatio)} as given, {Text.Number(analysis.Adjusted.BirgeRatio)} after adjustment");
+        int flagged = analysis.FlaggedCycles.Count();
+        string completeness = Completeness(analysis.CycleCut, options);
+        // Only the worst MaxCycles are kept, so on a large network the count of failures is of those.
+        string failures = analysis.Cycles.Count < analysis.CyclesFound
+            ? $"{flagged} of the {analysis.Cycles.Count} worst kept fail to close"
+            : $"{flagged} fail to close";
+        output.WriteLine($"   Cycles: {analysis.CyclesFound} minimal ({completeness}); {failures} (|z| > {Text.Number(options.Threshold, 1)})");
+        foreach (CycleCheck cycle in analysis.Cycles.Take(showCycles))
+        {
+            string members = string.Join(" ", cycle.Members.Select(member => member.Factor == Fractions.Fraction.One ? member.Measurement.Id : $"{member.Measurement.Id}({RationalText.Format(member.Factor)})"));
+            string mark = cycle.Flagged ? "FAILS " : "closes";
+            string kinds = cycle.IsMixed ? $"  [{string.Join(" ", cycle.Members.Select(member => member.Measurement.Measurement.Property.Code()).Distinct())}: G = H − TS]" : "";
+            output.WriteLine($"     {mark} z = {Text.Signed(cycle.Z),7}  residual {Text.Signed(cycle.Residual)} ± {Text.Number(cycle.Uncertainty)} {cycle.Unit}  {members}{kinds}");
+        }
+
+        output.WriteLine();
+        foreach (SourceCheck source in analysis.OffsetSources)
+        {
+            foreach (SourceOffset offset in source.Offsets.Where(offset => offset.IsInferred))
+            {
+                string direction = offset.Value >= 0 ? "high" : "low";
+                output.WriteLine($"   Source {source.Source} reads {direction}: common offset {Text.Signed(offset.Value)} ± {Text.Number(offset.Uncertainty)} {offset.Unit} on all {offset.Rows.Count} of its {(offset.IsEnergy ? "energy" : "entropy")} rows");
+                output.WriteLine($"            it explains them better (χ² falls by {Text.Number(offset.ChiSquaredDrop, 1)}) than any single suspect would ({Text.Number(offset.BestSingleChiSquaredDrop, 1)}); fitted as an unknown before looking for suspects");
+                output.WriteLine($"            rows: {string.Join(" ", offset.Rows)}");
+            }
+        }
+
+        foreach ((SourceCheck source, SourceOffset offset) in analysis.DeclaredOffsets)
+        {
+            string beyond = Math.Abs(offset.Z) > options.Threshold ? "  BEYOND ITS DECLARED SYSTEMATIC" : "";
+            output.WriteLine($"   Source {source.Source} (declared systematic ± {Text.Number(offset.Declared ?? double.NaN)} {offset.Unit}): fitted offset {Text.Signed(offset.Value)} ± {Text.Number(offset.Uncertainty)} {offset.Unit}, z = {Text.Signed(offset.Z)}{beyond}");
+        }
+
+        if (analysis.Suspects.Count == 0)
+        {
+            output.WriteLine("   Suspects: none. The measurements agree with each other within their uncertainties.");
+        }
+        else
+        {
+            output.WriteLine($"   Suspects ({analysis.Suspects.Count}, most serious first):");
+            foreach (SuspectReport suspect in analysis.Suspects)
+            {
+                string unit = suspect.Measurement.Unit.Symbol;
+                string predicted = suspect.Predicted is { } p
+                    ? $"the rest says {Text.Number(p)} ± {Text.Number(suspect.PredictedUncertainty ?? double.NaN)}"
+                    : "nothing else checks it";
+                output.WriteLine($"     {suspect.Measurement.Id,-6} z = {Text.Signed(suspect.NormalizedResidual),7}  {suspect.Measurement.Symbol} measured {Text.Number(suspect.Measured)} ± {Text.Number(suspect.Measurement.Uncertainty)}; {predicted} {unit}   [{suspect.Measurement.Source}]");
+                output.WriteLine($"            {suspect.Measurement.Equation}");
+                if (suspect.LikelyCause is { } cause)
+                {
+                    output.WriteLine($"            {cause.Detail}");
+                }
+            }
+        }
+
+        if (analysis.Adjustments.Count > 0)
+        {
+            output.WriteLine($"   Adjustments made by the procedure: {analysis.Adjustments.Count} (each enlarges one uncertainty; see --json for all)");
+        }
+
+        output.WriteLine();
+        output.WriteLine("   Sources              n  checked   mean z   spread   offset z  suspects   (z: measured vs the rest, suspects left out)");
+        foreach (SourceCheck source in analysis.Sources)
+        {
+            string flag = source.HasInferredOffset ? "  COMMON OFFSET (above)" : source.SystematicOffset ? "  SYSTEMATIC OFFSET" : "";
+            output.WriteLine($"     {Text.Fit(source.Source, 18)} {source.Measurements,3}  {source.Checkable,7}  {Text.Signed(source.MeanNormalizedResidual),7}  {Text.Number(source.SpreadNormalizedResidual),7}  {Text.Signed(source.OffsetZ),8}  {source.Suspects,8}{flag}");
+        }
+
+        output.WriteLine();
     }
 
     /// <summary>How complete the cycle list is, in words.</summary>

@@ -14,7 +14,7 @@ public static class PlanOutput
         ArgumentNullException.ThrowIfNull(plan);
         ArgumentNullException.ThrowIfNull(settings);
         ValueProvenance current = plan.Current;
-        string unit = current.Model.Unit.Symbol;
+        string unit = current.Family.Unit().Symbol;
         double gasTerm = property == ThermoProperty.InternalEnergy
             ? PropertyModel.EnthalpyMinusInternalEnergy(current.Target)
             : 0.0;

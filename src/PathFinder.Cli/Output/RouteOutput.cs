@@ -70,7 +70,7 @@ public static class RouteOutput
         output.WriteLine($"Property  {symbol}{(property == ThermoProperty.InternalEnergy ? " (routes in ΔH, converted with Δn(gas)·R·T)" : "")}, {unit}, 298.15 K");
         if (report.NetworkEstimate is { } best)
         {
-            output.WriteLine($"Network best estimate  {Text.WithUncertainty(best.Value - gasTerm, best.StandardUncertainty, unit)}  (weighted least squares over all {model.Measurements.Count} measurements)");
+            output.WriteLine($"Network best estimate  {Text.WithUncertainty(best.Value - gasTerm, best.StandardUncertainty, unit)}  (joint weighted least squares over the whole network)");
         }
         else
         {

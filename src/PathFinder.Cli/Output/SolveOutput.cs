@@ -13,7 +13,7 @@ public static class SolveOutput
     {
         ArgumentNullException.ThrowIfNull(output);
         ArgumentNullException.ThrowIfNull(report);
-        string unit = report.Model.Unit.Symbol;
+        string unit = report.Family.Unit().Symbol;
         string quantity = report.Family.SpeciesQuantity();
         SpeciesEstimate[] determined = report.Species.Where(estimate => estimate.IsDetermined).ToArray();
         switch (format)
@@ -34,7 +34,7 @@ public static class SolveOutput
                     species = determined.Select(estimate => new { name = estimate.Species.Name, value = estimate.Value, uncertainty = estimate.Uncertainty, measurements = estimate.Measurements }),
                     undetermined = report.Undetermined.Select(estimate => estimate.Species.Name),
                     relativeOnly = report.RelativeGroups,
-                    suspects = report.Suspects.Select(suspect => report.Model.Measurements[suspect.ObservationIndex].Id),
+                    suspects = report.SuspectIds,
                     adjustments = report.Adjustments.Count,
                     atTemperature = atTemperature is null ? null : TemperatureOutput.Json(atTemperature, atTemperature.Family.Unit().Symbol),
                     caution = Text.Caution,
@@ -71,7 +71,8 @@ public static class SolveOutput
                 WriteFooter(output, report);
                 return;
             default:
-                output.WriteLine($"{quantity} at 298.15 K in {unit}, weighted least squares over {report.Model.Measurements.Count} measurements{(report.Adjusted ? $" after the suspect procedure ({report.Adjustments.Count} adjustments, {report.Suspects.Count} suspects)" : " as given")}");
+                output.WriteLine($"{quantity} at 298.15 K in {unit}, joint weighted least squares over {report.Model.Measurements.Count} measurements{(report.Adjusted ? $" after the suspect procedure ({report.Adjustments.Count} adjustments, {report.Suspects.Count} suspects)" : " as given")}");
+                output.WriteLine(Derivation(report));
                 output.WriteLine($"χ² = {Text.Number(report.Solution.ChiSquared)}, {report.Solution.DegreesOfFreedom} degrees of freedom, Birge ratio {Text.Number(report.Solution.BirgeRatio)}");
                 output.WriteLine();
                 int width = Math.Max(12, determined.Select(estimate => estimate.Species.Name.Length).DefaultIfEmpty(12).Max());
@@ -87,6 +88,14 @@ public static class SolveOutput
                 return;
         }
     }
+
+    /// <summary>What the quantity is made of in the joint model, in one line.</summary>
+    private static string Derivation(SolveReport report) => report.Family switch
+    {
+        PropertyFamily.GibbsEnergy => "ΔfG° = ΔfH° − T·(S° − Σν·S° of the elements), from the one solution of ΔfH° and S° (covariances included)",
+        PropertyFamily.Entropy => "S° from S°, ΔS, ΔG and K data, solved together with ΔfH°",
+        _ => "ΔfH° from ΔH, ΔU, ΔG and K data, solved together with S°",
+    };
 
     private static void WriteAtTemperature(TextWriter output, TemperatureTable? table)
     {
@@ -117,7 +126,7 @@ public static class SolveOutput
 
         if (report.Suspects.Count > 0)
         {
-            output.WriteLine($"Suspects down-weighted: {string.Join(", ", report.Suspects.Select(suspect => report.Model.Measurements[suspect.ObservationIndex].Id))} (see 'pathfinder check')");
+            output.WriteLine($"Suspects down-weighted: {string.Join(", ", report.SuspectIds)} (see 'pathfinder check')");
         }
 
         output.WriteLine(Text.Caution);

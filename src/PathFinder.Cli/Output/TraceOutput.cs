@@ -12,7 +12,7 @@ public static class TraceOutput
     {
         ArgumentNullException.ThrowIfNull(output);
         ArgumentNullException.ThrowIfNull(provenance);
-        string unit = provenance.Model.Unit.Symbol;
+        string unit = provenance.Family.Unit().Symbol;
         double gasTerm = GasTerm(provenance, property);
         if (json)
         {

@@ -18,7 +18,7 @@ public sealed class SolvedAnalysis : INetworkAnalysis
 {
     private readonly NetworkReadResult _data;
     private readonly ConsistencyReport _report;
-    private readonly Dictionary<CycleReport, (CycleCheck Check, PropertyFamily Family)> _cycleSources = new(ReferenceEqualityComparer.Instance);
+    private readonly Dictionary<CycleReport, CycleCheck> _cycleSources = new(ReferenceEqualityComparer.Instance);
     private readonly ConditionalWeakTable<RouteReport, RouteSource> _routeSources = [];
 
     private SolvedAnalysis(ReactionNetwork network, NetworkReadResult data, ConsistencyReport report)
@@ -30,9 +30,9 @@ public sealed class SolvedAnalysis : INetworkAnalysis
         var species = new List<SpeciesEstimate>();
         var suspects = new List<SuspectReport>();
         var cycles = new List<CycleReport>();
-        foreach (FamilyConsistency family in report.Families)
+        if (report.Analysis is { } analysis)
         {
-            foreach (MeasurementCheck check in family.Measurements)
+            foreach (MeasurementCheck check in analysis.Measurements)
             {
                 MeasurementStatus status = check.IsSuspect ? MeasurementStatus.Suspect
                     : check.IsCheckable ? MeasurementStatus.Consistent
@@ -42,13 +42,27 @@ public sealed class SolvedAnalysis : INetworkAnalysis
                 measurements[check.Measurement.Id] = new MeasurementAssessment(check.Measurement.Id, status, check.PredictionZ, check.Predicted, check.PredictedUncertainty);
             }
 
-            foreach (PathFinder.Analysis.SuspectReport suspect in family.Suspects)
+            foreach (SourceCheck source in analysis.OffsetSources)
+            {
+                foreach (SourceOffset offset in source.Offsets.Where(offset => offset.IsInferred))
+                {
+                    string reason = string.Create(CultureInfo.InvariantCulture, $"source {source.Source} reads {offset.Value:+0.00;-0.00} ± {offset.Uncertainty:0.00} {offset.Unit} off on all {offset.Rows.Count} rows: a common offset explains them better (χ² falls by {offset.ChiSquaredDrop:0.0}) than any single measurement ({offset.BestSingleChiSquaredDrop:0.0})");
+                    suspects.Add(new SuspectReport(offset.Rows[0], offset.Z, null, null, reason));
+                }
+            }
+
+            foreach (PathFinder.Analysis.SuspectReport suspect in analysis.Suspects)
             {
                 string reason = string.Create(CultureInfo.InvariantCulture, $"z = {suspect.NormalizedResidual:+0.0;-0.0} when first picked; its uncertainty had to grow ×{suspect.Inflation:0.#} to agree with the rest");
+                if (suspect.LikelyCause is { } cause)
+                {
+                    reason += "; " + cause.Detail;
+                }
+
                 suspects.Add(new SuspectReport(suspect.Measurement.Id, suspect.NormalizedResidual, suspect.Predicted, suspect.PredictedUncertainty, reason));
             }
 
-            foreach (CycleCheck cycle in family.Cycles)
+            foreach (CycleCheck cycle in analysis.Cycles)
             {
                 var shown = new CycleReport(
                     cycle.Members.Select(member => member.Measurement.Id).ToArray(),
@@ -58,17 +72,25 @@ public sealed class SolvedAnalysis : INetworkAnalysis
                     double.IsFinite(cycle.Z) ? cycle.Z : null,
                     cycle.Flagged);
                 cycles.Add(shown);
-                _cycleSources[shown] = (cycle, family.Family);
+                _cycleSources[shown] = cycle;
             }
 
-            SolveReport solved = NetworkSolver.Report(family.Model, family.Adjusted, adjusted: true, family.Adjustments, []);
-            ThermoProperty property = family.Family == PropertyFamily.Entropy ? ThermoProperty.AbsoluteEntropy : family.Family.ResultProperty();
-            species.AddRange(solved.Species.Select(estimate => new SpeciesEstimate(
-                estimate.Species,
-                property,
-                estimate.IsDetermined ? estimate.Value : null,
-                estimate.IsDetermined ? estimate.Uncertainty : null,
-                estimate.Measurements)));
+            var joint = new JointSolution(analysis.Model, analysis.Adjusted, true, analysis.Adjustments, []);
+            foreach (PropertyFamily family in new[] { PropertyFamily.Enthalpy, PropertyFamily.Entropy, PropertyFamily.GibbsEnergy })
+            {
+                if (NetworkSolver.Report(joint, family) is not { } solved)
+                {
+                    continue;
+                }
+
+                ThermoProperty property = family == PropertyFamily.Entropy ? ThermoProperty.AbsoluteEntropy : family.ResultProperty();
+                species.AddRange(solved.Species.Select(estimate => new SpeciesEstimate(
+                    estimate.Species,
+                    property,
+                    estimate.IsDetermined ? estimate.Value : null,
+                    estimate.IsDetermined ? estimate.Uncertainty : null,
+                    estimate.Measurements)));
+            }
         }
 
         Measurements = measurements;
@@ -112,7 +134,7 @@ public sealed class SolvedAnalysis : INetworkAnalysis
     {
         ArgumentNullException.ThrowIfNull(network);
         ArgumentNullException.ThrowIfNull(data);
-        ConsistencyReport report = ConsistencyCheck.Run(network, data.HeatCapacities, new ConsistencyOptions { CancellationToken = cancellationToken });
+        ConsistencyReport report = ConsistencyCheck.Run(network, data.HeatCapacities, new ConsistencyOptions { CancellationToken = cancellationToken }, data.SourceSystematics);
         cancellationToken.ThrowIfCancellationRequested();
         return new SolvedAnalysis(network, data, report);
     }
@@ -122,17 +144,23 @@ public sealed class SolvedAnalysis : INetworkAnalysis
     {
         ArgumentNullException.ThrowIfNull(target);
         PropertyFamily family = PropertyFamilies.FamilyOf(property);
-        FamilyConsistency? solved = _report.Families.FirstOrDefault(item => item.Family == family);
-        if (solved is null)
+        PropertyModel model = PropertyModel.Build(Network, family, _data.HeatCapacities);
+        if (model.Measurements.Count == 0)
         {
             return new TargetReport(target, property, [], null, null, $"the network has no {family.ResultProperty().Code()} data");
         }
 
+        Solving.DerivedEstimate? estimate = null;
+        if (_report.Analysis is { } analysis)
+        {
+            estimate = analysis.Model.Quantity(family, target).Evaluate(analysis.Adjusted);
+        }
+
         PathFinder.Analysis.RouteReport report = RouteAnalysis.Find(
-            solved.Model,
+            model,
             target,
             new RouteSearchOptions { MaxRoutes = maxRoutes, TimeBudget = TimeSpan.FromSeconds(10), CancellationToken = cancellationToken },
-            solved.Adjusted);
+            estimate);
         var routes = report.Routes.Select(route =>
         {
             var shown = new RouteReport(
@@ -176,15 +204,15 @@ public sealed class SolvedAnalysis : INetworkAnalysis
 
         if (focus.Cycle is not null)
         {
-            if (!_cycleSources.TryGetValue(focus.Cycle, out (CycleCheck Check, PropertyFamily Family) cycle))
+            if (!_cycleSources.TryGetValue(focus.Cycle, out CycleCheck? cycle))
             {
                 return "that cycle is from an older analysis";
             }
 
             return Write(
                 path,
-                FigureBuilder.CycleNetwork(cycle.Check, cycle.Family, marks),
-                LevelDiagramRenderer.RenderCycle(FigureBuilder.CycleLevels(cycle.Check, cycle.Family)).Diagram,
+                FigureBuilder.CycleNetwork(cycle, marks),
+                cycle.IsMixed ? null : LevelDiagramRenderer.RenderCycle(FigureBuilder.CycleLevels(cycle)).Diagram,
                 "closure");
         }
 
@@ -239,7 +267,7 @@ public sealed class SolvedAnalysis : INetworkAnalysis
         Measurement[] rows = network.Measurements.Where(measurement => measurement.Source == source).ToArray();
         var lines = rows.Select(measurement => (measurement.Location.File, measurement.Location.Line)).ToHashSet();
         Diagnostic[] own = diagnostics.Where(diagnostic => lines.Contains((diagnostic.Location.File, diagnostic.Location.Line))).ToArray();
-        MeasurementCheck[] checks = report.Families.SelectMany(family => family.Measurements).Where(check => check.Measurement.Source == source).ToArray();
+        MeasurementCheck[] checks = (report.Analysis?.Measurements ?? []).Where(check => check.Measurement.Source == source).ToArray();
         double[] z = checks.Where(check => check.NormalizedResidual.HasValue).Select(check => check.NormalizedResidual!.Value).ToArray();
         double? rms = z.Length > 0 ? Math.Sqrt(z.Average(value => value * value)) : null;
         return new SourceReport(source, rows.Length, checks.Count(check => check.IsSuspect), rms, own);

@@ -1,5 +1,4 @@
 using PathFinder.Chemistry;
-using PathFinder.Quantities;
 using PathFinder.Routes;
 using PathFinder.Solving;
 using PathFinder.Thermodynamics;
@@ -8,39 +7,46 @@ namespace PathFinder.Analysis;
 
 /// <summary>Tests every cycle that should close, ranks the measurements and sources that break closure, and solves the network.</summary>
 /// <remarks>
-/// Per property family: the least-squares solution of the data as given (normalized residuals for every
-/// measurement), the minimal cycles up to a size bound with their closure z, the worst-offender suspect
-/// procedure (enlarging the worst measurement's uncertainty until the rest agree) with leave-one-out predictions
-/// from the adjusted network, and per-source statistics. Across families: ΔG = ΔH − T·ΔS for reactions with all
-/// three measured at one temperature.
+/// <para>One joint analysis of every datum (<see cref="ThermoModel"/>): the least-squares solution of the data as given
+/// (normalized residuals for every measurement), the minimal cycles up to a size bound with their closure z (cycles may
+/// mix ΔH, S°, ΔS, ΔG and K data, which G = H − TS ties), the worst-offender suspect procedure (enlarging the worst
+/// measurement's uncertainty until the rest agree) with leave-one-out predictions from the adjusted network, the likely
+/// slip behind each suspect, and per-source statistics.</para>
+/// <para>Sources: a declared systematic (<c>sources.csv</c>) is an offset unknown with its prior, reported fitted. For the
+/// other sources, the fall in χ² from fitting one common offset to a source's rows is Δχ² = (Σwᵢrᵢ)²/(Σwᵢ − hᵀCh),
+/// h = Σwᵢaᵢ over its rows (a rank-one test on the solution as given). When the best source's Δχ² passes the
+/// multiple-testing critical value and beats every single measurement's z², the offset is fitted as an unknown
+/// before the suspect procedure runs, so a source that reads high on every row is named instead of a key value all its
+/// reactions share. Up to <see cref="MaxInferredOffsets"/> sources are taken this way, one at a time.</para>
 /// </remarks>
 public static class ConsistencyCheck
 {
-    /// <summary>Analyses every property family present in <paramref name="network"/>.</summary>
-    public static ConsistencyReport Run(ReactionNetwork network, IReadOnlyDictionary<Species, IHeatCapacity>? heatCapacities = null, ConsistencyOptions? options = null)
+    /// <summary>The most source offsets the check infers (one at a time, the best first).</summary>
+    public const int MaxInferredOffsets = 3;
+
+    /// <summary>Fewest rows of a source for its common offset to be tested.</summary>
+    public const int MinimumRowsForOffsetTest = 3;
+
+    /// <summary>Analyses every datum of <paramref name="network"/> jointly.</summary>
+    public static ConsistencyReport Run(ReactionNetwork network, IReadOnlyDictionary<Species, IHeatCapacity>? heatCapacities = null, ConsistencyOptions? options = null, IReadOnlyList<SourceSystematic>? systematics = null)
     {
         ArgumentNullException.ThrowIfNull(network);
         options ??= new ConsistencyOptions();
-        var families = network.Measurements
-            .Select(measurement => PropertyFamilies.FamilyOf(measurement.Property))
-            .Distinct()
-            .Order()
-            .Select(family => Analyse(PropertyModel.Build(network, family, heatCapacities), options))
-            .ToArray();
-        return new ConsistencyReport(families, CrossCheck(network, options.Threshold), options);
+        ThermoModel model = ThermoModel.Build(network, heatCapacities, systematics);
+        return new ConsistencyReport(model.Measurements.Count == 0 ? null : Analyse(model, options), options);
     }
 
-    /// <summary>Analyses one property model.</summary>
-    public static FamilyConsistency Analyse(PropertyModel model, ConsistencyOptions? options = null)
+    /// <summary>Analyses a joint model.</summary>
+    public static ModelConsistency Analyse(ThermoModel model, ConsistencyOptions? options = null)
     {
         ArgumentNullException.ThrowIfNull(model);
         options ??= new ConsistencyOptions();
         // The solve first, with every core for its dense algebra (a search beside it would slow its threaded
         // factorization by more than it gains); then the cycle search, which needs only the measurements, runs
-        // on another core beside the suspect procedure (its short work budget leaves that core to the
-        // procedure's dense folds soon after).
+        // on another core beside the suspect procedure.
         LeastSquaresSolution asGiven = WeightedLeastSquares.Solve(model.ToObservationSystem());
-        Task<CycleSearchResult> cycleSearch = Task.Run(() => FindCycles.In(model.ToRouteNetwork(), new CycleSearchOptions
+        ThermoModel searched = model;
+        Task<CycleSearchResult> cycleSearch = Task.Run(() => FindCycles.In(searched.ToRouteNetwork(), new CycleSearchOptions
         {
             MaxSize = options.MaxCycleSize,
             MaxCycles = options.MaxCycles,
@@ -49,16 +55,28 @@ public static class ConsistencyCheck
             CancellationToken = options.CancellationToken,
         }));
 
+        var inferred = new List<(string Source, bool Energy, double Drop, double BestSingle)>();
+        if (options.RunSuspectProcedure)
+        {
+            while (inferred.Count < MaxInferredOffsets && BestOffsetTest(model, asGiven) is { } best)
+            {
+                model = model.WithInferredOffset(best.Source, best.Energy);
+                asGiven = WeightedLeastSquares.Solve(model.ToObservationSystem());
+                inferred.Add(best);
+            }
+        }
+
         // The per-measurement diagnostics of the data as given are needed only after the procedure: that core works
         // them out once the cycle search is done (the procedure works on a copy of the factorization).
-        Task givenDiagnostics = cycleSearch.ContinueWith(_ => asGiven.Observations.Count, TaskScheduler.Default);
+        LeastSquaresSolution given = asGiven;
+        Task givenDiagnostics = cycleSearch.ContinueWith(_ => given.Observations.Count, TaskScheduler.Default);
 
         // Start from the solution just computed: the procedure copies its factorization instead of redoing it.
         OutlierResult? outliers = options.RunSuspectProcedure
             ? OutlierProcedure.Run(asGiven, new OutlierOptions { Threshold = options.Threshold, InflationFactor = options.InflationFactor })
             : null;
         LeastSquaresSolution adjusted = outliers?.Solution ?? asGiven;
-        IReadOnlyList<OutlierSuspect> outlierSuspects = outliers?.Suspects ?? [];
+        IReadOnlyList<OutlierSuspect> outlierSuspects = outliers?.Suspects.Where(suspect => !model.IsPrior(suspect.ObservationIndex)).ToArray() ?? [];
         IReadOnlyList<UncertaintyAdjustment> adjustments = outliers?.Adjustments ?? [];
 
         givenDiagnostics.GetAwaiter().GetResult();
@@ -66,13 +84,13 @@ public static class ConsistencyCheck
         var checks = new MeasurementCheck[model.Measurements.Count];
         for (int i = 0; i < checks.Length; i++)
         {
-            ObservationDiagnostics given = asGiven.Observations[i];
+            ObservationDiagnostics givenRow = asGiven.Observations[i];
             ObservationDiagnostics after = adjusted.Observations[i];
             checks[i] = new MeasurementCheck(
                 model.Measurements[i],
-                given.Fitted,
-                given.Residual,
-                given.NormalizedResidual,
+                givenRow.Fitted,
+                givenRow.Residual,
+                givenRow.NormalizedResidual,
                 after.LeaveOneOutPrediction,
                 after.LeaveOneOutUncertainty,
                 suspectIndices.Contains(i),
@@ -80,12 +98,17 @@ public static class ConsistencyCheck
         }
 
         SuspectReport[] suspects = outlierSuspects
-            .Select(suspect => new SuspectReport(
-                model.Measurements[suspect.ObservationIndex],
-                suspect.FirstNormalizedResidual,
-                checks[suspect.ObservationIndex].Predicted,
-                checks[suspect.ObservationIndex].PredictedUncertainty,
-                suspect.TotalInflation))
+            .Select(suspect =>
+            {
+                MeasurementCheck check = checks[suspect.ObservationIndex];
+                return new SuspectReport(
+                    model.Measurements[suspect.ObservationIndex],
+                    suspect.FirstNormalizedResidual,
+                    check.Predicted,
+                    check.PredictedUncertainty,
+                    suspect.TotalInflation,
+                    SuspectCauses.Diagnose(model, adjusted, suspect.ObservationIndex, check.Predicted, check.PredictedUncertainty));
+            })
             .ToArray();
 
         CycleSearchResult cycles = cycleSearch.GetAwaiter().GetResult();
@@ -99,7 +122,7 @@ public static class ConsistencyCheck
                 Math.Abs(cycle.Z) > options.Threshold))
             .ToArray();
 
-        return new FamilyConsistency(
+        return new ModelConsistency(
             model,
             checks,
             cycleChecks,
@@ -108,12 +131,67 @@ public static class ConsistencyCheck
             cycles.IndependentCycleCount,
             suspects,
             adjustments,
-            Sources(checks, options.Threshold),
+            Sources(model, checks, asGiven, adjusted, inferred, options.Threshold),
             asGiven,
             adjusted);
     }
 
-    private static SourceCheck[] Sources(MeasurementCheck[] checks, double threshold) =>
+    /// <summary>The source whose common offset (not yet in the model) lowers χ² most, when that beats the critical value and every single measurement; otherwise null.</summary>
+    private static (string Source, bool Energy, double Drop, double BestSingle)? BestOffsetTest(ThermoModel model, LeastSquaresSolution solution)
+    {
+        var tests = new List<(string Source, bool Energy, double Drop)>();
+        foreach (var group in Enumerable.Range(0, model.Measurements.Count)
+            .Where(i => model.OffsetOf(i) < 0)
+            .GroupBy(i => (model.Measurements[i].Source, model.Measurements[i].IsEnergy)))
+        {
+            int[] rows = group.ToArray();
+            if (rows.Length < MinimumRowsForOffsetTest)
+            {
+                continue;
+            }
+
+            // h = Σ wᵢaᵢ and Σ wᵢrᵢ over the source's rows; Δχ² = (Σwᵢrᵢ)² / (Σwᵢ − hᵀCh).
+            var h = new Dictionary<int, double>();
+            double weights = 0.0;
+            double weightedResiduals = 0.0;
+            foreach (int i in rows)
+            {
+                Observation observation = solution.System.Observations[i];
+                double w = observation.Weight;
+                weights += w;
+                weightedResiduals += w * (observation.Value - solution.FittedValue(i));
+                for (int k = 0; k < observation.Row.Count; k++)
+                {
+                    h[observation.Row.Indices[k]] = h.GetValueOrDefault(observation.Row.Indices[k]) + (w * observation.Row.Coefficients[k]);
+                }
+            }
+
+            DerivedEstimate spread = solution.Estimate(SparseRow.Of(h.Select(entry => (entry.Key, entry.Value)).ToArray()));
+            double denominator = weights - (spread.IsEstimable ? spread.Variance : weights);
+            if (!(denominator > 1e-9 * weights))
+            {
+                continue; // the source's rows alone fix what they touch: an offset is not identifiable
+            }
+
+            tests.Add((group.Key.Source, group.Key.IsEnergy, weightedResiduals * weightedResiduals / denominator));
+        }
+
+        if (tests.Count == 0)
+        {
+            return null;
+        }
+
+        (string source, bool energy, double drop) = tests.MaxBy(test => test.Drop);
+        double critical = OutlierProcedure.SidakCriticalValue(tests.Count, new OutlierOptions().SignificanceLevel);
+        double bestSingle = solution.Observations.Take(model.Measurements.Count)
+            .Where(diagnostics => diagnostics.NormalizedResidual.HasValue)
+            .Select(diagnostics => diagnostics.NormalizedResidual!.Value * diagnostics.NormalizedResidual.Value)
+            .DefaultIfEmpty(0.0)
+            .Max();
+        return drop > critical * critical && drop > bestSingle ? (source, energy, drop, bestSingle) : null;
+    }
+
+    private static SourceCheck[] Sources(ThermoModel model, MeasurementCheck[] checks, LeastSquaresSolution asGiven, LeastSquaresSolution adjusted, List<(string Source, bool Energy, double Drop, double BestSingle)> inferred, double threshold) =>
         checks
             .GroupBy(check => check.Measurement.Source, StringComparer.Ordinal)
             .Select(group =>
@@ -126,67 +204,36 @@ public static class ConsistencyCheck
                 double spread = z.Length > 1 ? Math.Sqrt(z.Sum(value => (value - mean) * (value - mean)) / (z.Length - 1)) : double.NaN;
                 double offsetZ = mean * Math.Sqrt(z.Length);
                 int checkable = group.Count(check => check.IsCheckable);
-                return new SourceCheck(group.Key, group.Count(), checkable, mean, spread, offsetZ, group.Count(check => check.IsSuspect), z.Length >= 2 && Math.Abs(offsetZ) > threshold);
+                var offsets = new List<SourceOffset>();
+                foreach (bool energy in new[] { true, false })
+                {
+                    int unknown = model.IndexOfOffset(group.Key, energy);
+                    if (unknown < 0 || !adjusted.IsDetermined(unknown))
+                    {
+                        continue;
+                    }
+
+                    string[] rows = group.Where(check => check.Measurement.IsEnergy == energy).Select(check => check.Measurement.Id).ToArray();
+                    double value = adjusted.Values[unknown];
+                    double uncertainty = adjusted.StandardUncertainties[unknown];
+                    SourceSystematic? declared = model.Unknowns[unknown].Systematic;
+                    if (declared is not null)
+                    {
+                        int prior = model.Measurements.Count + model.Systematics.ToList().IndexOf(declared);
+                        double? priorZ = asGiven.Observations[prior].NormalizedResidual;
+                        offsets.Add(new SourceOffset(energy, value, uncertainty, priorZ is { } pz ? -pz : 0.0, declared.Systematic, 0.0, 0.0, rows));
+                    }
+                    else
+                    {
+                        (string _, bool _, double drop, double bestSingle) = inferred.First(item => item.Source == group.Key && item.Energy == energy);
+                        offsets.Add(new SourceOffset(energy, value, uncertainty, value / uncertainty, null, drop, bestSingle, rows));
+                    }
+                }
+
+                bool flagged = (z.Length >= 2 && Math.Abs(offsetZ) > threshold) || offsets.Any(offset => offset.IsInferred);
+                return new SourceCheck(group.Key, group.Count(), checkable, mean, spread, offsetZ, group.Count(check => check.IsSuspect), flagged, offsets);
             })
-            .OrderByDescending(source => Math.Abs(source.OffsetZ))
+            .OrderByDescending(source => source.HasInferredOffset)
+            .ThenByDescending(source => Math.Abs(source.OffsetZ))
             .ToArray();
-
-    private static CrossPropertyCheck[] CrossCheck(ReactionNetwork network, double threshold)
-    {
-        var checks = new List<CrossPropertyCheck>();
-
-        // Only temperatures at which both ΔS and ΔG were measured can hold a triple; the reaction signature (exact
-        // rational arithmetic per measurement) is computed for those measurements alone, not for a whole ΔH network.
-        var entropyTemperatures = network.Measurements.Where(m => m.Property == ThermoProperty.Entropy).Select(m => Math.Round(m.Temperature, 2)).ToHashSet();
-        var tripleTemperatures = network.Measurements
-            .Where(m => m.Property == ThermoProperty.GibbsEnergy && entropyTemperatures.Contains(Math.Round(m.Temperature, 2)))
-            .Select(m => Math.Round(m.Temperature, 2))
-            .ToHashSet();
-        if (tripleTemperatures.Count == 0)
-        {
-            return [];
-        }
-
-        var byReaction = network.Measurements
-            .Where(measurement => tripleTemperatures.Contains(Math.Round(measurement.Temperature, 2)))
-            .GroupBy(measurement => (Signature(measurement.Equation), Math.Round(measurement.Temperature, 2)));
-        foreach (var group in byReaction)
-        {
-            Measurement? enthalpy = group.FirstOrDefault(m => m.Property == ThermoProperty.Enthalpy);
-            Measurement? entropy = group.FirstOrDefault(m => m.Property == ThermoProperty.Entropy);
-            Measurement? gibbs = group.FirstOrDefault(m => m.Property == ThermoProperty.GibbsEnergy);
-            if (enthalpy is null || entropy is null || gibbs is null)
-            {
-                continue;
-            }
-
-            // All three must describe the reaction with the same coefficients; rescale ΔS and ΔG to ΔH's equation.
-            double entropyScale = Scale(enthalpy.Equation, entropy.Equation);
-            double gibbsScale = Scale(enthalpy.Equation, gibbs.Equation);
-            double temperature = enthalpy.Temperature;
-            GibbsConsistency consistency = GibbsRelations.CheckConsistency(
-                new UncertainValue(enthalpy.Value * 1000.0, enthalpy.Uncertainty * 1000.0),
-                new UncertainValue(entropy.Value * entropyScale, entropy.Uncertainty * Math.Abs(entropyScale)),
-                new UncertainValue(gibbs.Value * 1000.0 * gibbsScale, gibbs.Uncertainty * 1000.0 * Math.Abs(gibbsScale)),
-                temperature);
-            double z = consistency.ZScore;
-            checks.Add(new CrossPropertyCheck(enthalpy.Equation, enthalpy, entropy, gibbs, temperature, consistency.Residual / 1000.0, consistency.CombinedUncertainty / 1000.0, z, Math.Abs(z) > threshold));
-        }
-
-        return checks.ToArray();
-    }
-
-    private static string Signature(ChemicalEquation equation)
-    {
-        EquationTerm pivot = equation.Terms.OrderBy(term => term.Species.Key, StringComparer.Ordinal).First();
-        Fractions.Fraction scale = pivot.Coefficient;
-        return string.Join(";", equation.Terms.OrderBy(term => term.Species.Key, StringComparer.Ordinal).Select(term => $"{term.Species.Key}:{RationalText.Format(term.Coefficient / scale)}"));
-    }
-
-    /// <summary>The factor s with <paramref name="reference"/> = s·<paramref name="other"/> (same reaction up to scale).</summary>
-    private static double Scale(ChemicalEquation reference, ChemicalEquation other)
-    {
-        EquationTerm term = reference.Terms[0];
-        return (term.Coefficient / other.CoefficientOf(term.Species)).ToDouble();
-    }
 }

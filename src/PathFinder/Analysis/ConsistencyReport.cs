@@ -1,11 +1,10 @@
 namespace PathFinder.Analysis;
 
-/// <summary>The consistency analysis of a whole network: one part per property family, plus ΔG = ΔH − TΔS checks.</summary>
-/// <param name="Families">One analysis per family with data.</param>
-/// <param name="CrossChecks">Reactions with ΔH, ΔS and ΔG at one temperature.</param>
+/// <summary>The consistency analysis of a whole network: one joint analysis of every datum.</summary>
+/// <param name="Analysis">The joint analysis, or null when the network has no usable measurement.</param>
 /// <param name="Options">The settings used.</param>
-public sealed record ConsistencyReport(IReadOnlyList<FamilyConsistency> Families, IReadOnlyList<CrossPropertyCheck> CrossChecks, ConsistencyOptions Options)
+public sealed record ConsistencyReport(ModelConsistency? Analysis, ConsistencyOptions Options)
 {
-    /// <summary>Consistent when no family has a suspect and no cross-property check is flagged.</summary>
-    public bool Consistent => Families.All(family => family.Consistent) && !CrossChecks.Any(check => check.Flagged);
+    /// <summary>Consistent when the joint analysis found no suspect and no source offset.</summary>
+    public bool Consistent => Analysis?.Consistent ?? true;
 }

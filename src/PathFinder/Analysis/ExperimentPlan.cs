@@ -34,7 +34,7 @@ public sealed class ExperimentPlan
     /// <summary>Whether the data determine the target (otherwise nothing is ranked).</summary>
     public bool IsDetermined => Current.IsDetermined;
 
-    /// <summary>The uncertainty assumed for the generated candidates (family unit).</summary>
+    /// <summary>The uncertainty assumed for the generated candidates (the quantity's unit).</summary>
     public double CandidateUncertainty { get; }
 
     /// <summary>Existing measurements, the most useful re-measurement first.</summary>
@@ -60,8 +60,10 @@ public sealed class ExperimentPlan
         }
 
         ArgumentOutOfRangeException.ThrowIfNegative(options.NeighbourhoodDepth, nameof(options));
-        PropertyModel model = report.Model;
-        double candidateUncertainty = options.CandidateUncertainty ?? Median(model.Measurements.Select(item => item.Uncertainty));
+        ThermoModel model = report.Model;
+        PropertyFamily family = report.Family;
+        bool energy = family != PropertyFamily.Entropy;
+        double candidateUncertainty = options.CandidateUncertainty ?? Median(model.Measurements.Where(item => item.IsEnergy == energy).Select(item => item.Uncertainty));
         RequirePositive(candidateUncertainty, nameof(options.CandidateUncertainty));
         ValueProvenance current = ValueProvenance.Trace(report, target);
         if (!current.IsDetermined || current.Variance <= 0.0)
@@ -70,12 +72,12 @@ public sealed class ExperimentPlan
         }
 
         LeastSquaresSolution solution = report.Solution;
-        SparseRow quantity = PropertyModel.RowOf(model.VectorOf(target, out _));
+        SparseRow quantity = model.Quantity(family, target).Row;
         IReadOnlyList<RemeasurementOption> options1 = options.RemeasurementUncertainty is { } fixedUncertainty
             ? ExperimentPlanning.Remeasurements(solution, quantity, _ => fixedUncertainty)
             : ExperimentPlanning.Remeasurements(solution, quantity, options.UncertaintyFactor);
         var remeasurements = options1
-            .Where(option => Math.Abs(option.VarianceReduction) > 1e-12)
+            .Where(option => Math.Abs(option.VarianceReduction) > 1e-12 && !model.IsPrior(option.ObservationIndex))
             .Select(option => new RemeasurementSuggestion(
                 option.ObservationIndex,
                 model.Measurements[option.ObservationIndex],
@@ -90,7 +92,9 @@ public sealed class ExperimentPlan
         foreach ((ChemicalEquation equation, CandidateOrigin origin) in options.Candidates.Select(item => (item, CandidateOrigin.Given))
             .Concat(options.GenerateCandidates ? Generate(model, target, options.NeighbourhoodDepth) : []))
         {
-            SparseVector vector = model.VectorOf(equation, out IReadOnlyList<Species> missing);
+            ModelQuantity candidate = model.Quantity(family, equation);
+            SparseVector vector = candidate.Vector;
+            IReadOnlyList<Species> missing = candidate.Missing;
             if (vector.IsZero && missing.Count == 0)
             {
                 continue;
@@ -116,7 +120,7 @@ public sealed class ExperimentPlan
     }
 
     /// <summary>The candidate reactions generated around <paramref name="target"/> (see the remarks on the type).</summary>
-    public static IEnumerable<(ChemicalEquation Equation, CandidateOrigin Origin)> Generate(PropertyModel model, ChemicalEquation target, int depth)
+    public static IEnumerable<(ChemicalEquation Equation, CandidateOrigin Origin)> Generate(ThermoModel model, ChemicalEquation target, int depth)
     {
         ArgumentNullException.ThrowIfNull(model);
         ArgumentNullException.ThrowIfNull(target);
@@ -124,9 +128,9 @@ public sealed class ExperimentPlan
         var network = new ReactionNetwork("plan", model.Measurements.Select(item => item.Measurement));
         NetworkGraph graph = NetworkGraph.Build(network);
         Species[] near = graph.Neighbourhood(target.Terms.Select(term => term.Species).Where(species => !ReferenceStates.HasZeroFormationProperties(species)), depth)
-            .Where(vertex => vertex.Species is { } species && !ReferenceStates.HasZeroFormationProperties(species) && model.IndexOf(species) >= 0)
+            .Where(vertex => vertex.Species is { } species && !ReferenceStates.HasZeroFormationProperties(species) && Position(model, species) >= 0)
             .Select(vertex => vertex.Species!)
-            .OrderBy(species => model.IndexOf(species))
+            .OrderBy(species => Position(model, species))
             .ToArray();
         foreach (Species species in near)
         {
@@ -150,13 +154,21 @@ public sealed class ExperimentPlan
         }
     }
 
-    private static ChemicalEquation? Combustion(PropertyModel model, Species species)
+    /// <summary>The first position of a species among the unknowns (ΔfH° or S°), or −1.</summary>
+    private static int Position(ThermoModel model, Species species)
+    {
+        int enthalpy = model.IndexOf(species, UnknownKind.FormationEnthalpy);
+        int entropy = model.IndexOf(species, UnknownKind.Entropy);
+        return enthalpy < 0 ? entropy : entropy < 0 ? enthalpy : Math.Min(enthalpy, entropy);
+    }
+
+    private static ChemicalEquation? Combustion(ThermoModel model, Species species)
     {
         Species carbonDioxide = Species.Parse("CO2(g)");
         Species water = Species.Parse("H2O(l)");
         IReadOnlyDictionary<string, Fraction> composition = species.Formula.Composition;
         if (species.Formula.Charge != 0 || composition.Keys.Any(element => element is not ("C" or "H" or "O"))
-            || species.Equals(carbonDioxide) || species.Equals(water) || model.IndexOf(carbonDioxide) < 0 || model.IndexOf(water) < 0)
+            || species.Equals(carbonDioxide) || species.Equals(water) || Position(model, carbonDioxide) < 0 || Position(model, water) < 0)
         {
             return null;
         }

@@ -4,27 +4,33 @@ using PathFinder.Thermodynamics;
 
 namespace PathFinder.Analysis;
 
-/// <summary>The property models and least-squares solutions of one network, built on first use and shared by every question asked of them.</summary>
+/// <summary>The joint model and least-squares solution of one network, built on first use and shared by every question asked of them.</summary>
 /// <remarks>
-/// Each family (ΔH, ΔG, S°) is modelled and solved at most once, so evaluating many targets or every species at a
-/// temperature costs one solve per family. Solutions are made after the suspect procedure unless told otherwise.
+/// The network is modelled and solved once (ΔfH°, S° and the declared source offsets together), so evaluating many
+/// targets, every species at a temperature, or ΔfH°, S° and ΔfG° side by side costs one solve. Solutions are made
+/// after the suspect procedure unless told otherwise.
 /// </remarks>
 public sealed class NetworkSolutions
 {
-    private readonly Dictionary<PropertyFamily, SolveReport?> _reports = [];
+    private readonly Lazy<ThermoModel> _model;
+    private readonly Lazy<JointSolution?> _joint;
 
     /// <summary>Prepares to solve <paramref name="network"/>.</summary>
     /// <param name="network">The network.</param>
     /// <param name="heatCapacities">Heat-capacity models by species (temperature corrections); may be empty.</param>
     /// <param name="adjust">Whether to run the suspect procedure before reporting (default true).</param>
     /// <param name="options">Options of the suspect procedure; defaults of <see cref="ConsistencyOptions"/> when omitted.</param>
-    public NetworkSolutions(ReactionNetwork network, IReadOnlyDictionary<Species, IHeatCapacity>? heatCapacities = null, bool adjust = true, ConsistencyOptions? options = null)
+    /// <param name="systematics">Declared systematic uncertainties of sources (<c>sources.csv</c>); may be empty.</param>
+    public NetworkSolutions(ReactionNetwork network, IReadOnlyDictionary<Species, IHeatCapacity>? heatCapacities = null, bool adjust = true, ConsistencyOptions? options = null, IReadOnlyList<SourceSystematic>? systematics = null)
     {
         Options = options ?? new ConsistencyOptions();
         ArgumentNullException.ThrowIfNull(network);
         Network = network;
         HeatCapacities = heatCapacities ?? new Dictionary<Species, IHeatCapacity>();
+        Systematics = systematics ?? [];
         Adjusted = adjust;
+        _model = new Lazy<ThermoModel>(() => ThermoModel.Build(Network, HeatCapacities, Systematics));
+        _joint = new Lazy<JointSolution?>(() => Model.Measurements.Count == 0 ? null : NetworkSolver.Solve(Model, Adjusted, Options));
     }
 
     /// <summary>The network.</summary>
@@ -33,48 +39,38 @@ public sealed class NetworkSolutions
     /// <summary>Heat-capacity models by species.</summary>
     public IReadOnlyDictionary<Species, IHeatCapacity> HeatCapacities { get; }
 
+    /// <summary>Declared systematic uncertainties of sources.</summary>
+    public IReadOnlyList<SourceSystematic> Systematics { get; }
+
     /// <summary>Whether the suspect procedure runs before solutions are reported.</summary>
     public bool Adjusted { get; }
 
     /// <summary>Options of the suspect procedure.</summary>
     public ConsistencyOptions Options { get; }
 
-    /// <summary>The solved family, or null when the network has no data of that family.</summary>
-    public SolveReport? Report(PropertyFamily family)
-    {
-        if (!_reports.TryGetValue(family, out SolveReport? report))
-        {
-            PropertyModel model = PropertyModel.Build(Network, family, HeatCapacities);
-            report = model.Measurements.Count == 0 ? null : NetworkSolver.Solve(model, Adjusted, Options);
-            _reports[family] = report;
-        }
+    /// <summary>The joint model.</summary>
+    public ThermoModel Model => _model.Value;
 
-        return report;
-    }
+    /// <summary>The joint solution, or null when the network has no usable measurement.</summary>
+    public JointSolution? Joint => _joint.Value;
 
-    /// <summary>The network estimate of an equation's property in one family, or null when the data do not determine it.</summary>
-    /// <remarks>An equation of conventional-zero species only (e.g. elements in reference states for ΔH) is exactly 0.</remarks>
-    public UncertainValue? Estimate(PropertyFamily family, ChemicalEquation equation)
+    /// <summary>The view of the joint solution for one species quantity, or null when the data hold nothing of it.</summary>
+    public SolveReport? Report(PropertyFamily family) => Joint is { } joint ? NetworkSolver.Report(joint, family) : null;
+
+    /// <summary>The network estimate of an equation's ΔrH°, ΔrS° or ΔrG° at <paramref name="temperature"/>, or null when the data do not determine it.</summary>
+    /// <remarks>An equation of conventional zeros only (e.g. elements in reference states for ΔH) is exactly its heat-capacity shift.</remarks>
+    public UncertainValue? Estimate(PropertyFamily family, ChemicalEquation equation, double temperature = PhysicalConstantsTemperature)
     {
         ArgumentNullException.ThrowIfNull(equation);
-        if (equation.Terms.All(term => family.IsFixed(term.Species)))
-        {
-            return new UncertainValue(0.0, 0.0);
-        }
-
-        SolveReport? report = Report(family);
-        if (report is null)
-        {
-            return null;
-        }
-
-        Algebra.SparseVector vector = report.Model.VectorOf(equation, out IReadOnlyList<Species> missing);
-        if (missing.Count > 0)
-        {
-            return null;
-        }
-
-        DerivedEstimate estimate = report.Solution.Estimate(PropertyModel.RowOf(vector));
-        return estimate.IsEstimable ? new UncertainValue(estimate.Value, estimate.StandardUncertainty) : null;
+        return DerivedEstimate(family, equation, temperature) is { } value ? new UncertainValue(value.Value, value.StandardUncertainty) : null;
     }
+
+    /// <summary>As <see cref="Estimate"/>, as the solver's derived estimate (value and variance), or null when not determined.</summary>
+    public DerivedEstimate? DerivedEstimate(PropertyFamily family, ChemicalEquation equation, double temperature = PhysicalConstantsTemperature)
+    {
+        ArgumentNullException.ThrowIfNull(equation);
+        return Joint is { } joint ? Model.Quantity(family, equation, temperature).Evaluate(joint.Solution) : null;
+    }
+
+    private const double PhysicalConstantsTemperature = Quantities.PhysicalConstants.StandardTemperature;
 }

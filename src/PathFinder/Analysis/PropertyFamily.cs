@@ -27,7 +27,7 @@ public static class PropertyFamilies
     public static PropertyFamily FamilyOf(ThermoProperty property) => property switch
     {
         ThermoProperty.Enthalpy or ThermoProperty.InternalEnergy => PropertyFamily.Enthalpy,
-        ThermoProperty.GibbsEnergy => PropertyFamily.GibbsEnergy,
+        ThermoProperty.GibbsEnergy or ThermoProperty.LnEquilibriumConstant or ThermoProperty.Log10EquilibriumConstant => PropertyFamily.GibbsEnergy,
         ThermoProperty.Entropy or ThermoProperty.AbsoluteEntropy => PropertyFamily.Entropy,
         _ => throw new ArgumentOutOfRangeException(nameof(property)),
     };

@@ -218,22 +218,36 @@ public sealed class PropertyModel
         return SparseVector.FromEntries(entries.AsSpan(0, count));
     }
 
-    private static PreparedMeasurement Prepare(Measurement measurement, double reference, IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities, List<Diagnostic> warnings)
+    /// <summary>Converts a measurement to its family's property: ΔU → ΔH, ln K → ΔG, and Kirchhoff's law to <paramref name="reference"/> for ΔH, ΔS and S°.</summary>
+    /// <remarks>ΔG (and K read as ΔG) away from the reference temperature is returned as measured, at its own temperature: the joint model (<see cref="ThermoModel"/>) takes it from there.</remarks>
+    internal static PreparedMeasurement Prepare(Measurement measurement, double reference, IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities, List<Diagnostic> warnings, bool warnAboutGibbsTemperature = true)
     {
         var adjustments = new List<string>();
         double value = measurement.Value;
+        double uncertainty = measurement.Uncertainty;
+        double correction = 0.0;
         double temperature = measurement.Temperature;
         if (measurement.Property == ThermoProperty.InternalEnergy)
         {
             Fraction gasChange = measurement.Equation.GasMoleChange();
-            double correction = EnthalpyMinusInternalEnergy(measurement.Equation, temperature);
+            correction = EnthalpyMinusInternalEnergy(measurement.Equation, temperature);
             value += correction;
             adjustments.Add(string.Create(CultureInfo.InvariantCulture, $"ΔU → ΔH: {correction:+0.000;-0.000} kJ/mol (Δn(gas) = {RationalText.Format(gasChange)}, T = {temperature:0.##} K)"));
+        }
+        else if (measurement.Property.IsEquilibriumConstant())
+        {
+            // ΔrG° = −RT·ln K; the typed number scales, so this is no additive correction.
+            double lnK = measurement.Property == ThermoProperty.Log10EquilibriumConstant ? measurement.Value * Math.Log(10.0) : measurement.Value;
+            double perUnitLnK = PhysicalConstants.GasConstant * temperature / 1000.0;
+            double lnKUncertainty = measurement.Property == ThermoProperty.Log10EquilibriumConstant ? measurement.Uncertainty * Math.Log(10.0) : measurement.Uncertainty;
+            value = -perUnitLnK * lnK;
+            uncertainty = perUnitLnK * lnKUncertainty;
+            adjustments.Add(string.Create(CultureInfo.InvariantCulture, $"{measurement.Property.Symbol()} = {measurement.Value:G6} → ΔrG° = −RT·ln K = {value:+0.000;-0.000} ± {uncertainty:0.000} kJ/mol (T = {temperature:0.##} K)"));
         }
 
         if (Math.Abs(temperature - reference) <= TemperatureTolerance)
         {
-            return new PreparedMeasurement(measurement, value, measurement.Uncertainty, adjustments);
+            return new PreparedMeasurement(measurement, value, uncertainty, adjustments) { Correction = correction };
         }
 
         bool isEnthalpy = measurement.Property is ThermoProperty.Enthalpy or ThermoProperty.InternalEnergy;
@@ -241,9 +255,13 @@ public sealed class PropertyModel
         string at = temperature.ToString("0.##", CultureInfo.InvariantCulture);
         if (!isEnthalpy && !isEntropy)
         {
-            warnings.Add(Diagnostic.Warning("uncorrected-temperature", measurement.Location with { Field = "temperature" }, $"'{measurement.Id}' (ΔG at {at} K) is used as measured: moving ΔG to 298.15 K needs ΔH and ΔS of the reaction", "give ΔG at 298.15 K, or ΔH and ΔS"));
-            adjustments.Add($"used as measured at {at} K (no ΔG temperature correction)");
-            return new PreparedMeasurement(measurement, value, measurement.Uncertainty, adjustments);
+            if (warnAboutGibbsTemperature)
+            {
+                warnings.Add(Diagnostic.Warning("uncorrected-temperature", measurement.Location with { Field = "temperature" }, $"'{measurement.Id}' (ΔG at {at} K) is used as measured in route search: moving ΔG to 298.15 K needs ΔH and ΔS of the reaction", "the joint solution (solve, check) uses it at its own temperature"));
+                adjustments.Add($"used as measured at {at} K (no ΔG temperature correction)");
+            }
+
+            return new PreparedMeasurement(measurement, value, uncertainty, adjustments) { Correction = correction };
         }
 
         var species = measurement.Equation.Terms
@@ -254,7 +272,7 @@ public sealed class PropertyModel
         {
             // The reader already warned about the missing heat capacities; say here what that means for the value.
             adjustments.Add($"used as measured at {at} K (heat capacities missing)");
-            return new PreparedMeasurement(measurement, value, measurement.Uncertainty, adjustments);
+            return new PreparedMeasurement(measurement, value, uncertainty, adjustments) { Correction = correction };
         }
 
         KirchhoffShift<Species> shift = isEnthalpy
@@ -268,6 +286,6 @@ public sealed class PropertyModel
             warnings.Add(Diagnostic.Warning("heat-capacity-range", measurement.Location with { Field = "temperature" }, $"'{measurement.Id}': the heat capacity of {rangeWarning.Species.Name} is extrapolated ({rangeWarning.Warning.Message})", "extend the heat-capacity data over the measurement temperature"));
         }
 
-        return new PreparedMeasurement(measurement, shifted, measurement.Uncertainty, adjustments);
+        return new PreparedMeasurement(measurement, shifted, uncertainty, adjustments) { Correction = correction + shifted - value };
     }
 }

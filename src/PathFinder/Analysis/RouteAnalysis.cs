@@ -13,14 +13,14 @@ public static class RouteAnalysis
     /// <param name="model">The property model (its measurements are the candidate steps).</param>
     /// <param name="target">The target equation (element-balanced).</param>
     /// <param name="options">Search bounds; defaults to 6 steps and the best 100 routes.</param>
-    /// <param name="solution">A least-squares solution of the same model, for the network estimate beside the routes; optional.</param>
-    public static RouteReport Find(PropertyModel model, ChemicalEquation target, RouteSearchOptions? options = null, LeastSquaresSolution? solution = null)
+    /// <param name="networkEstimate">The joint solution's estimate of the target (<see cref="NetworkSolutions.Estimate"/>), shown beside the routes; optional.</param>
+    public static RouteReport Find(PropertyModel model, ChemicalEquation target, RouteSearchOptions? options = null, DerivedEstimate? networkEstimate = null)
     {
         ArgumentNullException.ThrowIfNull(model);
         ArgumentNullException.ThrowIfNull(target);
         options ??= new RouteSearchOptions();
         SparseVector vector = model.VectorOf(target, out IReadOnlyList<Species> missing);
-        DerivedEstimate? estimate = null;
+        DerivedEstimate? estimate = networkEstimate is { IsEstimable: true } ? networkEstimate : null;
         if (missing.Count > 0 || vector.IsZero)
         {
             // A species no measurement mentions cannot be reached; a target of reference states only is zero by definition.
@@ -28,12 +28,6 @@ public static class RouteAnalysis
         }
 
         RouteSearchResult result = FindRoutes.To(model.ToRouteNetwork(), vector, options);
-        if (solution is not null)
-        {
-            DerivedEstimate derived = solution.Estimate(PropertyModel.RowOf(vector));
-            estimate = derived.IsEstimable ? derived : null;
-        }
-
         var routes = result.Routes.Select((route, position) => Explain(model, target, route, position + 1)).ToArray();
         Species[] unreachable = result.UnreachableSpecies.Select(index => model.Unknowns[index]).ToArray();
         return new RouteReport(target, model.Family, routes, result.RoutesFound, result.Cut, result.IndependentRouteCount, unreachable, estimate, options.MaxSteps);

@@ -1,18 +1,17 @@
 using System.Globalization;
 using PathFinder.Chemistry;
 using PathFinder.Quantities;
-using PathFinder.Solving;
 using PathFinder.Thermodynamics;
 
 namespace PathFinder.Analysis;
 
-/// <summary>A target reaction's ΔrH, ΔrS, ΔrG and equilibrium constant at a chosen temperature, from the network solutions.</summary>
+/// <summary>A target reaction's ΔrH, ΔrS, ΔrG and equilibrium constant at a chosen temperature, from the network's joint solution.</summary>
 /// <remarks>
-/// <para>ΔrH°(298.15 K) comes from the enthalpy solution and ΔrS°(298.15 K) from the entropy solution (ΔS and S° data),
-/// or, when entropies do not determine it, from ΔS = (ΔH − ΔG)/T with the Gibbs-energy solution. Kirchhoff's law moves
-/// both to T with the species' heat capacities; ΔrG(T) = ΔrH(T) − T·ΔrS(T) and K = exp(−ΔrG°/RT).</para>
-/// <para>Uncertainties: the families are solved from disjoint measurements, so ΔH and ΔS are taken as uncorrelated;
-/// heat-capacity integrals are taken as exact (no uncertainty is given for Cp data).</para>
+/// <para>All three come from the one joint solution (<see cref="ThermoModel"/>): ΔrH°(298.15 K) = Σν·ΔfH°,
+/// ΔrS°(298.15 K) = Σν·S°, and ΔrG°(T) = ΔrH°(298.15) − T·ΔrS°(298.15) + (∫ΔrCp dT − T·∫ΔrCp/T dT), evaluated as one
+/// combination of the unknowns, so its uncertainty includes the correlation of ΔfH° and S° that ΔG and K data create.
+/// Kirchhoff's law moves ΔrH° and ΔrS° to T with the species' heat capacities; K = exp(−ΔrG°/RT).</para>
+/// <para>Heat-capacity integrals are taken as exact (no uncertainty is given for Cp data).</para>
 /// </remarks>
 /// <param name="Temperature">T in K.</param>
 /// <param name="Enthalpy">ΔrH°(T) in kJ/mol, or null when the data do not determine it.</param>
@@ -28,7 +27,7 @@ public sealed record TargetConditions(
     EquilibriumConstant? EquilibriumConstant,
     IReadOnlyList<string> Notes)
 {
-    /// <summary>Evaluates <paramref name="target"/> at <paramref name="temperature"/> from the network solutions (made once and reused).</summary>
+    /// <summary>Evaluates <paramref name="target"/> at <paramref name="temperature"/> from the network's joint solution (made once and reused).</summary>
     public static TargetConditions Evaluate(NetworkSolutions solutions, ChemicalEquation target, double temperature)
     {
         ArgumentNullException.ThrowIfNull(solutions);
@@ -38,69 +37,45 @@ public sealed record TargetConditions(
             throw new ArgumentOutOfRangeException(nameof(temperature), temperature, "The temperature must be finite and positive, in K.");
         }
 
-        IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities = solutions.HeatCapacities;
         const double reference = PhysicalConstants.StandardTemperature;
         var notes = new List<string>();
         UncertainValue? enthalpy = solutions.Estimate(PropertyFamily.Enthalpy, target);
         UncertainValue? entropy = solutions.Estimate(PropertyFamily.Entropy, target);
-        notes.Add(enthalpy is null ? "ΔrH°(298.15 K): not determined by the ΔH/ΔU data" : "ΔrH°(298.15 K): network least-squares estimate");
-        if (entropy is null)
-        {
-            UncertainValue? gibbs = solutions.Estimate(PropertyFamily.GibbsEnergy, target);
-            if (enthalpy is { } h && gibbs is { } g)
-            {
-                entropy = GibbsRelations.Entropy(new UncertainValue(h.Value * 1000, h.StandardUncertainty * 1000), new UncertainValue(g.Value * 1000, g.StandardUncertainty * 1000), reference);
-                notes.Add("ΔrS°(298.15 K): from (ΔH − ΔG)/T with the ΔG data");
-            }
-            else
-            {
-                notes.Add("ΔrS°(298.15 K): not determined (no ΔS, S° or ΔG data reach the target)");
-            }
-        }
-        else
-        {
-            notes.Add("ΔrS°(298.15 K): network least-squares estimate from ΔS and S° data");
-        }
-
-        var species = target.Terms
-            .Where(term => !term.Species.Formula.IsElectron)
-            .Select(term => new ReactionSpecies<Species>(term.Species, term.Coefficient.ToDouble(), heatCapacities.GetValueOrDefault(term.Species)))
-            .ToArray();
-        var heatCapacity = new ReactionHeatCapacity<Species>(species);
+        notes.Add(enthalpy is null ? "ΔrH°(298.15 K): not determined by the data" : "ΔrH°(298.15 K): joint least-squares estimate");
+        notes.Add(entropy is null ? "ΔrS°(298.15 K): not determined (no S°, ΔS, ΔG or K data fix it)" : "ΔrS°(298.15 K): joint least-squares estimate");
         bool moved = Math.Abs(temperature - reference) > PropertyModel.TemperatureTolerance;
-        if (moved && !heatCapacity.IsComplete)
-        {
-            notes.Add($"not moved to {temperature.ToString("0.##", CultureInfo.InvariantCulture)} K: no heat capacities for {string.Join(", ", heatCapacity.SpeciesWithoutData.Select(item => item.Name))}");
-            return new TargetConditions(temperature, null, null, null, null, notes);
-        }
-
+        string at = temperature.ToString("0.##", CultureInfo.InvariantCulture);
         if (moved)
         {
+            ReactionHeatCapacity<Species> heatCapacity = solutions.Model.HeatCapacityOf(target);
+            if (!heatCapacity.IsComplete)
+            {
+                notes.Add($"not moved to {at} K: no heat capacities for {string.Join(", ", heatCapacity.SpeciesWithoutData.Select(item => item.Name))}");
+                return new TargetConditions(temperature, null, null, null, null, notes);
+            }
+
             foreach (SpeciesRangeWarning<Species> warning in heatCapacity.CheckInterval(reference, temperature))
             {
                 notes.Add($"heat capacity of {warning.Species.Name} extrapolated: {warning.Warning.Message}");
             }
-        }
 
-        UncertainValue? enthalpyAtT = enthalpy is { } hh
-            ? new UncertainValue(hh.Value + (heatCapacity.IntegrateHeatCapacity(reference, temperature) / 1000.0), hh.StandardUncertainty)
-            : null;
-        UncertainValue? entropyAtT = entropy is { } ss
-            ? new UncertainValue(ss.Value + heatCapacity.IntegrateHeatCapacityOverTemperature(reference, temperature), ss.StandardUncertainty)
-            : null;
-        if (moved)
-        {
             notes.Add("moved from 298.15 K with Kirchhoff's law (heat-capacity data)");
         }
 
-        if (enthalpyAtT is not { } hT || entropyAtT is not { } sT)
+        UncertainValue? enthalpyAtT = moved ? solutions.Estimate(PropertyFamily.Enthalpy, target, temperature) : enthalpy;
+        UncertainValue? entropyAtT = moved ? solutions.Estimate(PropertyFamily.Entropy, target, temperature) : entropy;
+        UncertainValue? gibbsAtT = solutions.Estimate(PropertyFamily.GibbsEnergy, target, temperature);
+        if (gibbsAtT is not { } gibbs)
         {
             return new TargetConditions(temperature, enthalpyAtT, entropyAtT, null, null, notes);
         }
 
-        UncertainValue gibbsJoules = GibbsRelations.GibbsEnergy(new UncertainValue(hT.Value * 1000, hT.StandardUncertainty * 1000), sT, temperature);
-        EquilibriumConstant k = GibbsRelations.EquilibriumConstant(gibbsJoules, temperature);
-        var gibbsAtT = new UncertainValue(gibbsJoules.Value / 1000.0, gibbsJoules.StandardUncertainty / 1000.0);
-        return new TargetConditions(temperature, enthalpyAtT, entropyAtT, gibbsAtT, k, notes);
+        if (enthalpyAtT is null || entropyAtT is null)
+        {
+            notes.Add($"ΔrG°({at} K): determined as a whole by ΔG or K data although ΔrH° and ΔrS° are not each");
+        }
+
+        EquilibriumConstant k = GibbsRelations.EquilibriumConstant(new UncertainValue(gibbs.Value * 1000.0, gibbs.StandardUncertainty * 1000.0), temperature);
+        return new TargetConditions(temperature, enthalpyAtT, entropyAtT, gibbs, k, notes);
     }
 }

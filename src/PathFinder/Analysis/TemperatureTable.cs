@@ -1,6 +1,7 @@
 using System.Globalization;
 using PathFinder.Chemistry;
 using PathFinder.Quantities;
+using PathFinder.Solving;
 using PathFinder.Thermodynamics;
 
 namespace PathFinder.Analysis;
@@ -11,22 +12,21 @@ namespace PathFinder.Analysis;
 /// Cp minus its elements' (in their 298.15 K reference states: graphite, H2(g), O2(g), …). So ΔfH°(T) needs Cp of the
 /// species and of every element in it; species lacking any are listed with what is missing.</para>
 /// <para>S°(T) = S°(298.15 K) + ∫Cp/T dT needs only the species' own Cp.</para>
-/// <para>ΔfG°(T) = ΔfH°(T) − T·ΔfS°(T) comes from the ΔH and S° solutions (ΔG data alone cannot be moved in
-/// temperature; they stand in for ΔfS° through (ΔH − ΔG)/T only when entropies are missing), see
-/// <see cref="TargetConditions"/>. Its value at 298.15 K is computed the same way, so both columns agree in origin.</para>
+/// <para>ΔfG°(T) = ΔfH°(298.15) − T·ΔfS°(298.15) + (∫ΔfCp dT − T·∫ΔfCp/T dT), one combination of the joint solution's
+/// unknowns, so its uncertainty includes the correlation of ΔfH° and S°.</para>
 /// <para>Uncertainties are those at 298.15 K: heat-capacity integrals are taken as exact. Phase changes of the
 /// elements between 298.15 K and T are not modelled (the formation reaction keeps the 298.15 K reference states).</para>
 /// </remarks>
 /// <param name="Family">The family tabulated.</param>
 /// <param name="Temperature">T in K.</param>
-/// <param name="Species">One row per species the family's data involve (determined or not), in model order.</param>
+/// <param name="Species">One row per species the view concerns (determined or not), in model order.</param>
 public sealed record TemperatureTable(PropertyFamily Family, double Temperature, IReadOnlyList<SpeciesAtTemperature> Species)
 {
     /// <summary>The species whose value could not be moved for lack of heat capacities.</summary>
     public IEnumerable<SpeciesAtTemperature> LackingHeatCapacities => Species.Where(row => row.AtReference is not null && row.MissingHeatCapacities.Count > 0);
 
     /// <summary>Moves every species of <paramref name="family"/> to <paramref name="temperature"/>.</summary>
-    /// <returns>The table, or null when the network has no data of the family (for ΔfG°: no ΔH data).</returns>
+    /// <returns>The table, or null when the network holds nothing of that quantity.</returns>
     public static TemperatureTable? Evaluate(NetworkSolutions solutions, PropertyFamily family, double temperature)
     {
         ArgumentNullException.ThrowIfNull(solutions);
@@ -35,13 +35,12 @@ public sealed record TemperatureTable(PropertyFamily Family, double Temperature,
             throw new ArgumentOutOfRangeException(nameof(temperature), temperature, "The temperature must be finite and positive, in K.");
         }
 
-        SolveReport? report = solutions.Report(family == PropertyFamily.GibbsEnergy ? PropertyFamily.Enthalpy : family);
+        SolveReport? report = solutions.Report(family);
         if (report is null)
         {
             return null;
         }
 
-        IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities = solutions.HeatCapacities;
         var rows = new List<SpeciesAtTemperature>();
         foreach (SpeciesEstimate estimate in report.Species)
         {
@@ -49,43 +48,19 @@ public sealed record TemperatureTable(PropertyFamily Family, double Temperature,
             ChemicalEquation moved = family == PropertyFamily.Entropy
                 ? ChemicalEquation.FromTerms([new EquationTerm(species, Fractions.Fraction.One)])
                 : ChemicalEquation.Formation(species);
-            var reaction = new ReactionHeatCapacity<Species>(moved.Terms
-                .Where(term => !term.Species.Formula.IsElectron)
-                .Select(term => new ReactionSpecies<Species>(term.Species, term.Coefficient.ToDouble(), heatCapacities.GetValueOrDefault(term.Species))));
-            if (family == PropertyFamily.GibbsEnergy)
-            {
-                rows.Add(Gibbs(solutions, species, moved, reaction, temperature));
-                continue;
-            }
-
             UncertainValue? atReference = estimate.IsDetermined ? new UncertainValue(estimate.Value, estimate.Uncertainty) : null;
-            if (atReference is not { } value || !reaction.IsComplete)
+            ModelQuantity quantity = report.Model.Quantity(family, moved, temperature);
+            if (atReference is null || quantity.LackingHeatCapacity.Count > 0)
             {
-                rows.Add(new SpeciesAtTemperature(species, atReference, null, reaction.SpeciesWithoutData, []));
+                rows.Add(new SpeciesAtTemperature(species, atReference, null, quantity.LackingHeatCapacity, []));
                 continue;
             }
 
-            double reference = PhysicalConstants.StandardTemperature;
-            double shift = family == PropertyFamily.Enthalpy
-                ? reaction.IntegrateHeatCapacity(reference, temperature) / 1000.0
-                : reaction.IntegrateHeatCapacityOverTemperature(reference, temperature);
-            rows.Add(new SpeciesAtTemperature(species, atReference, new UncertainValue(value.Value + shift, value.StandardUncertainty), [], RangeNotes(reaction, temperature)));
+            DerivedEstimate? atT = quantity.Evaluate(report.Solution);
+            rows.Add(new SpeciesAtTemperature(species, atReference, atT is { } value ? new UncertainValue(value.Value, value.StandardUncertainty) : null, [], RangeNotes(report.Model.HeatCapacityOf(moved), temperature)));
         }
 
         return new TemperatureTable(family, temperature, rows);
-    }
-
-    private static SpeciesAtTemperature Gibbs(NetworkSolutions solutions, Species species, ChemicalEquation formation, ReactionHeatCapacity<Species> reaction, double temperature)
-    {
-        TargetConditions atReference = TargetConditions.Evaluate(solutions, formation, PhysicalConstants.StandardTemperature);
-        UncertainValue? reference = atReference.Gibbs;
-        if (reference is null || !reaction.IsComplete)
-        {
-            return new SpeciesAtTemperature(species, reference, null, reaction.SpeciesWithoutData, reference is null ? atReference.Notes : []);
-        }
-
-        TargetConditions atT = TargetConditions.Evaluate(solutions, formation, temperature);
-        return new SpeciesAtTemperature(species, reference, atT.Gibbs, [], RangeNotes(reaction, temperature));
     }
 
     private static IReadOnlyList<string> RangeNotes(ReactionHeatCapacity<Species> reaction, double temperature) =>

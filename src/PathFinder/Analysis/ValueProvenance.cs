@@ -11,12 +11,14 @@ namespace PathFinder.Analysis;
 /// Var = Σ sᵢ²·uᵢ² = aᵀ·C·a, so the contributions sᵢ²uᵢ² add up exactly to the variance and each share is a
 /// fraction of the whole.</para>
 /// <para>When the solve ran the suspect procedure, the enlarged uncertainties are the ones used (they are held
-/// fixed: the sensitivities are those of the final weighted solve).</para>
+/// fixed: the sensitivities are those of the final weighted solve). The prior of a declared source systematic is an
+/// observation too: its part of the variance is counted under its source, not as a measurement.</para>
 /// </remarks>
 public sealed class ValueProvenance
 {
     private ValueProvenance(
-        PropertyModel model,
+        ThermoModel model,
+        PropertyFamily family,
         ChemicalEquation target,
         double value,
         double variance,
@@ -26,6 +28,7 @@ public sealed class ValueProvenance
         string? reason)
     {
         Model = model;
+        Family = family;
         Target = target;
         Value = value;
         Variance = variance;
@@ -36,7 +39,10 @@ public sealed class ValueProvenance
     }
 
     /// <summary>The model solved.</summary>
-    public PropertyModel Model { get; }
+    public ThermoModel Model { get; }
+
+    /// <summary>Which quantity of the target is traced: ΔrH°, ΔrS° or ΔrG° at 298.15 K.</summary>
+    public PropertyFamily Family { get; }
 
     /// <summary>The target equation.</summary>
     public ChemicalEquation Target { get; }
@@ -44,7 +50,7 @@ public sealed class ValueProvenance
     /// <summary>Whether the data determine the target.</summary>
     public bool IsDetermined => double.IsFinite(Value);
 
-    /// <summary>The network estimate in the family's unit (NaN when not determined).</summary>
+    /// <summary>The network estimate in the quantity's unit, kJ/mol or J/(mol·K) (NaN when not determined).</summary>
     public double Value { get; }
 
     /// <summary>Its variance (unit squared; NaN when not determined).</summary>
@@ -59,42 +65,45 @@ public sealed class ValueProvenance
     /// <summary>Variance by source, largest first.</summary>
     public IReadOnlyList<SourceContribution> Sources { get; }
 
-    /// <summary>Target species that no measurement of the family contains.</summary>
+    /// <summary>Target species that no datum bearing on the quantity contains.</summary>
     public IReadOnlyList<Species> MissingSpecies { get; }
 
     /// <summary>Why the target is not determined, or a note for special cases (null otherwise).</summary>
     public string? Reason { get; }
 
-    /// <summary>Traces <paramref name="target"/> through a solved family.</summary>
-    /// <param name="report">The solved family.</param>
+    /// <summary>Traces <paramref name="target"/> through a view of the joint solution.</summary>
+    /// <param name="report">The view: its family says which quantity of the target is traced.</param>
     /// <param name="target">The target equation (element-balanced).</param>
     /// <param name="sensitivityTolerance">Sensitivities with |s| at or below this are left out (default 1e-12; they are round-off).</param>
     public static ValueProvenance Trace(SolveReport report, ChemicalEquation target, double sensitivityTolerance = 1e-12)
     {
         ArgumentNullException.ThrowIfNull(report);
         ArgumentNullException.ThrowIfNull(target);
-        PropertyModel model = report.Model;
-        Algebra.SparseVector vector = model.VectorOf(target, out IReadOnlyList<Species> missing);
+        ThermoModel model = report.Model;
+        PropertyFamily family = report.Family;
+        ModelQuantity quantity = model.Quantity(family, target);
+        IReadOnlyList<Species> missing = quantity.Missing;
         if (missing.Count > 0)
         {
             string which = string.Join(", ", missing.Select(species => species.Name));
-            return new ValueProvenance(model, target, double.NaN, double.NaN, [], [], missing, $"no {model.Family.ResultProperty().Symbol()} measurement contains {which}");
+            return new ValueProvenance(model, family, target, double.NaN, double.NaN, [], [], missing, $"no datum that bears on {family.ResultProperty().Symbol()} contains {which}");
         }
 
-        if (vector.IsZero)
+        if (quantity.Vector.IsZero)
         {
-            return new ValueProvenance(model, target, 0.0, 0.0, [], [], [], $"every species of the target has {model.Family.SpeciesQuantity()} = 0 by convention, so the value is exactly 0");
+            return new ValueProvenance(model, family, target, 0.0, 0.0, [], [], [], $"every species of the target has {family.SpeciesQuantity()} = 0 by convention, so the value is exactly 0");
         }
 
-        QuantityProvenance provenance = report.Solution.Provenance(PropertyModel.RowOf(vector));
+        QuantityProvenance provenance = report.Solution.Provenance(quantity.Row);
         if (!provenance.Estimate.IsEstimable)
         {
-            return new ValueProvenance(model, target, double.NaN, double.NaN, [], [], [], "the measurements do not determine this combination (the species involved are known only relative to others)");
+            return new ValueProvenance(model, family, target, double.NaN, double.NaN, [], [], [], "the data do not determine this combination (the species involved are known only relative to others)");
         }
 
         double variance = provenance.Estimate.Variance;
-        var contributions = provenance.Contributions
-            .Where(entry => Math.Abs(entry.Sensitivity) > sensitivityTolerance)
+        ProvenanceEntry[] entries = provenance.Contributions.Where(entry => Math.Abs(entry.Sensitivity) > sensitivityTolerance).ToArray();
+        var contributions = entries
+            .Where(entry => !model.IsPrior(entry.ObservationIndex))
             .Select(entry => new MeasurementContribution(
                 entry.ObservationIndex,
                 model.Measurements[entry.ObservationIndex],
@@ -103,21 +112,26 @@ public sealed class ValueProvenance
                 entry.VarianceContribution,
                 entry.Share))
             .ToArray();
+        var priors = entries
+            .Where(entry => model.IsPrior(entry.ObservationIndex))
+            .Select(entry => (Source: model.Systematics[entry.ObservationIndex - model.Measurements.Count].Source, entry.VarianceContribution));
         var sources = contributions
-            .GroupBy(item => item.Measurement.Source, StringComparer.Ordinal)
+            .Select(item => (item.Measurement.Source, Counted: 1, item.VarianceContribution))
+            .Concat(priors.Select(prior => (prior.Source, Counted: 0, prior.VarianceContribution)))
+            .GroupBy(item => item.Source, StringComparer.Ordinal)
             .Select(group =>
             {
                 double sum = group.Sum(item => item.VarianceContribution);
-                return new SourceContribution(group.Key, group.Count(), sum, variance > 0.0 ? sum / variance : 0.0);
+                return new SourceContribution(group.Key, group.Sum(item => item.Counted), sum, variance > 0.0 ? sum / variance : 0.0);
             })
             .OrderByDescending(source => source.VarianceContribution)
             .ThenBy(source => source.Source, StringComparer.Ordinal)
             .ToArray();
-        return new ValueProvenance(model, target, provenance.Estimate.Value, variance, contributions, sources, [], null);
+        return new ValueProvenance(model, family, target, provenance.Estimate.Value, variance, contributions, sources, [], null);
     }
 
-    /// <summary>Traces <paramref name="target"/> in one family of a network (solved after the suspect procedure).</summary>
-    /// <returns>The provenance, or null when the network has no data of that family.</returns>
+    /// <summary>Traces ΔrH°, ΔrS° or ΔrG° of <paramref name="target"/> through the network's joint solution.</summary>
+    /// <returns>The provenance, or null when the network has no data that bear on that quantity.</returns>
     public static ValueProvenance? Trace(NetworkSolutions solutions, PropertyFamily family, ChemicalEquation target)
     {
         ArgumentNullException.ThrowIfNull(solutions);

@@ -19,7 +19,7 @@ public static partial class FigureBuilder
     {
         ArgumentNullException.ThrowIfNull(report);
         ArgumentNullException.ThrowIfNull(route);
-        var builder = new Builder(marks ?? FigureMarks.None, unit, report.Family);
+        var builder = new Builder(marks ?? FigureMarks.None, unit, report.Family.ResultProperty().Symbol());
         builder.AddTarget(report.Target, route.Value, route.Uncertainty);
         foreach (RouteStep step in route.Steps)
         {
@@ -33,7 +33,7 @@ public static partial class FigureBuilder
     public static NetworkDiagram TargetNetwork(RouteReport report, string unit, FigureMarks? marks = null)
     {
         ArgumentNullException.ThrowIfNull(report);
-        var builder = new Builder(marks ?? FigureMarks.None, unit, report.Family);
+        var builder = new Builder(marks ?? FigureMarks.None, unit, report.Family.ResultProperty().Symbol());
         ExplainedRoute? best = report.Routes.FirstOrDefault();
         builder.AddTarget(report.Target, best?.Value ?? double.NaN, best?.Uncertainty ?? double.NaN);
         var bestIds = new HashSet<string>(best?.Steps.Select(step => step.Measurement.Id) ?? [], StringComparer.Ordinal);
@@ -46,10 +46,10 @@ public static partial class FigureBuilder
     }
 
     /// <summary>The network diagram of one cycle, its measurements highlighted.</summary>
-    public static NetworkDiagram CycleNetwork(CycleCheck cycle, PropertyFamily family, FigureMarks? marks = null)
+    public static NetworkDiagram CycleNetwork(CycleCheck cycle, FigureMarks? marks = null)
     {
         ArgumentNullException.ThrowIfNull(cycle);
-        var builder = new Builder(marks ?? FigureMarks.None, family.Unit().Symbol, family);
+        var builder = new Builder(marks ?? FigureMarks.None, cycle.Unit, cycle.Symbol);
         foreach ((PreparedMeasurement measurement, Fraction _) in cycle.Members)
         {
             builder.AddMeasurement(measurement, highlighted: true, includeReferences: true);
@@ -64,7 +64,7 @@ public static partial class FigureBuilder
     {
         ArgumentNullException.ThrowIfNull(graph);
         ArgumentNullException.ThrowIfNull(centres);
-        var builder = new Builder(marks ?? FigureMarks.None, family.Unit().Symbol, family);
+        var builder = new Builder(marks ?? FigureMarks.None, family.Unit().Symbol, family.ResultProperty().Symbol());
         IReadOnlyList<NetworkVertex> vertices = graph.Neighbourhood(centres, depth);
         foreach (Species centre in centres)
         {
@@ -95,7 +95,8 @@ public static partial class FigureBuilder
     }
 
     /// <summary>The closure ladder of a cycle: the same picture, ending in the gap where it fails to close.</summary>
-    public static CycleClosure CycleLevels(CycleCheck cycle, PropertyFamily family)
+    /// <remarks>A cycle that mixes properties (<see cref="CycleCheck.IsMixed"/>) is no chemical ladder; its steps are drawn with their values all the same.</remarks>
+    public static CycleClosure CycleLevels(CycleCheck cycle)
     {
         ArgumentNullException.ThrowIfNull(cycle);
         var members = cycle.Members.Select(member =>
@@ -108,7 +109,7 @@ public static partial class FigureBuilder
         ChemicalEquation first = members[0].scaled;
         var start = first.Terms.Where(term => term.Coefficient < Fraction.Zero).ToDictionary(term => term.Species, term => -term.Coefficient);
         (string startState, List<EnthalpyStep> steps) = Ladder(start, members);
-        return new CycleClosure($"Cycle {cycle.Number}: {CombinationText(cycle)}", startState, steps, cycle.Uncertainty, cycle.Z, family.ResultProperty().Symbol(), family.Unit().Symbol);
+        return new CycleClosure($"Cycle {cycle.Number}: {CombinationText(cycle)}", startState, steps, cycle.Uncertainty, cycle.Z, cycle.Symbol, cycle.Unit);
     }
 
     /// <summary>A step as the trade writes it: "A08", "B04 reversed", "A03 reversed, × 1/3" (the wording of <see cref="RouteStep.Operation"/>).</summary>
@@ -273,7 +274,7 @@ public static partial class FigureBuilder
         return text.Length > 0 ? text.ToString() : "0";
     }
 
-    private sealed class Builder(FigureMarks marks, string unit, PropertyFamily family)
+    private sealed class Builder(FigureMarks marks, string unit, string targetSymbol)
     {
         private readonly List<NetworkNode> _nodes = [];
         private readonly List<NetworkEdge> _edges = [];
@@ -282,10 +283,9 @@ public static partial class FigureBuilder
 
         public void AddTarget(ChemicalEquation target, double value, double uncertainty)
         {
-            string symbol = family.ResultProperty().Symbol();
             string sub = double.IsFinite(value)
-                ? $"{symbol} = {DiagramText.WithUncertainty(value, uncertainty, 2)} {unit}"
-                : $"{symbol} = ?";
+                ? $"{targetSymbol} = {DiagramText.WithUncertainty(value, uncertainty, 2)} {unit}"
+                : $"{targetSymbol} = ?";
             _ids.Add("target");
             _nodes.Add(NetworkNode.Target("target", sub, NetworkNodeFlags.Highlighted));
             foreach (EquationTerm term in target.Terms)
@@ -315,12 +315,12 @@ public static partial class FigureBuilder
             return id;
         }
 
-        /// <summary>Adds a measurement as analysed: its value converted to the family's property (ΔU → ΔH), said so in the label.</summary>
+        /// <summary>Adds a measurement as analysed: its value converted to the property used (ΔU → ΔH, ln K → ΔG), said so in the label.</summary>
         public void AddMeasurement(PreparedMeasurement prepared, bool highlighted, bool includeReferences)
         {
-            string symbol = family.ResultProperty().Symbol();
+            string used = prepared.Symbol;
             string given = prepared.Measurement.Property.Symbol();
-            AddMeasurement(prepared.Measurement, given == symbol ? symbol : $"{symbol} (from {given})", prepared.Value, prepared.Uncertainty, highlighted, includeReferences);
+            AddMeasurement(prepared.Measurement, given == used ? used : $"{used} (from {given})", prepared.Value, prepared.Uncertainty, highlighted, includeReferences);
         }
 
         public void AddMeasurement(Measurement measurement, string symbol, double value, double uncertainty, bool highlighted, bool includeReferences)

@@ -105,6 +105,9 @@ public sealed class LeastSquaresSolution
     /// <remarks>Worked out on first use (on all cores for large systems) and kept.</remarks>
     public IReadOnlyList<ObservationDiagnostics> Observations => _diagnostics.Value;
 
+    /// <summary>The adjusted value ŷᵢ = aᵢᵀx̂ of observation i, without working out the other per-observation diagnostics.</summary>
+    public double FittedValue(int observation) => _engine.FittedValue(observation);
+
     /// <summary>Whether unknown j is determined by the data.</summary>
     public bool IsDetermined(int unknown) => _determined[unknown];
 

@@ -1,0 +1,62 @@
+using PathFinder.Chemistry;
+using PathFinder.Quantities;
+using PathFinder.Solving;
+
+namespace PathFinder.Analysis;
+
+/// <summary>Asks <see cref="SlipDiagnosis"/> about a suspect of the joint model, with the phase changes the network knows for its species.</summary>
+internal static class SuspectCauses
+{
+    /// <summary>The likely slip behind measurement <paramref name="index"/>, or null when none fits or nothing predicts it.</summary>
+    public static LikelyCause? Diagnose(ThermoModel model, LeastSquaresSolution solution, int index, double? predicted, double? predictedUncertainty)
+    {
+        if (predicted is not { } p || predictedUncertainty is not { } up)
+        {
+            return null;
+        }
+
+        PreparedMeasurement measurement = model.Measurements[index];
+        var question = new SlipQuestion(measurement.Measurement.Property, measurement.Value, measurement.Correction, measurement.Uncertainty, p, up, Phases(model, solution, measurement));
+        return SlipDiagnosis.Diagnose(question);
+    }
+
+    /// <summary>For each species of the equation, every other state of the same formula that the model knows, with ν·(X(other) − X(written)) in the row's property.</summary>
+    private static List<PhaseAlternative> Phases(ThermoModel model, LeastSquaresSolution solution, PreparedMeasurement measurement)
+    {
+        var alternatives = new List<PhaseAlternative>();
+        ThermoProperty property = measurement.Measurement.Property;
+        PropertyFamily family = property.Dimension() == UnitDimension.MolarEntropy ? PropertyFamily.Entropy
+            : property is ThermoProperty.Enthalpy or ThermoProperty.InternalEnergy ? PropertyFamily.Enthalpy
+            : PropertyFamily.GibbsEnergy;
+        IReadOnlyList<Species> known = model.Species;
+        foreach (EquationTerm term in measurement.Equation.Terms)
+        {
+            foreach (Species other in known)
+            {
+                if (other.Equals(term.Species) || other.Formula.HillNotation != term.Species.Formula.HillNotation || other.Label != term.Species.Label)
+                {
+                    continue;
+                }
+
+                // The change written → other as a reaction of the row's own kind (at the row's temperature for ΔG and K).
+                ChemicalEquation change = ChemicalEquation.FromTerms([new EquationTerm(term.Species, Fractions.Fraction.MinusOne), new EquationTerm(other, Fractions.Fraction.One)]);
+                ModelQuantity quantity = model.Quantity(family, change, measurement.Measurement.Temperature);
+                if (quantity.Missing.Count > 0 || quantity.Vector.IsZero)
+                {
+                    continue;
+                }
+
+                DerivedEstimate estimate = solution.Estimate(quantity.Row);
+                if (!estimate.IsEstimable)
+                {
+                    continue;
+                }
+
+                double nu = term.Coefficient.ToDouble();
+                alternatives.Add(new PhaseAlternative(term.Species, other, nu, nu * estimate.Value, Math.Abs(nu) * estimate.StandardUncertainty));
+            }
+        }
+
+        return alternatives;
+    }
+}
