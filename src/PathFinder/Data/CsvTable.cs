@@ -60,8 +60,15 @@ public sealed class CsvTable
         return -1;
     }
 
+    /// <summary>The measurement header, named by the hint for an empty file unless a table says otherwise.</summary>
+    public const string MeasurementHeader = "id,equation,property,value,uncertainty,unit,temperature,source";
+
     /// <summary>Reads a CSV file; problems that make the file unreadable are added to <paramref name="diagnostics"/> and null is returned.</summary>
-    public static CsvTable? Read(string path, string displayPath, ICollection<Diagnostic> diagnostics)
+    /// <param name="path">The file.</param>
+    /// <param name="displayPath">The file name used in diagnostics.</param>
+    /// <param name="diagnostics">Where problems are added.</param>
+    /// <param name="expectedHeader">The header this kind of table has, named in the hint for an empty file.</param>
+    public static CsvTable? Read(string path, string displayPath, ICollection<Diagnostic> diagnostics, string expectedHeader = MeasurementHeader)
     {
         ArgumentNullException.ThrowIfNull(path);
         ArgumentNullException.ThrowIfNull(diagnostics);
@@ -76,12 +83,12 @@ public sealed class CsvTable
             return null;
         }
 
-        return Parse(bytes, displayPath, diagnostics);
+        return Parse(bytes, displayPath, diagnostics, expectedHeader);
     }
 
     /// <summary>Parses CSV content already in memory (see <see cref="Read"/>).</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    public static CsvTable? Parse(byte[] bytes, string displayPath, ICollection<Diagnostic> diagnostics)
+    public static CsvTable? Parse(byte[] bytes, string displayPath, ICollection<Diagnostic> diagnostics, string expectedHeader = MeasurementHeader)
     {
         ArgumentNullException.ThrowIfNull(bytes);
         var fileLocation = new SourceLocation(displayPath);
@@ -147,7 +154,7 @@ public sealed class CsvTable
 
         if (headerText is null)
         {
-            diagnostics.Add(Diagnostic.Error("empty-file", fileLocation, "the file has no header and no data", "the first non-comment line must be the header: id,equation,property,value,uncertainty,unit,temperature,source"));
+            diagnostics.Add(Diagnostic.Error("empty-file", fileLocation, "the file has no header and no data", $"the first non-comment line must be the header: {expectedHeader}"));
             return null;
         }
 

@@ -48,7 +48,7 @@ public static class SourceSystematicsReader
             return [];
         }
 
-        CsvTable? table = CsvTable.Read(path, path, diagnostics);
+        CsvTable? table = CsvTable.Read(path, path, diagnostics, string.Join(",", RequiredColumns.Append(NoteColumn)));
         if (table is null || !ReadHeader(table, diagnostics, out int sourceColumn, out int systematicColumn, out int unitColumn, out int noteColumn))
         {
             return [];

@@ -246,6 +246,20 @@ public sealed class SourceSystematicsReaderTests : IDisposable
         Assert.Empty(result.SourceSystematics);
     }
 
+    [Theory]
+    [InlineData("")]
+    [InlineData("# calibrations, to come\n")]
+    public void Read_AnEmptyFileNamesTheSourcesHeader(string content)
+    {
+        _folder.Write("lab.csv", Data);
+        string sources = _folder.Write("sources.csv", content);
+
+        Diagnostic error = Assert.Single(NetworkReader.Read(_folder.Path).Diagnostics);
+
+        Assert.Equal(("empty-file", sources), (error.Code, error.Location.File));
+        Assert.Equal("the first non-comment line must be the header: source,systematic,unit,note", error.Hint);
+    }
+
     [Fact]
     public void Read_RepeatedColumnIsAnError_UnknownColumnAWarning()
     {
