@@ -69,11 +69,7 @@ public sealed class DrawCommand
 
         OptionParsing.Positive(request.Depth, "--depth");
         OptionParsing.Positive(request.MaxNodes, "--max-nodes");
-        string? folder = Path.GetDirectoryName(Path.GetFullPath(request.Output));
-        if (folder is not null && !Directory.Exists(folder))
-        {
-            throw new UserInputException($"the folder of --output does not exist: {folder}");
-        }
+        OutputPaths.Check(request.Output, "--output");
 
         AnalysisSession? session = AnalysisSession.Open(request.Network, context, request.SkipInvalid, out int exitCode);
         if (session is null)

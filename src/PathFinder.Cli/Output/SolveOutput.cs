@@ -1,6 +1,8 @@
 using System.Globalization;
 using System.Text;
+using CsvHelper;
 using PathFinder.Analysis;
+using PathFinder.IO;
 using PathFinder.Quantities;
 
 namespace PathFinder.Cli.Output;
@@ -87,6 +89,28 @@ public static class SolveOutput
                 WriteFooter(output, report);
                 return;
         }
+    }
+
+    /// <summary>Writes the covariance of the view's determined quantities to <paramref name="path"/> as CSV (<c>row,column,covariance</c>), atomically.</summary>
+    public static void WriteCovariance(string path, SolveReport report)
+    {
+        ArgumentNullException.ThrowIfNull(report);
+        AtomicFile.Write(path, stream =>
+        {
+            using var writer = new StreamWriter(stream, new UTF8Encoding(encoderShouldEmitUTF8Identifier: false), leaveOpen: true);
+            using var csv = new CsvWriter(writer, CultureInfo.InvariantCulture);
+            csv.WriteField("row");
+            csv.WriteField("column");
+            csv.WriteField("covariance");
+            csv.NextRecord();
+            foreach (CovarianceEntry entry in report.Covariances())
+            {
+                csv.WriteField(entry.Row);
+                csv.WriteField(entry.Column);
+                csv.WriteField(entry.Covariance.ToString("R", CultureInfo.InvariantCulture));
+                csv.NextRecord();
+            }
+        });
     }
 
     /// <summary>What the quantity is made of in the joint model, in one line.</summary>

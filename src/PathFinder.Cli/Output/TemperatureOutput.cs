@@ -28,9 +28,12 @@ public static class TemperatureOutput
         {
             PropertyFamily.Enthalpy => "ΔfH°(T) = ΔfH°(298.15 K) + ∫ΔfCp dT, Cp of the species and its elements",
             PropertyFamily.Entropy => "S°(T) = S°(298.15 K) + ∫Cp/T dT",
-            _ => "ΔfG°(T) = ΔfH°(T) − T·ΔfS°(T), from the ΔH and S° solutions moved with Cp (ΔG data cannot be moved alone)",
+            _ => "ΔfG°(T) = ΔfH°(T) − T·ΔfS°(T), one combination of the joint solution's ΔfH° and S° moved with Cp",
         };
-        output.WriteLine($"{quantity} at {at} K in {unit}: {how}; uncertainties as at 298.15 K (Cp taken as exact)");
+        string uncertainties = table.Family == PropertyFamily.GibbsEnergy
+            ? $"uncertainties at {at} K from the joint covariance (Cp taken as exact)"
+            : "uncertainties as at 298.15 K (Cp taken as exact)";
+        output.WriteLine($"{quantity} at {at} K in {unit}: {how}; {uncertainties}");
         SpeciesAtTemperature[] moved = table.Species.Where(row => row.AtTemperature is not null).ToArray();
         if (moved.Length == 0)
         {

@@ -1,3 +1,4 @@
+using Fractions;
 using PathFinder.Chemistry;
 using PathFinder.Routes;
 using PathFinder.Solving;
@@ -113,13 +114,7 @@ public static class ConsistencyCheck
 
         CycleSearchResult cycles = cycleSearch.GetAwaiter().GetResult();
         CycleCheck[] cycleChecks = cycles.Cycles
-            .Select((cycle, position) => new CycleCheck(
-                position + 1,
-                cycle.Measurements.Select((index, k) => (model.Measurements[index], cycle.Factors[k])).ToArray(),
-                cycle.Residual,
-                cycle.Uncertainty,
-                cycle.Z,
-                Math.Abs(cycle.Z) > options.Threshold))
+            .Select((cycle, position) => Check(model, cycle, position + 1, options.Threshold))
             .ToArray();
 
         return new ModelConsistency(
@@ -136,10 +131,43 @@ public static class ConsistencyCheck
             adjusted);
     }
 
-    /// <summary>The source whose common offset (not yet in the model) lowers χ² most, when that beats the critical value and every single measurement; otherwise null.</summary>
+    /// <summary>A found cycle as reported; a cycle that mixes properties is scaled so its smallest energy factor is ±1.</summary>
+    /// <remarks>
+    /// The search returns the smallest integer factors, which for ΔG − ΔH + (T/1000)·ΔS closures carry the temperature's
+    /// digits (ΔG×40000 …); scaled, the energy rows read 1 and −1, entropy rows T/1000-like factors, and the residual is
+    /// the closure in kJ/mol per mole of reaction. z does not depend on the scale.
+    /// </remarks>
+    private static CycleCheck Check(ThermoModel model, Cycle cycle, int number, double threshold)
+    {
+        var members = cycle.Measurements.Select((index, k) => (Measurement: model.Measurements[index], Factor: cycle.Factors[k])).ToArray();
+        var check = new CycleCheck(number, members, cycle.Residual, cycle.Uncertainty, cycle.Z, Math.Abs(cycle.Z) > threshold);
+        if (!check.IsMixed)
+        {
+            return check;
+        }
+
+        Fraction scale = members.Where(member => member.Measurement.IsEnergy).Select(member => member.Factor.Abs()).DefaultIfEmpty(Fraction.One).Min();
+        double size = scale.ToDouble();
+        return check with
+        {
+            Members = members.Select(member => (member.Measurement, member.Factor / scale)).ToArray(),
+            Residual = cycle.Residual / size,
+            Uncertainty = cycle.Uncertainty / size,
+        };
+    }
+
+    /// <summary>The source whose common offset (not yet in the model) is significant and not explained away by one measurement with a larger z²; otherwise null.</summary>
+    /// <remarks>
+    /// With W the weights, C the covariance and r the residuals, a direction d (a source's rows g, or one row eⱼ) lowers χ²
+    /// by (dᵀWr)²/(dᵀPd), P = W − WACAᵀW. The source is taken when its fall passes the Šidák critical value over the
+    /// sources tested, and no single row j with a larger fall zⱼ² makes it insignificant once j is freed, i.e. the
+    /// conditional fall (t_s − p·tⱼ/Pⱼⱼ)²/(gᵀPg − p²/Pⱼⱼ), p = gᵀPeⱼ, stays above the critical value. So an unrelated gross
+    /// error elsewhere does not hide a source's offset, while a key value that alone explains the pattern as well is not
+    /// overruled.
+    /// </remarks>
     private static (string Source, bool Energy, double Drop, double BestSingle)? BestOffsetTest(ThermoModel model, LeastSquaresSolution solution)
     {
-        var tests = new List<(string Source, bool Energy, double Drop)>();
+        var tests = new List<(string Source, bool Energy, int[] Rows, double Weighted, double Denominator, double[] Spread)>();
         foreach (var group in Enumerable.Range(0, model.Measurements.Count)
             .Where(i => model.OffsetOf(i) < 0)
             .GroupBy(i => (model.Measurements[i].Source, model.Measurements[i].IsEnergy)))
@@ -150,7 +178,7 @@ public static class ConsistencyCheck
                 continue;
             }
 
-            // h = Σ wᵢaᵢ and Σ wᵢrᵢ over the source's rows; Δχ² = (Σwᵢrᵢ)² / (Σwᵢ − hᵀCh).
+            // h = Σ wᵢaᵢ and Σ wᵢrᵢ over the source's rows; gᵀPg = Σwᵢ − hᵀCh.
             var h = new Dictionary<int, double>();
             double weights = 0.0;
             double weightedResiduals = 0.0;
@@ -166,14 +194,15 @@ public static class ConsistencyCheck
                 }
             }
 
-            DerivedEstimate spread = solution.Estimate(SparseRow.Of(h.Select(entry => (entry.Key, entry.Value)).ToArray()));
-            double denominator = weights - (spread.IsEstimable ? spread.Variance : weights);
+            SparseRow hRow = SparseRow.Of(h.Select(entry => (entry.Key, entry.Value)).ToArray());
+            double[] spread = solution.CovarianceTimes(hRow);
+            double denominator = weights - hRow.Dot(spread);
             if (!(denominator > 1e-9 * weights))
             {
                 continue; // the source's rows alone fix what they touch: an offset is not identifiable
             }
 
-            tests.Add((group.Key.Source, group.Key.IsEnergy, weightedResiduals * weightedResiduals / denominator));
+            tests.Add((group.Key.Source, group.Key.IsEnergy, rows, weightedResiduals, denominator, spread));
         }
 
         if (tests.Count == 0)
@@ -181,14 +210,47 @@ public static class ConsistencyCheck
             return null;
         }
 
-        (string source, bool energy, double drop) = tests.MaxBy(test => test.Drop);
         double critical = OutlierProcedure.SidakCriticalValue(tests.Count, new OutlierOptions().SignificanceLevel);
-        double bestSingle = solution.Observations.Take(model.Measurements.Count)
-            .Where(diagnostics => diagnostics.NormalizedResidual.HasValue)
-            .Select(diagnostics => diagnostics.NormalizedResidual!.Value * diagnostics.NormalizedResidual.Value)
-            .DefaultIfEmpty(0.0)
-            .Max();
-        return drop > critical * critical && drop > bestSingle ? (source, energy, drop, bestSingle) : null;
+        double threshold = critical * critical;
+        foreach (var test in tests.OrderByDescending(test => test.Weighted * test.Weighted / test.Denominator))
+        {
+            double drop = test.Weighted * test.Weighted / test.Denominator;
+            if (drop <= threshold)
+            {
+                return null;
+            }
+
+            var own = new HashSet<int>(test.Rows);
+            double bestSingle = 0.0;
+            bool explainedAway = false;
+            for (int j = 0; j < model.Measurements.Count && !explainedAway; j++)
+            {
+                ObservationDiagnostics diagnostics = solution.Observations[j];
+                if (diagnostics.NormalizedResidual is not { } z)
+                {
+                    continue;
+                }
+
+                Observation observation = solution.System.Observations[j];
+                double w = observation.Weight;
+                double pjj = w * (1.0 - diagnostics.Leverage);
+                double cross = (own.Contains(j) ? w : 0.0) - (w * observation.Row.Dot(test.Spread));
+                double conditional = Math.Pow(test.Weighted - (cross * w * diagnostics.Residual / pjj), 2) / (test.Denominator - (cross * cross / pjj));
+                if (conditional < threshold || own.Contains(j))
+                {
+                    bestSingle = Math.Max(bestSingle, z * z);
+                }
+
+                explainedAway = z * z > drop && conditional < threshold;
+            }
+
+            if (!explainedAway)
+            {
+                return (test.Source, test.Energy, drop, bestSingle);
+            }
+        }
+
+        return null;
     }
 
     private static SourceCheck[] Sources(ThermoModel model, MeasurementCheck[] checks, LeastSquaresSolution asGiven, LeastSquaresSolution adjusted, List<(string Source, bool Energy, double Drop, double BestSingle)> inferred, double threshold) =>

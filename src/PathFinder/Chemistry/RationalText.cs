@@ -7,7 +7,11 @@ namespace PathFinder.Chemistry;
 /// <summary>Reads and writes exact stoichiometric factors: integers, decimals (<c>0.5</c>) and fractions (<c>3/2</c>).</summary>
 public static class RationalText
 {
-    /// <summary>Formats as an integer or a reduced fraction, e.g. <c>2</c>, <c>-1/2</c>.</summary>
+    /// <summary>Denominators above this are written as exact decimals when they have one (factors that carry a temperature, T/1000 = 5963/20000).</summary>
+    public const int LargestFractionDenominator = 1000;
+
+    /// <summary>Formats as an integer or a reduced fraction, e.g. <c>2</c>, <c>-1/2</c>; an exact decimal such as <c>0.149075</c> when the denominator exceeds <see cref="LargestFractionDenominator"/> and the expansion terminates.</summary>
+    /// <remarks>Either form reads back exactly with <see cref="TryParse(string, out Fraction)"/>.</remarks>
     public static string Format(Fraction value)
     {
         Fraction reduced = value.Reduce();
@@ -19,9 +23,44 @@ public static class RationalText
             denominator = -denominator;
         }
 
+        if (denominator > LargestFractionDenominator && TerminatingDecimal(numerator, denominator) is { } decimalText)
+        {
+            return decimalText;
+        }
+
         return denominator.IsOne
             ? numerator.ToString(CultureInfo.InvariantCulture)
             : $"{numerator.ToString(CultureInfo.InvariantCulture)}/{denominator.ToString(CultureInfo.InvariantCulture)}";
+    }
+
+    /// <summary>The exact decimal of n/d (d &gt; 0, reduced) when d has no prime factors but 2 and 5, else null.</summary>
+    private static string? TerminatingDecimal(BigInteger numerator, BigInteger denominator)
+    {
+        int twos = 0;
+        int fives = 0;
+        BigInteger rest = denominator;
+        while (rest.IsEven)
+        {
+            rest /= 2;
+            twos++;
+        }
+
+        while (rest % 5 == 0)
+        {
+            rest /= 5;
+            fives++;
+        }
+
+        if (!rest.IsOne)
+        {
+            return null;
+        }
+
+        int digits = Math.Max(twos, fives);
+        BigInteger scaled = numerator * BigInteger.Pow(10, digits) / denominator;
+        string magnitude = BigInteger.Abs(scaled).ToString(CultureInfo.InvariantCulture).PadLeft(digits + 1, '0');
+        string text = magnitude[..^digits] + "." + magnitude[^digits..];
+        return scaled.Sign < 0 ? "-" + text : text;
     }
 
     /// <summary>Reads <c>2</c>, <c>0.25</c>, <c>3/2</c> or <c>-1/2</c> exactly; returns false on anything else.</summary>

@@ -152,6 +152,15 @@ public sealed class LeastSquaresSolution
         return new DerivedEstimate(true, RawDot(combination), Math.Max(0.0, combination.Dot(ca)));
     }
 
+    /// <summary>Cov·a as a dense vector over all unknowns (0 outside a's components): what rank-one tests of a direction need beyond aᵀ·Cov·a.</summary>
+    /// <remarks>Meaningful for estimable a (see <see cref="IsEstimable"/>); entries of undetermined unknowns depend on the g-inverse.</remarks>
+    public double[] CovarianceTimes(SparseRow combination)
+    {
+        ArgumentNullException.ThrowIfNull(combination);
+        CheckRange(combination);
+        return _engine.CovarianceTimes(combination);
+    }
+
     /// <summary>Sensitivities and variance contributions of every observation to aᵀx̂ (see <see cref="QuantityProvenance"/>).</summary>
     public QuantityProvenance Provenance(SparseRow combination)
     {
