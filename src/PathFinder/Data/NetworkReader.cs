@@ -70,7 +70,10 @@ public static class NetworkReader
         // After the measurements: a declaration must name a source of the data (before any curation exclusion).
         string sourcesPath = NetworkFiles.Companion(path, NetworkFiles.SourcesFileName);
         string? sourcesFile = File.Exists(sourcesPath) ? sourcesPath : null;
-        IReadOnlyList<SourceSystematic> systematics = SourceSystematicsReader.Read(sourcesFile, sources, diagnostics);
+        var dimensions = measurements
+            .Select(measurement => (measurement.Source, Dimension: measurement.Property.Dimension() == UnitDimension.MolarEntropy ? UnitDimension.MolarEntropy : UnitDimension.MolarEnergy))
+            .ToHashSet();
+        IReadOnlyList<SourceSystematic> systematics = SourceSystematicsReader.Read(sourcesFile, sources, diagnostics, (source, dimension) => dimensions.Contains((source, dimension)));
 
         var network = new ReactionNetwork(name, measurements);
         return new NetworkReadResult(

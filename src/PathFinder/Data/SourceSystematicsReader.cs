@@ -39,7 +39,8 @@ public static class SourceSystematicsReader
     /// <param name="dataSources">Every source the network's data names (compared exactly, case-sensitive).</param>
     /// <param name="diagnostics">Where problems are added.</param>
     /// <returns>The valid declarations, in file order.</returns>
-    public static IReadOnlyList<SourceSystematic> Read(string? path, IEnumerable<string> dataSources, ICollection<Diagnostic> diagnostics)
+    /// <param name="actsOn">Whether the data hold rows of a source that a systematic of the given dimension acts on (energy: ΔH, ΔU, ΔG, K; entropy: ΔS, S°); when given, a declaration acting on no row gets a warning.</param>
+    public static IReadOnlyList<SourceSystematic> Read(string? path, IEnumerable<string> dataSources, ICollection<Diagnostic> diagnostics, Func<string, UnitDimension, bool>? actsOn = null)
     {
         ArgumentNullException.ThrowIfNull(dataSources);
         ArgumentNullException.ThrowIfNull(diagnostics);
@@ -60,7 +61,8 @@ public static class SourceSystematicsReader
         }
 
         var known = new HashSet<string>(dataSources, StringComparer.Ordinal);
-        var firstBySource = new Dictionary<string, SourceLocation>(StringComparer.Ordinal);
+        // A source may declare one energy and one entropy systematic: they act on different rows.
+        var firstBySource = new Dictionary<(string Source, UnitDimension Dimension), SourceLocation>();
         var declarations = new List<SourceSystematic>();
         foreach (CsvRow row in table.Rows)
         {
@@ -73,17 +75,22 @@ public static class SourceSystematicsReader
 
             string source = row.FieldOrEmpty(sourceColumn);
             SourceLocation location = row.LocationOf(sourceColumn, "source");
+            EnergyUnit? unit = ReadUnit(row, unitColumn, diagnostics);
             if (source.Length == 0)
             {
                 diagnostics.Add(Diagnostic.Error("missing-source", location, "the declaration names no source", "write the source as the data's source column writes it (the file name for a file without that column)"));
             }
-            else if (firstBySource.TryGetValue(source, out SourceLocation first))
+            else if (unit is not null && firstBySource.TryGetValue((source, unit.Dimension), out SourceLocation first))
             {
-                diagnostics.Add(Diagnostic.Error("duplicate-source", location, $"source '{source}' is already declared at {first}", "keep one row per source; if two effects are shared, combine them into one standard uncertainty"));
+                diagnostics.Add(Diagnostic.Error("duplicate-source", location, $"source '{source}' already has a systematic of this kind (energy or entropy) at {first}", "keep one row per source and kind; if two effects are shared, combine them into one standard uncertainty"));
             }
             else
             {
-                firstBySource[source] = location;
+                if (unit is not null)
+                {
+                    firstBySource[(source, unit.Dimension)] = location;
+                }
+
                 if (!known.Contains(source))
                 {
                     diagnostics.Add(Diagnostic.Error("unknown-source", location, $"no measurement has the source '{source}'", UnknownSourceHint(source, known)));
@@ -96,10 +103,15 @@ public static class SourceSystematicsReader
                 diagnostics.Add(Diagnostic.Error("bad-systematic", row.LocationOf(systematicColumn, "systematic"), $"the systematic must be positive, not {systematic.Value.ToString(CultureInfo.InvariantCulture)}", "give the standard uncertainty every measurement of the source shares; leave a source without one out of the file"));
             }
 
-            EnergyUnit? unit = ReadUnit(row, unitColumn, diagnostics);
             if (diagnostics.Count > before || systematic is null || unit is null)
             {
                 continue;
+            }
+
+            if (actsOn is not null && known.Contains(source) && !actsOn(source, unit.Dimension))
+            {
+                string rows = unit.Dimension == UnitDimension.MolarEnergy ? "energy rows (ΔH, ΔU, ΔG, K)" : "entropy rows (ΔS, S°)";
+                diagnostics.Add(Diagnostic.Warning("systematic-acts-on-nothing", row.LocationOf(unitColumn, "unit"), $"source '{source}' has no {rows}: this systematic acts on no measurement", "give it in the unit of the source's data (kJ/mol for energies, J/(mol·K) for entropies), or remove the row"));
             }
 
             string note = noteColumn >= 0 ? row.FieldOrEmpty(noteColumn) : "";
