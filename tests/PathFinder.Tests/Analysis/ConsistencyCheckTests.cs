@@ -213,7 +213,7 @@ public sealed class ConsistencyCheckTests : IDisposable
     }
 
     [Fact]
-    public void Run_SourceWithEveryValueShifted_IsFlaggedAsASystematicOffset()
+    public void Run_SourceWithEveryValueShifted_GetsAnInferredOffset_InsteadOfSuspects()
     {
         // Given ten species each measured once by five sources, with source "E" reading 2σ high every time
         // (a synthetic case: invented values; noise-free so the expected z follows in closed form)
@@ -233,20 +233,37 @@ public sealed class ConsistencyCheckTests : IDisposable
         ReactionNetwork network = HandbookData.ReadRows(_folder, rows.ToArray());
 
         // When checked
-        ModelConsistency enthalpy = Assert.IsType<ModelConsistency>(ConsistencyCheck.Run(network).Analysis);
+        ConsistencyReport report = ConsistencyCheck.Run(network);
+        ModelConsistency analysis = Assert.IsType<ModelConsistency>(report.Analysis);
 
-        // Then no single measurement is a suspect, but E is flagged first with offset z = √10 · 2/√(1 + 1/4);
-        // each E value is 2u from the mean of the other four (u/2), the sound sources sit at −0.5/√1.25 each
-        Assert.Empty(enthalpy.Suspects);
-        SourceCheck shifted = enthalpy.Sources[0];
+        // Then no single measurement is a suspect, but E is flagged first, with a common offset inferred for it (before
+        // any suspect): each E value is 2u from the mean of the other four, so the offset is +2u = +1 kJ/mol with
+        // variance u²/8, i.e. z = √10 · 2/√(1 + 1/4) = √32, and fitting it lowers χ² by z² = 32
+        Assert.Empty(analysis.Suspects);
+        Assert.False(report.Consistent);
+        SourceCheck shifted = analysis.Sources[0];
         Assert.Equal("E", shifted.Source);
         Assert.True(shifted.SystematicOffset);
-        Assert.Equal(Math.Sqrt(10) * 2 / Math.Sqrt(1.25), shifted.OffsetZ, 1e-6);
+        Assert.True(shifted.HasInferredOffset);
+        Assert.Equal(["E"], analysis.OffsetSources.Select(source => source.Source));
         Assert.Equal(10, shifted.Checkable);
-        Assert.All(enthalpy.Sources.Skip(1), source =>
+        SourceOffset offset = Assert.Single(shifted.Offsets);
+        Assert.True(offset.IsEnergy);
+        Assert.Equal(10, offset.Rows.Count);
+        Assert.Equal(2 * u, offset.Value, 1e-9);
+        Assert.Equal(u / Math.Sqrt(8), offset.Uncertainty, 1e-9);
+        Assert.Equal(Math.Sqrt(10) * 2 / Math.Sqrt(1.25), offset.Z, 1e-6);
+        Assert.Equal(32.0, offset.ChiSquaredDrop, 1e-6);
+        Assert.True(offset.BestSingleChiSquaredDrop < offset.ChiSquaredDrop);
+
+        // and with E's offset fitted the data close exactly: E's own rows and the sound sources, which without the
+        // offset sat at −√10 · 0.5/√1.25 each, now sit at 0 and none is flagged
+        Assert.Equal(0.0, shifted.OffsetZ, 1e-6);
+        Assert.All(analysis.Sources.Skip(1), source =>
         {
             Assert.False(source.SystematicOffset, source.Source);
-            Assert.Equal(-Math.Sqrt(10) * 0.5 / Math.Sqrt(1.25), source.OffsetZ, 1e-6);
+            Assert.Empty(source.Offsets);
+            Assert.Equal(0.0, source.OffsetZ, 1e-6);
         });
     }
 
