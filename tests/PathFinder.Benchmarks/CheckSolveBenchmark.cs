@@ -101,13 +101,13 @@ public static class CheckSolveBenchmark
         var clock = new StageClock();
         AnalysisSession session = AnalysisSession.Open(folder, context, skipInvalid: false, out _) ?? throw new InvalidOperationException("the generated data did not load");
         string read = clock.Lap();
-        PropertyModel model = session.Model(PropertyFamily.Enthalpy);
+        ThermoModel model = ThermoModel.Build(session.Network, session.HeatCapacities, session.Systematics);
         string build = clock.Lap();
         ObservationSystem system = model.ToObservationSystem();
         string toSystem = clock.Lap();
         LeastSquaresSolution asGiven = WeightedLeastSquares.Solve(system);
         string solve = clock.Lap();
-        SolveReport solveReport = NetworkSolver.Report(model, asGiven, adjusted: false, [], []);
+        SolveReport solveReport = NetworkSolver.Report(new JointSolution(model, asGiven, false, [], []), PropertyFamily.Enthalpy)!;
         SolveOutput.Write(TextWriter.Null, solveReport, "table");
         string solveOutput = clock.Lap();
         OutlierResult outliers = OutlierProcedure.Run(system, new OutlierOptions { Threshold = options.Threshold, InflationFactor = options.InflationFactor });

@@ -81,9 +81,11 @@ public sealed class CheckCommandTests : IDisposable
         Assert.Equal(0, document.RootElement.GetProperty("suspects").GetArrayLength());
 
         // 7 measurements of 4 species: 3 independent cycles (m − rank)
-        JsonElement family = document.RootElement.GetProperty("families")[0];
-        Assert.Equal(4, family.GetProperty("rank").GetInt32());
-        Assert.Equal(3, family.GetProperty("independentCycles").GetInt32());
+        JsonElement model = document.RootElement.GetProperty("model");
+        Assert.Equal(7, model.GetProperty("measurements").GetInt32());
+        Assert.Equal(4, model.GetProperty("formationEnthalpies").GetInt32());
+        Assert.Equal(4, model.GetProperty("rank").GetInt32());
+        Assert.Equal(3, model.GetProperty("independentCycles").GetInt32());
     }
 
     [Theory]

@@ -40,7 +40,7 @@ internal static class AnalysisNetworks
     public static SolveReport SolveRedundant(TempFolder folder)
     {
         NetworkReadResult read = Read(folder, Redundant);
-        return NetworkSolver.Solve(PropertyModel.Build(read.Network, PropertyFamily.Enthalpy), adjust: false);
+        return NetworkSolver.Report(NetworkSolver.Solve(ThermoModel.Build(read.Network), adjust: false), PropertyFamily.Enthalpy)!;
     }
 
     /// <summary>A target read against the species of a solved model.</summary>

@@ -1,9 +1,11 @@
 using System.Globalization;
+using Fractions;
 using MathNet.Numerics.LinearAlgebra;
 using PathFinder.Analysis;
 using PathFinder.Chemistry;
 using PathFinder.Data;
 using PathFinder.Quantities;
+using PathFinder.Solving;
 using PathFinder.Synthetic;
 using PathFinder.Tests.TestSupport;
 
@@ -26,7 +28,7 @@ public sealed class ConsistencyCheckTests : IDisposable
 
         // Then it is consistent: no suspect, no flagged cycle, every checkable measurement well inside 2σ
         Assert.True(report.Consistent);
-        FamilyConsistency enthalpy = Assert.Single(report.Families);
+        ModelConsistency enthalpy = Assert.IsType<ModelConsistency>(report.Analysis);
         Assert.Empty(enthalpy.Suspects);
         Assert.Empty(enthalpy.FlaggedCycles);
         Assert.NotEmpty(enthalpy.Cycles);
@@ -44,7 +46,7 @@ public sealed class ConsistencyCheckTests : IDisposable
         ReactionNetwork network = HandbookData.Read(_folder, HandbookData.ConsistentEnthalpyCsv());
 
         // When solved
-        SolveReport report = NetworkSolver.Solve(PropertyModel.Build(network, PropertyFamily.Enthalpy));
+        SolveReport report = NetworkSolver.Report(NetworkSolver.Solve(ThermoModel.Build(network)), PropertyFamily.Enthalpy)!;
 
         // Then every species comes back at its tabulated ΔfH° within the tabulated uncertainty, and no tighter than the data allow
         (string Name, Tabulated Value)[] expected =
@@ -83,7 +85,7 @@ public sealed class ConsistencyCheckTests : IDisposable
 
         // Then the network is inconsistent and the shifted measurement is the first suspect
         Assert.False(report.Consistent);
-        FamilyConsistency enthalpy = Assert.Single(report.Families);
+        ModelConsistency enthalpy = Assert.IsType<ModelConsistency>(report.Analysis);
         SuspectReport first = enthalpy.Suspects[0];
         Assert.Equal(shiftedId, first.Measurement.Id);
         Assert.Equal(Math.Sign(sigmas), Math.Sign(first.NormalizedResidual));
@@ -105,16 +107,14 @@ public sealed class ConsistencyCheckTests : IDisposable
         // Given the combustion-lab demo
         NetworkReadResult read = NetworkReader.Read(RepoPaths.Demo("combustion-lab"));
 
-        foreach (PropertyFamily family in new[] { PropertyFamily.Enthalpy, PropertyFamily.GibbsEnergy, PropertyFamily.Entropy })
-        {
-            // When each family is analysed
-            PropertyModel model = PropertyModel.Build(read.Network, family, read.HeatCapacities);
-            FamilyConsistency consistency = ConsistencyCheck.Analyse(model);
+        ThermoModel model = ThermoModel.Build(read.Network, read.HeatCapacities, read.SourceSystematics);
 
-            // Then the independent cycle count is m − rank, the rank taken from a dense SVD (MathNet) as reference
-            Assert.Equal(model.Measurements.Count - DenseRank(model), consistency.IndependentCycles);
-            Assert.Equal(consistency.AsGiven.Rank, DenseRank(model));
-        }
+        // When its joint model (every ΔH, S°, ΔS, ΔG and K datum together) is analysed
+        ModelConsistency consistency = ConsistencyCheck.Analyse(model);
+
+        // Then the independent cycle count is m − rank, the rank taken from a dense SVD (MathNet) as reference
+        Assert.Equal(model.Measurements.Count - DenseRank(model), consistency.IndependentCycles);
+        Assert.Equal(consistency.AsGiven.Rank, DenseMatrix(consistency.Model.ToObservationSystem()).Rank());
     }
 
     [Theory]
@@ -124,10 +124,10 @@ public sealed class ConsistencyCheckTests : IDisposable
     {
         // Given a generated network
         SyntheticNetwork synthetic = SyntheticNetworkGenerator.Generate(new SyntheticNetworkOptions { Seed = seed, SpeciesCount = species, MeasurementCount = measurements, Locality = 5 });
-        PropertyModel model = PropertyModel.Build(synthetic.Network, PropertyFamily.Enthalpy);
+        ThermoModel model = ThermoModel.Build(synthetic.Network);
 
         // When analysed
-        FamilyConsistency consistency = ConsistencyCheck.Analyse(model);
+        ModelConsistency consistency = ConsistencyCheck.Analyse(model);
 
         // Then cycles = m − rank, with the rank of the dense matrix (MathNet SVD) as reference
         Assert.Equal(model.Measurements.Count - DenseRank(model), consistency.IndependentCycles);
@@ -136,15 +136,16 @@ public sealed class ConsistencyCheckTests : IDisposable
     [Fact]
     public void Solve_SpeciesValues_EqualADenseNormalEquationsReference()
     {
-        // Given a small network built through PropertyModel (the handbook data with R2 moved by 1.5σ so residuals are not zero)
+        // Given a small network built through ThermoModel (the handbook data with R2 moved by 1.5σ so residuals are not zero)
         ReactionNetwork network = HandbookData.Read(_folder, HandbookData.ConsistentEnthalpyCsv("R2", 1.5));
-        PropertyModel model = PropertyModel.Build(network, PropertyFamily.Enthalpy);
+        ThermoModel model = ThermoModel.Build(network);
 
         // When solved as given
-        SolveReport report = NetworkSolver.Solve(model, adjust: false);
+        SolveReport report = NetworkSolver.Report(NetworkSolver.Solve(model, adjust: false), PropertyFamily.Enthalpy)!;
 
-        // Then values and uncertainties equal x = (AᵀWA)⁻¹AᵀWb and √diag((AᵀWA)⁻¹) from MathNet dense algebra
-        Matrix<double> a = DenseMatrix(model);
+        // Then values and uncertainties equal x = (AᵀWA)⁻¹AᵀWb and √diag((AᵀWA)⁻¹) from MathNet dense algebra,
+        // A being the joint model's observation rows
+        Matrix<double> a = DenseMatrix(model.ToObservationSystem());
         Vector<double> b = Vector<double>.Build.Dense(model.Measurements.Select(item => item.Value).ToArray());
         Vector<double> w = Vector<double>.Build.Dense(model.Measurements.Select(item => 1.0 / (item.Uncertainty * item.Uncertainty)).ToArray());
         Matrix<double> weighted = Matrix<double>.Build.DenseOfDiagonalVector(w);
@@ -163,7 +164,7 @@ public sealed class ConsistencyCheckTests : IDisposable
     }
 
     [Fact]
-    public void Run_GibbsTripleOfWaterFormation_AgreesWhenConsistent_AndIsFlaggedWhenNot()
+    public void Run_GibbsTripleOfWaterFormation_IsAMixedCycle_ThatClosesWhenConsistent_AndIsFlaggedWhenNot()
     {
         // Given ΔfH°(H2O, l) and S° of H2O(l), H2(g), O2(g) (CODATA Key Values 1989, from memory):
         // ΔfS° = 69.95 − 130.680 − ½·205.152 = −163.306 J/(mol·K), ΔfG° = ΔfH° − T·ΔfS° = −237.140 kJ/mol,
@@ -178,18 +179,29 @@ public sealed class ConsistencyCheckTests : IDisposable
         ConsistencyReport goodReport = ConsistencyCheck.Run(good);
         ConsistencyReport badReport = ConsistencyCheck.Run(bad);
 
-        // Then the consistent triple agrees (ΔG given for twice the reaction is rescaled), the shifted one is flagged
-        CrossPropertyCheck agrees = Assert.Single(goodReport.CrossChecks);
+        // Then in each the ΔH, ΔS and ΔG rows of the reaction form one mixed cycle of the joint model, ΔG − ΔH + T·ΔS = 0
+        // at T = 298.15 K (the ΔS factor is −T/1000 of the ΔH factor, kJ against J); the consistent triple closes
+        // (ΔG given for twice the reaction gets half the factor), the shifted one is flagged
+        CycleCheck agrees = Assert.Single(Assert.IsType<ModelConsistency>(goodReport.Analysis).Cycles);
+        Assert.True(agrees.IsMixed);
+        Assert.Equal("kJ/mol", agrees.Unit);
         Assert.False(agrees.Flagged);
-        Assert.InRange(agrees.Residual, -0.01, 0.01);
-        Assert.Equal(298.15, agrees.Temperature, 1e-9);
-        CrossPropertyCheck fails = Assert.Single(badReport.CrossChecks);
+        Assert.Equal(-0.5, (Factor(agrees, "G") / Factor(agrees, "H")).ToDouble(), 1e-12);
+        Assert.Equal(-298.15 / 1000.0, (Factor(agrees, "S") / Factor(agrees, "H")).ToDouble(), 1e-12);
+        Assert.InRange(agrees.Residual / Factor(agrees, "H").ToDouble(), -0.01, 0.01);
+        CycleCheck fails = Assert.Single(Assert.IsType<ModelConsistency>(badReport.Analysis).Cycles);
+        Assert.True(fails.IsMixed);
         Assert.True(fails.Flagged);
-        Assert.Equal(5.0, fails.Residual, 0.01);
+        Assert.Equal(-298.15 / 1000.0, (Factor(fails, "S") / Factor(fails, "H")).ToDouble(), 1e-12);
+
+        // and the closure per reaction as the ΔG row writes it, ΔG − (ΔH − T·ΔS), is the 5 kJ/mol shift
+        Assert.Equal(5.0, fails.Residual / Factor(fails, "G").ToDouble(), 0.01);
         Assert.Equal(fails.Residual / fails.Uncertainty, fails.Z, 1e-9);
         Assert.False(badReport.Consistent);
         Assert.True(goodReport.Consistent);
     }
+
+    private static Fraction Factor(CycleCheck cycle, string id) => cycle.Members.Single(member => member.Measurement.Id == id).Factor;
 
     private ReactionNetwork Triple(double gibbs, string gibbsEquation, double gibbsScale, string name)
     {
@@ -201,7 +213,7 @@ public sealed class ConsistencyCheckTests : IDisposable
     }
 
     [Fact]
-    public void Run_SourceWithEveryValueShifted_IsFlaggedAsASystematicOffset()
+    public void Run_SourceWithEveryValueShifted_GetsAnInferredOffset_InsteadOfSuspects()
     {
         // Given ten species each measured once by five sources, with source "E" reading 2σ high every time
         // (a synthetic case: invented values; noise-free so the expected z follows in closed form)
@@ -221,20 +233,37 @@ public sealed class ConsistencyCheckTests : IDisposable
         ReactionNetwork network = HandbookData.ReadRows(_folder, rows.ToArray());
 
         // When checked
-        FamilyConsistency enthalpy = Assert.Single(ConsistencyCheck.Run(network).Families);
+        ConsistencyReport report = ConsistencyCheck.Run(network);
+        ModelConsistency analysis = Assert.IsType<ModelConsistency>(report.Analysis);
 
-        // Then no single measurement is a suspect, but E is flagged first with offset z = √10 · 2/√(1 + 1/4);
-        // each E value is 2u from the mean of the other four (u/2), the sound sources sit at −0.5/√1.25 each
-        Assert.Empty(enthalpy.Suspects);
-        SourceCheck shifted = enthalpy.Sources[0];
+        // Then no single measurement is a suspect, but E is flagged first, with a common offset inferred for it (before
+        // any suspect): each E value is 2u from the mean of the other four, so the offset is +2u = +1 kJ/mol with
+        // variance u²/8, i.e. z = √10 · 2/√(1 + 1/4) = √32, and fitting it lowers χ² by z² = 32
+        Assert.Empty(analysis.Suspects);
+        Assert.False(report.Consistent);
+        SourceCheck shifted = analysis.Sources[0];
         Assert.Equal("E", shifted.Source);
         Assert.True(shifted.SystematicOffset);
-        Assert.Equal(Math.Sqrt(10) * 2 / Math.Sqrt(1.25), shifted.OffsetZ, 1e-6);
+        Assert.True(shifted.HasInferredOffset);
+        Assert.Equal(["E"], analysis.OffsetSources.Select(source => source.Source));
         Assert.Equal(10, shifted.Checkable);
-        Assert.All(enthalpy.Sources.Skip(1), source =>
+        SourceOffset offset = Assert.Single(shifted.Offsets);
+        Assert.True(offset.IsEnergy);
+        Assert.Equal(10, offset.Rows.Count);
+        Assert.Equal(2 * u, offset.Value, 1e-9);
+        Assert.Equal(u / Math.Sqrt(8), offset.Uncertainty, 1e-9);
+        Assert.Equal(Math.Sqrt(10) * 2 / Math.Sqrt(1.25), offset.Z, 1e-6);
+        Assert.Equal(32.0, offset.ChiSquaredDrop, 1e-6);
+        Assert.True(offset.BestSingleChiSquaredDrop < offset.ChiSquaredDrop);
+
+        // and with E's offset fitted the data close exactly: E's own rows and the sound sources, which without the
+        // offset sat at −√10 · 0.5/√1.25 each, now sit at 0 and none is flagged
+        Assert.Equal(0.0, shifted.OffsetZ, 1e-6);
+        Assert.All(analysis.Sources.Skip(1), source =>
         {
             Assert.False(source.SystematicOffset, source.Source);
-            Assert.Equal(-Math.Sqrt(10) * 0.5 / Math.Sqrt(1.25), source.OffsetZ, 1e-6);
+            Assert.Empty(source.Offsets);
+            Assert.Equal(0.0, source.OffsetZ, 1e-6);
         });
     }
 
@@ -247,11 +276,11 @@ public sealed class ConsistencyCheckTests : IDisposable
         _folder.Write("network.csv", csv);
         NetworkReadResult read = NetworkReader.Read(_folder.Path);
         Assert.Empty(read.Errors);
-        PropertyModel model = PropertyModel.Build(read.Network, PropertyFamily.Enthalpy);
+        ThermoModel model = ThermoModel.Build(read.Network);
 
         // When solved and checked
-        SolveReport solved = NetworkSolver.Solve(model);
-        FamilyConsistency checkedFamily = ConsistencyCheck.Analyse(model);
+        SolveReport solved = NetworkSolver.Report(NetworkSolver.Solve(model), PropertyFamily.Enthalpy)!;
+        ModelConsistency checkedFamily = ConsistencyCheck.Analyse(model);
 
         // Then both isomers are listed as undetermined, with no number, and only their difference is known
         Assert.Equal(["iBu(g)", "nBu(g)"], solved.Undetermined.Select(estimate => estimate.Species.Name).Order(StringComparer.Ordinal));
@@ -277,8 +306,8 @@ public sealed class ConsistencyCheckTests : IDisposable
         // ΔcH° ≈ −3228 kJ/mol, from memory)
         ReactionNetwork network = HandbookData.ReadRows(_folder, "U1,C7H6O2(cr) + 15/2 O2(g) -> 7 CO2(g) + 3 H2O(l),dU,-3226.9,0.4,kJ/mol,,bomb");
 
-        // When prepared for the enthalpy family
-        PreparedMeasurement prepared = Assert.Single(PropertyModel.Build(network, PropertyFamily.Enthalpy).Measurements);
+        // When prepared for the joint model
+        PreparedMeasurement prepared = Assert.Single(ThermoModel.Build(network).Measurements);
 
         // Then ΔH = ΔU + Δn·R·T with R = 8.314462618 J/(mol·K) (CODATA 2018, exact in the 2019 SI): −1.2395 kJ/mol
         double correction = -0.5 * 8.314462618 * 298.15 / 1000.0;
@@ -295,7 +324,7 @@ public sealed class ConsistencyCheckTests : IDisposable
         ReactionNetwork network = HandbookData.ReadRows(_folder, "U2,H2(g) + 1/2 O2(g) -> H2O(l),dU,-282.112,0.04,kJ/mol,,bomb");
 
         // When prepared
-        PreparedMeasurement prepared = Assert.Single(PropertyModel.Build(network, PropertyFamily.Enthalpy).Measurements);
+        PreparedMeasurement prepared = Assert.Single(ThermoModel.Build(network).Measurements);
 
         // Then ΔH is the tabulated ΔfH°(H2O, l) = −285.830 within rounding
         Assert.Equal(HandbookData.LiquidWater.Value, prepared.Value, 0.002);
@@ -314,18 +343,18 @@ public sealed class ConsistencyCheckTests : IDisposable
 
         // Then it is inconsistent and C03 is the first enthalpy suspect
         Assert.False(report.Consistent);
-        FamilyConsistency enthalpy = report.Families.Single(family => family.Family == PropertyFamily.Enthalpy);
-        Assert.Equal("C03", enthalpy.Suspects[0].Measurement.Id);
-        Assert.Equal(ThermoProperty.Enthalpy, enthalpy.Suspects[0].Measurement.Measurement.Property);
+        ModelConsistency analysis = Assert.IsType<ModelConsistency>(report.Analysis);
+        Assert.Equal("C03", analysis.Suspects[0].Measurement.Id);
+        Assert.Equal(ThermoProperty.Enthalpy, analysis.Suspects[0].Measurement.Measurement.Property);
     }
 
-    private static Matrix<double> DenseMatrix(PropertyModel model)
+    private static Matrix<double> DenseMatrix(ThermoModel model)
     {
         Matrix<double> a = Matrix<double>.Build.Dense(model.Measurements.Count, model.Unknowns.Count);
         for (int i = 0; i < model.Vectors.Count; i++)
         {
             int[] indices = model.Vectors[i].Indices.ToArray();
-            Fractions.Fraction[] values = model.Vectors[i].Values.ToArray();
+            Fraction[] values = model.Vectors[i].Values.ToArray();
             for (int k = 0; k < indices.Length; k++)
             {
                 a[i, indices[k]] = values[k].ToDouble();
@@ -335,5 +364,20 @@ public sealed class ConsistencyCheckTests : IDisposable
         return a;
     }
 
-    private static int DenseRank(PropertyModel model) => model.Measurements.Count == 0 ? 0 : DenseMatrix(model).Rank();
+    private static Matrix<double> DenseMatrix(ObservationSystem system)
+    {
+        Matrix<double> a = Matrix<double>.Build.Dense(system.ObservationCount, system.UnknownCount);
+        for (int i = 0; i < system.ObservationCount; i++)
+        {
+            SparseRow row = system.Observations[i].Row;
+            for (int k = 0; k < row.Count; k++)
+            {
+                a[i, row.Indices[k]] = row.Coefficients[k];
+            }
+        }
+
+        return a;
+    }
+
+    private static int DenseRank(ThermoModel model) => model.Measurements.Count == 0 ? 0 : DenseMatrix(model).Rank();
 }

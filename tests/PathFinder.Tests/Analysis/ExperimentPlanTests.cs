@@ -28,7 +28,7 @@ public sealed class ExperimentPlanTests : IDisposable
         // Given a solved network and a target
         SolveReport report = Solve();
         ChemicalEquation target = Parse(report, "CH3OH(g)");
-        SparseRow row = PropertyModel.RowOf(report.Model.VectorOf(target, out _));
+        SparseRow row = report.Model.Quantity(report.Family, target).Row;
         ObservationSystem system = report.Model.ToObservationSystem();
 
         // When re-measurements are ranked by the rank-one formula
@@ -51,7 +51,7 @@ public sealed class ExperimentPlanTests : IDisposable
         // Given a solved network, a target, one user candidate and generated ones
         SolveReport report = Solve();
         ChemicalEquation target = Parse(report, "CO(g) + 2 H2(g) -> CH3OH(g)");
-        SparseRow row = PropertyModel.RowOf(report.Model.VectorOf(target, out _));
+        SparseRow row = report.Model.Quantity(report.Family, target).Row;
         ObservationSystem system = report.Model.ToObservationSystem();
         ChemicalEquation given = Parse(report, "CH3OH(g) + H2O(g) -> CO2(g) + 3 H2(g)");
 
@@ -65,7 +65,7 @@ public sealed class ExperimentPlanTests : IDisposable
         foreach (CandidateSuggestion item in plan.Candidates)
         {
             Assert.Empty(item.NewSpecies);
-            SparseRow candidate = PropertyModel.RowOf(report.Model.VectorOf(item.Equation, out _));
+            SparseRow candidate = report.Model.Quantity(report.Family, item.Equation).Row;
             double expected = ReSolvedUncertainty(system.With(new Observation(candidate, 0.0, 0.3)), row);
             Assert.Equal(expected, item.TargetUncertainty, 9);
         }

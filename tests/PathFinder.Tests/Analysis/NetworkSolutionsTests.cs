@@ -41,14 +41,22 @@ public sealed class NetworkSolutionsTests : IDisposable
     [Fact]
     public void Report_IsSolvedOnceAndShared()
     {
+        // Given the solutions of an enthalpy-only network
         NetworkReadResult read = AnalysisNetworks.Read(_folder, AnalysisNetworks.Redundant);
         var solutions = new NetworkSolutions(read.Network, read.HeatCapacities);
 
+        // When its ΔfH° view is asked for twice
         SolveReport? first = solutions.Report(PropertyFamily.Enthalpy);
         SolveReport? second = solutions.Report(PropertyFamily.Enthalpy);
 
+        // Then both views read the one joint solution (a view is cheap, the solve is made once), and there is no ΔfG° view
+        // without S° data
         Assert.NotNull(first);
-        Assert.Same(first, second);
+        Assert.NotNull(second);
+        Assert.Same(solutions.Joint, solutions.Joint);
+        Assert.Same(solutions.Joint!.Solution, first.Solution);
+        Assert.Same(first.Solution, second.Solution);
+        Assert.Same(first.Model, second.Model);
         Assert.Null(solutions.Report(PropertyFamily.GibbsEnergy));
     }
 }

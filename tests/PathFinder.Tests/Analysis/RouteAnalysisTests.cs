@@ -161,10 +161,12 @@ public sealed class RouteAnalysisTests : IDisposable
         // Given the consistent handbook network and its least-squares solution
         ReactionNetwork network = HandbookData.Read(_folder, HandbookData.ConsistentEnthalpyCsv());
         PropertyModel model = PropertyModel.Build(network, PropertyFamily.Enthalpy);
-        SolveReport solved = NetworkSolver.Solve(model, adjust: false);
+        var solutions = new NetworkSolutions(network, adjust: false);
+        SolveReport solved = solutions.Report(PropertyFamily.Enthalpy)!;
+        ChemicalEquation target = TargetReaction.Parse("CO(g)", network).Value;
 
-        // When the routes to CO(g) are found with the solution
-        RouteReport report = RouteAnalysis.Find(model, TargetReaction.Parse("CO(g)", network).Value, null, solved.Solution);
+        // When the routes to CO(g) are found with the joint solution's estimate
+        RouteReport report = RouteAnalysis.Find(model, target, null, solutions.DerivedEstimate(PropertyFamily.Enthalpy, target));
 
         // Then the estimate is the solved ΔfH°(CO), within the tabulated uncertainty of −110.53 (CODATA 1989, from memory)
         Assert.NotNull(report.NetworkEstimate);

@@ -45,7 +45,7 @@ public sealed class ValueProvenanceTests : IDisposable
         SolveReport report = Solve();
         ChemicalEquation target = Target(report, "CH3OH(g)");
         ValueProvenance provenance = ValueProvenance.Trace(report, target);
-        SparseRow row = PropertyModel.RowOf(report.Model.VectorOf(target, out _));
+        SparseRow row = report.Model.Quantity(report.Family, target).Row;
         ObservationSystem system = report.Model.ToObservationSystem();
         const double step = 0.01;
 

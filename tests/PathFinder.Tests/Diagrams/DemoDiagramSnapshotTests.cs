@@ -35,7 +35,7 @@ public sealed class DemoDiagramSnapshotTests
         // Given the worst cycle of the combustion-lab demo (it contains the slipped C03); When its closure is drawn; Then it matches the snapshot.
         CycleCheck worst = WorstCycle();
 
-        LevelDiagram diagram = LevelDiagramRenderer.RenderCycle(FigureBuilder.CycleLevels(worst, PropertyFamily.Enthalpy));
+        LevelDiagram diagram = LevelDiagramRenderer.RenderCycle(FigureBuilder.CycleLevels(worst));
 
         SnapshotAssert.Matches(diagram.Diagram.Svg, "demo-combustion-cycle1-closure.svg");
         Assert.False(diagram.Closes);
@@ -115,7 +115,7 @@ public sealed class DemoDiagramSnapshotTests
     public void CycleClosure_ShowsSmallUncertaintiesWithTwoDecimals()
     {
         // Given the worst cycle, whose A02 and B04 steps have uncertainties of 0.04 kJ/mol (group-a.csv, group-b.csv)
-        CycleClosure closure = FigureBuilder.CycleLevels(WorstCycle(), PropertyFamily.Enthalpy);
+        CycleClosure closure = FigureBuilder.CycleLevels(WorstCycle());
 
         // When drawn
         LevelDiagram diagram = LevelDiagramRenderer.RenderCycle(closure);
@@ -136,8 +136,6 @@ public sealed class DemoDiagramSnapshotTests
         Assert.Equal("Route 1 to C(cr,graphite) + ½ O₂(g) → CO(g)", network.Title);
     }
 
-    private static PropertyModel Model() => Model(NetworkReader.Read(RepoPaths.Demo("combustion-lab")));
-
     private static PropertyModel Model(NetworkReadResult read) => PropertyModel.Build(read.Network, PropertyFamily.Enthalpy, read.HeatCapacities);
 
     private static (RouteReport Report, PropertyModel Model) Routes(string target)
@@ -149,5 +147,9 @@ public sealed class DemoDiagramSnapshotTests
         return (report, model);
     }
 
-    private static CycleCheck WorstCycle() => ConsistencyCheck.Analyse(Model()).Cycles[0];
+    private static CycleCheck WorstCycle()
+    {
+        NetworkReadResult read = NetworkReader.Read(RepoPaths.Demo("combustion-lab"));
+        return ConsistencyCheck.Analyse(ThermoModel.Build(read.Network, read.HeatCapacities)).Cycles[0];
+    }
 }

@@ -81,14 +81,14 @@ public sealed class FigureBuilderTests : IDisposable
     public void CycleLevels_ClosureResidualEqualsTheCycleResidual_AndTheLadderReturnsToItsStart()
     {
         // Given the handbook network with CO's formation moved by 12σ, so some cycles fail
-        (ReactionNetwork _, PropertyModel model) = Handbook("F4", 12.0);
-        FamilyConsistency consistency = ConsistencyCheck.Analyse(model);
+        (ReactionNetwork network, PropertyModel _) = Handbook("F4", 12.0);
+        ModelConsistency consistency = ConsistencyCheck.Analyse(ThermoModel.Build(network));
         Assert.NotEmpty(consistency.FlaggedCycles);
 
         foreach (CycleCheck cycle in consistency.Cycles)
         {
             // When each cycle is drawn as a closure ladder
-            CycleClosure closure = FigureBuilder.CycleLevels(cycle, PropertyFamily.Enthalpy);
+            CycleClosure closure = FigureBuilder.CycleLevels(cycle);
 
             // Then the gap is the cycle's residual, with its uncertainty and z
             Assert.Equal(cycle.Residual, closure.Residual, 1e-9);
@@ -108,7 +108,7 @@ public sealed class FigureBuilderTests : IDisposable
         // Given the handbook network with a shifted value, its routes to CO(g) and its cycles
         (ReactionNetwork network, PropertyModel model) = Handbook("F4", 12.0);
         RouteReport report = Routes(network, model, "CO(g)");
-        FamilyConsistency consistency = ConsistencyCheck.Analyse(model);
+        ModelConsistency consistency = ConsistencyCheck.Analyse(ThermoModel.Build(network));
         var marks = new FigureMarks(consistency.Suspects.Select(suspect => suspect.Measurement.Id).ToHashSet(), new HashSet<string> { "R4" });
         Species carbonMonoxide = network.FindSpecies("CO(g)")!;
 
@@ -116,7 +116,7 @@ public sealed class FigureBuilderTests : IDisposable
         [
             FigureBuilder.RouteNetwork(report, report.Routes[1], "kJ/mol", marks),
             FigureBuilder.TargetNetwork(report, "kJ/mol", marks),
-            FigureBuilder.CycleNetwork(consistency.Cycles[0], PropertyFamily.Enthalpy, marks),
+            FigureBuilder.CycleNetwork(consistency.Cycles[0], marks),
             FigureBuilder.Neighbourhood(NetworkGraph.Build(network), [carbonMonoxide], 2, PropertyFamily.Enthalpy, marks),
         ];
 
