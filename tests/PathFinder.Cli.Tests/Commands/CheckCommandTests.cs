@@ -47,7 +47,7 @@ public sealed class CheckCommandTests : IDisposable
         JsonElement[] cycles = root.GetProperty("cycles").EnumerateArray().ToArray();
         Assert.NotEmpty(cycles);
         Assert.Contains(cycles, cycle => cycle.GetProperty("flagged").GetBoolean() && cycle.GetProperty("members").EnumerateArray().Any(member => member.GetProperty("id").GetString() == "C03"));
-        Assert.All(cycles.SelectMany(cycle => cycle.GetProperty("members").EnumerateArray()), member => Assert.Matches("^-?[0-9]+(/[0-9]+)?$", member.GetProperty("factor").GetString()!));
+        Assert.All(cycles.SelectMany(cycle => cycle.GetProperty("members").EnumerateArray()), member => Assert.Matches("^-?[0-9]+(/[0-9]+|\\.[0-9]+)?$", member.GetProperty("factor").GetString()!));
         string[] sources = root.GetProperty("sources").EnumerateArray().Select(source => source.GetProperty("name").GetString()!).ToArray();
         Assert.Contains("group-a", sources);
         Assert.Contains("group-c", sources);

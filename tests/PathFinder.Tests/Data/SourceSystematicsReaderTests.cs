@@ -225,8 +225,33 @@ public sealed class SourceSystematicsReaderTests : IDisposable
 
         Diagnostic error = Assert.Single(result.Diagnostics);
         Assert.Equal(("duplicate-source", 4, 14), (error.Code, error.Location.Line, error.Location.Column));
-        Assert.Equal($"source 'group A' is already declared at {sources}:2:12", error.Message);
+        Assert.Equal($"source 'group A' already has a systematic of this kind (energy or entropy) at {sources}:2:12", error.Message);
         Assert.Equal([0.3, 0.2], result.SourceSystematics.Select(declared => declared.Systematic));
+    }
+
+    [Fact]
+    public void Read_OneEnergyAndOneEntropySystematicOfASource_AreBothKept()
+    {
+        _folder.Write("lab.csv", Data + "s1,H2(g),S,130.68,0.01,J/(mol·K),,group A\n");
+        _folder.Write("sources.csv", "source,systematic,unit\ngroup A,0.3,kJ/mol\ngroup A,0.2,J/(mol·K)\n");
+
+        NetworkReadResult result = NetworkReader.Read(_folder.Path);
+
+        Assert.DoesNotContain(result.Diagnostics, diagnostic => diagnostic.Severity == Severity.Error);
+        Assert.Equal([true, false], result.SourceSystematics.Select(declared => declared.IsEnergy));
+    }
+
+    [Fact]
+    public void Read_ASystematicOfAKindTheSourceHasNoRowsOf_IsWarnedAbout()
+    {
+        _folder.Write("lab.csv", Data);
+        _folder.Write("sources.csv", "source,systematic,unit\ngroup A,0.2,J/(mol·K)\n");
+
+        NetworkReadResult result = NetworkReader.Read(_folder.Path);
+
+        Diagnostic warning = Assert.Single(result.Diagnostics);
+        Assert.Equal(("systematic-acts-on-nothing", Severity.Warning, 2, 13), (warning.Code, warning.Severity, warning.Location.Line, warning.Location.Column));
+        Assert.Single(result.SourceSystematics);
     }
 
     [Theory]
