@@ -122,11 +122,6 @@ public sealed class DrawCommand
             }
 
             CycleCheck cycle = consistency.Cycles[number - 1];
-            if (request.Kind == "closure" && cycle.IsMixed)
-            {
-                return NothingToDraw(context, $"cycle {number} ties ΔG, ΔH and entropy data through G = H − TS, which has no level diagram: draw it with --kind network");
-            }
-
             diagram = request.Kind == "closure"
                 ? LevelDiagramRenderer.RenderCycle(FigureBuilder.CycleLevels(cycle)).Diagram
                 : RenderNetwork(FigureBuilder.CycleNetwork(cycle, marks), request.MaxNodes, context);

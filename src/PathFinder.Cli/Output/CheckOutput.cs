@@ -131,7 +131,8 @@ public static class CheckOutput
                 declared = offset.Declared,
                 inferred = offset.IsInferred,
                 chiSquaredDrop = offset.IsInferred ? offset.ChiSquaredDrop : (double?)null,
-                bestSingleChiSquaredDrop = offset.IsInferred ? offset.BestSingleChiSquaredDrop : (double?)null,
+                displacedSuspect = offset.DisplacedSuspect,
+                displacedChiSquared = offset.IsInferred ? offset.DisplacedChiSquared : (double?)null,
                 rows = offset.Rows,
             }).ToArray();
         }
@@ -191,7 +192,9 @@ public static class CheckOutput
             {
                 string direction = offset.Value >= 0 ? "high" : "low";
                 output.WriteLine($"   Source {source.Source} reads {direction}: common offset {Text.Signed(offset.Value)} ± {Text.Number(offset.Uncertainty)} {offset.Unit} on all {offset.Rows.Count} of its {(offset.IsEnergy ? "energy" : "entropy")} rows");
-                output.WriteLine($"            it explains them better (χ² falls by {Text.Number(offset.ChiSquaredDrop, 1)}) than any single suspect would ({Text.Number(offset.BestSingleChiSquaredDrop, 1)}); fitted as an unknown before looking for suspects");
+                output.WriteLine(offset.DisplacedSuspect is { } displaced
+                    ? $"            the offset explains the data at least as well (χ² falls by {Text.Number(offset.ChiSquaredDrop, 1)}) as blaming {displaced} did ({Text.Number(offset.DisplacedChiSquared, 1)}); {displaced} is cleared and the offset fitted as an unknown"
+                    : $"            the offset stays significant after the suspect procedure (χ² falls by {Text.Number(offset.ChiSquaredDrop, 1)}); fitted as an unknown");
                 output.WriteLine($"            rows: {string.Join(" ", offset.Rows)}");
             }
         }

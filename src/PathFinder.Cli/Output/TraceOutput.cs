@@ -29,6 +29,7 @@ public static class TraceOutput
                 uncertainty = Json.Number(provenance.StandardUncertainty),
                 variance = Json.Number(provenance.Variance),
                 sources = provenance.Sources.Select(source => new { source = source.Source, measurements = source.Measurements, varianceContribution = source.VarianceContribution, share = source.Share }),
+                systematics = provenance.Systematics.Select(source => new { source = source.Source, varianceContribution = source.VarianceContribution, share = source.Share }),
                 measurements = provenance.Contributions.Select(item => new
                 {
                     id = item.Measurement.Id,
@@ -74,6 +75,11 @@ public static class TraceOutput
         foreach (SourceContribution source in provenance.Sources)
         {
             output.WriteLine($"  {source.Source.PadRight(sourceWidth)}  {Percent(source.Share),7}  {Bar(source.Share)}  ({source.Measurements} measurement{(source.Measurements == 1 ? "" : "s")})");
+        }
+
+        foreach (SourceContribution systematic in provenance.Systematics)
+        {
+            output.WriteLine($"  of which {Percent(systematic.Share)} from the declared systematic of {systematic.Source} (sources.csv)");
         }
 
         output.WriteLine();

@@ -46,7 +46,7 @@ public sealed class SolvedAnalysis : INetworkAnalysis
             {
                 foreach (SourceOffset offset in source.Offsets.Where(offset => offset.IsInferred))
                 {
-                    string reason = string.Create(CultureInfo.InvariantCulture, $"source {source.Source} reads {offset.Value:+0.00;-0.00} ± {offset.Uncertainty:0.00} {offset.Unit} off on all {offset.Rows.Count} rows: a common offset explains them better (χ² falls by {offset.ChiSquaredDrop:0.0}) than any single measurement ({offset.BestSingleChiSquaredDrop:0.0})");
+                    string reason = string.Create(CultureInfo.InvariantCulture, $"source {source.Source} reads {offset.Value:+0.00;-0.00} ± {offset.Uncertainty:0.00} {offset.Unit} off on all {offset.Rows.Count} rows: a common offset explains the data at least as well (χ² falls by {offset.ChiSquaredDrop:0.0}){(offset.DisplacedSuspect is { } displaced ? $" as blaming {displaced} ({offset.DisplacedChiSquared:0.0})" : "")}");
                     suspects.Add(new SuspectReport(offset.Rows[0], offset.Z, null, null, reason));
                 }
             }
@@ -212,7 +212,7 @@ public sealed class SolvedAnalysis : INetworkAnalysis
             return Write(
                 path,
                 FigureBuilder.CycleNetwork(cycle, marks),
-                cycle.IsMixed ? null : LevelDiagramRenderer.RenderCycle(FigureBuilder.CycleLevels(cycle)).Diagram,
+                LevelDiagramRenderer.RenderCycle(FigureBuilder.CycleLevels(cycle)).Diagram,
                 "closure");
         }
 

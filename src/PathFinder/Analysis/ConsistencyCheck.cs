@@ -25,6 +25,9 @@ public static class ConsistencyCheck
     /// <summary>The most source offsets the check infers (one at a time, the best first).</summary>
     public const int MaxInferredOffsets = 3;
 
+    /// <summary>How many of the most serious suspects are tried against a source offset.</summary>
+    public const int MaxSuspectsRestored = 20;
+
     /// <summary>Fewest rows of a source for its common offset to be tested.</summary>
     public const int MinimumRowsForOffsetTest = 3;
 
@@ -56,26 +59,27 @@ public static class ConsistencyCheck
             CancellationToken = options.CancellationToken,
         }));
 
-        var inferred = new List<(string Source, bool Energy, double Drop, double BestSingle)>();
-        if (options.RunSuspectProcedure)
-        {
-            while (inferred.Count < MaxInferredOffsets && BestOffsetTest(model, asGiven) is { } best)
-            {
-                model = model.WithInferredOffset(best.Source, best.Energy);
-                asGiven = WeightedLeastSquares.Solve(model.ToObservationSystem());
-                inferred.Add(best);
-            }
-        }
-
         // The per-measurement diagnostics of the data as given are needed only after the procedure: that core works
         // them out once the cycle search is done (the procedure works on a copy of the factorization).
         LeastSquaresSolution given = asGiven;
         Task givenDiagnostics = cycleSearch.ContinueWith(_ => given.Observations.Count, TaskScheduler.Default);
 
-        // Start from the solution just computed: the procedure copies its factorization instead of redoing it.
-        OutlierResult? outliers = options.RunSuspectProcedure
-            ? OutlierProcedure.Run(asGiven, new OutlierOptions { Threshold = options.Threshold, InflationFactor = options.InflationFactor })
-            : null;
+        // Start from the solution just computed: the procedure copies its factorization instead of redoing it. When a
+        // source's common offset explains a suspect better than the suspect's own error, the offset becomes an unknown
+        // and the procedure runs again on the model with it.
+        var outlierOptions = new OutlierOptions { Threshold = options.Threshold, InflationFactor = options.InflationFactor };
+        OutlierResult? outliers = options.RunSuspectProcedure ? OutlierProcedure.Run(asGiven, outlierOptions) : null;
+        var inferred = new List<InferredOffset>();
+        while (outliers is not null && inferred.Count < MaxInferredOffsets && BestInferredOffset(model, outliers) is { } offset)
+        {
+            inferred.Add(offset);
+            model = model.WithInferredOffset(offset.Source, offset.Energy);
+            asGiven = WeightedLeastSquares.Solve(model.ToObservationSystem());
+            outliers = OutlierProcedure.Run(asGiven, outlierOptions);
+            LeastSquaresSolution again = asGiven;
+            givenDiagnostics = givenDiagnostics.ContinueWith(_ => again.Observations.Count, TaskScheduler.Default);
+        }
+
         LeastSquaresSolution adjusted = outliers?.Solution ?? asGiven;
         IReadOnlyList<OutlierSuspect> outlierSuspects = outliers?.Suspects.Where(suspect => !model.IsPrior(suspect.ObservationIndex)).ToArray() ?? [];
         IReadOnlyList<UncertaintyAdjustment> adjustments = outliers?.Adjustments ?? [];
@@ -126,7 +130,7 @@ public static class ConsistencyCheck
             cycles.IndependentCycleCount,
             suspects,
             adjustments,
-            Sources(model, checks, asGiven, adjusted, inferred, options.Threshold),
+            Sources(model, checks, adjusted, inferred, options.Threshold),
             asGiven,
             adjusted);
     }
@@ -156,18 +160,23 @@ public static class ConsistencyCheck
         };
     }
 
-    /// <summary>The source whose common offset (not yet in the model) is significant and not explained away by one measurement with a larger z²; otherwise null.</summary>
+    /// <summary>The source offset that best explains the procedure's findings, or null when none does.</summary>
     /// <remarks>
-    /// With W the weights, C the covariance and r the residuals, a direction d (a source's rows g, or one row eⱼ) lowers χ²
-    /// by (dᵀWr)²/(dᵀPd), P = W − WACAᵀW. The source is taken when its fall passes the Šidák critical value over the
-    /// sources tested, and no single row j with a larger fall zⱼ² makes it insignificant once j is freed, i.e. the
-    /// conditional fall (t_s − p·tⱼ/Pⱼⱼ)²/(gᵀPg − p²/Pⱼⱼ), p = gᵀPeⱼ, stays above the critical value. So an unrelated gross
-    /// error elsewhere does not hide a source's offset, while a key value that alone explains the pattern as well is not
-    /// overruled.
+    /// <para>Tested on the solution after the procedure (gross errors down-weighted, so one of them does not pass for an
+    /// offset elsewhere). With W the weights, C the covariance and r the residuals there, fitting one common offset to a
+    /// source's rows lowers χ² by t²/D, t = Σwᵢrᵢ and D = Σwᵢ − hᵀCh, h = Σwᵢaᵢ over the rows.</para>
+    /// <para>A suspect k outside the source is then given back its own uncertainty (weight change Δw): by rank-one
+    /// updates, with c = C·aₖ and β = Δw/(1 + Δw·aₖᵀc), χ² rises by β·rₖ² (about zₖ², the evidence against k), while
+    /// the source's offset now lowers it by t′²/D′ with t′ = t − β·rₖ·hᵀc and D′ = D + β·(hᵀc)². When that fall passes
+    /// the Šidák critical value over the sources tested and is at least the rise, the offset explains the data at least
+    /// as well as k's error does: the source is named, not k (a key value that every reaction of a source shares is the
+    /// usual case). A significant offset left after the procedure is taken as it is.</para>
+    /// <para>Only the <see cref="MaxSuspectsRestored"/> most serious suspects are tried (each costs one product with C).</para>
     /// </remarks>
-    private static (string Source, bool Energy, double Drop, double BestSingle)? BestOffsetTest(ThermoModel model, LeastSquaresSolution solution)
+    private static InferredOffset? BestInferredOffset(ThermoModel model, OutlierResult outliers)
     {
-        var tests = new List<(string Source, bool Energy, int[] Rows, double Weighted, double Denominator, double[] Spread)>();
+        LeastSquaresSolution solution = outliers.Solution;
+        var tests = new List<(string Source, bool Energy, HashSet<int> Rows, SparseRow H, double T, double D)>();
         foreach (var group in Enumerable.Range(0, model.Measurements.Count)
             .Where(i => model.OffsetOf(i) < 0)
             .GroupBy(i => (model.Measurements[i].Source, model.Measurements[i].IsEnergy)))
@@ -178,7 +187,6 @@ public static class ConsistencyCheck
                 continue;
             }
 
-            // h = Σ wᵢaᵢ and Σ wᵢrᵢ over the source's rows; gᵀPg = Σwᵢ − hᵀCh.
             var h = new Dictionary<int, double>();
             double weights = 0.0;
             double weightedResiduals = 0.0;
@@ -195,14 +203,11 @@ public static class ConsistencyCheck
             }
 
             SparseRow hRow = SparseRow.Of(h.Select(entry => (entry.Key, entry.Value)).ToArray());
-            double[] spread = solution.CovarianceTimes(hRow);
-            double denominator = weights - hRow.Dot(spread);
-            if (!(denominator > 1e-9 * weights))
+            double denominator = weights - hRow.Dot(solution.CovarianceTimes(hRow));
+            if (denominator > 1e-9 * weights)
             {
-                continue; // the source's rows alone fix what they touch: an offset is not identifiable
+                tests.Add((group.Key.Source, group.Key.IsEnergy, rows.ToHashSet(), hRow, weightedResiduals, denominator));
             }
-
-            tests.Add((group.Key.Source, group.Key.IsEnergy, rows, weightedResiduals, denominator, spread));
         }
 
         if (tests.Count == 0)
@@ -212,48 +217,45 @@ public static class ConsistencyCheck
 
         double critical = OutlierProcedure.SidakCriticalValue(tests.Count, new OutlierOptions().SignificanceLevel);
         double threshold = critical * critical;
-        foreach (var test in tests.OrderByDescending(test => test.Weighted * test.Weighted / test.Denominator))
+        InferredOffset? best = null;
+        void Consider(InferredOffset candidate)
         {
-            double drop = test.Weighted * test.Weighted / test.Denominator;
-            if (drop <= threshold)
+            if (candidate.Drop > threshold && candidate.Drop >= candidate.Displaced && (best is null || candidate.Drop - candidate.Displaced > best.Drop - best.Displaced))
             {
-                return null;
-            }
-
-            var own = new HashSet<int>(test.Rows);
-            double bestSingle = 0.0;
-            bool explainedAway = false;
-            for (int j = 0; j < model.Measurements.Count && !explainedAway; j++)
-            {
-                ObservationDiagnostics diagnostics = solution.Observations[j];
-                if (diagnostics.NormalizedResidual is not { } z)
-                {
-                    continue;
-                }
-
-                Observation observation = solution.System.Observations[j];
-                double w = observation.Weight;
-                double pjj = w * (1.0 - diagnostics.Leverage);
-                double cross = (own.Contains(j) ? w : 0.0) - (w * observation.Row.Dot(test.Spread));
-                double conditional = Math.Pow(test.Weighted - (cross * w * diagnostics.Residual / pjj), 2) / (test.Denominator - (cross * cross / pjj));
-                if (conditional < threshold || own.Contains(j))
-                {
-                    bestSingle = Math.Max(bestSingle, z * z);
-                }
-
-                explainedAway = z * z > drop && conditional < threshold;
-            }
-
-            if (!explainedAway)
-            {
-                return (test.Source, test.Energy, drop, bestSingle);
+                best = candidate;
             }
         }
 
-        return null;
+        foreach (var test in tests)
+        {
+            Consider(new InferredOffset(test.Source, test.Energy, test.T * test.T / test.D, null, 0.0));
+        }
+
+        foreach (OutlierSuspect suspect in outliers.Suspects.Where(item => !model.IsPrior(item.ObservationIndex)).Take(MaxSuspectsRestored))
+        {
+            int k = suspect.ObservationIndex;
+            Observation observation = solution.System.Observations[k];
+            double deltaWeight = (1.0 / (suspect.OriginalUncertainty * suspect.OriginalUncertainty)) - observation.Weight;
+            double[] c = solution.CovarianceTimes(observation.Row);
+            double beta = deltaWeight / (1.0 + (deltaWeight * observation.Row.Dot(c)));
+            double residual = observation.Value - solution.FittedValue(k);
+            double rise = beta * residual * residual;
+            foreach (var test in tests.Where(test => !test.Rows.Contains(k) && test.Energy == model.Measurements[k].IsEnergy))
+            {
+                double hc = test.H.Dot(c);
+                double t = test.T - (beta * residual * hc);
+                double d = test.D + (beta * hc * hc);
+                Consider(new InferredOffset(test.Source, test.Energy, t * t / d, model.Measurements[k].Id, rise));
+            }
+        }
+
+        return best;
     }
 
-    private static SourceCheck[] Sources(ThermoModel model, MeasurementCheck[] checks, LeastSquaresSolution asGiven, LeastSquaresSolution adjusted, List<(string Source, bool Energy, double Drop, double BestSingle)> inferred, double threshold) =>
+    /// <summary>A source offset the check takes on: the fall in χ² it gives and the suspect it displaces (with the χ² that suspect's error accounted for).</summary>
+    private sealed record InferredOffset(string Source, bool Energy, double Drop, string? DisplacedId, double Displaced);
+
+    private static SourceCheck[] Sources(ThermoModel model, MeasurementCheck[] checks, LeastSquaresSolution adjusted, List<InferredOffset> inferred, double threshold) =>
         checks
             .GroupBy(check => check.Measurement.Source, StringComparer.Ordinal)
             .Select(group =>
@@ -282,13 +284,13 @@ public static class ConsistencyCheck
                     if (declared is not null)
                     {
                         int prior = model.Measurements.Count + model.Systematics.ToList().IndexOf(declared);
-                        double? priorZ = asGiven.Observations[prior].NormalizedResidual;
-                        offsets.Add(new SourceOffset(energy, value, uncertainty, priorZ is { } pz ? -pz : 0.0, declared.Systematic, 0.0, 0.0, rows));
+                        double? priorZ = adjusted.Observations[prior].NormalizedResidual;
+                        offsets.Add(new SourceOffset(energy, value, uncertainty, priorZ is { } pz ? -pz : 0.0, declared.Systematic, 0.0, null, 0.0, rows));
                     }
                     else
                     {
-                        (string _, bool _, double drop, double bestSingle) = inferred.First(item => item.Source == group.Key && item.Energy == energy);
-                        offsets.Add(new SourceOffset(energy, value, uncertainty, value / uncertainty, null, drop, bestSingle, rows));
+                        InferredOffset found = inferred.First(item => item.Source == group.Key && item.Energy == energy);
+                        offsets.Add(new SourceOffset(energy, value, uncertainty, value / uncertainty, null, found.Drop, found.DisplacedId, found.Displaced, rows));
                     }
                 }
 

@@ -25,8 +25,10 @@ public sealed class ValueProvenance
         IReadOnlyList<MeasurementContribution> contributions,
         IReadOnlyList<SourceContribution> sources,
         IReadOnlyList<Species> missingSpecies,
-        string? reason)
+        string? reason,
+        IReadOnlyList<SourceContribution>? systematics = null)
     {
+        Systematics = systematics ?? [];
         Model = model;
         Family = family;
         Target = target;
@@ -62,7 +64,10 @@ public sealed class ValueProvenance
     /// <summary>Measurements with a non-zero sensitivity, largest variance contribution first.</summary>
     public IReadOnlyList<MeasurementContribution> Contributions { get; }
 
-    /// <summary>Variance by source, largest first.</summary>
+    /// <summary>The part of the variance from declared source systematics (their priors), one entry per source, largest first; with <see cref="Contributions"/> the shares add up to 1.</summary>
+    public IReadOnlyList<SourceContribution> Systematics { get; }
+
+    /// <summary>Variance by source (its measurements and its declared systematic), largest first.</summary>
     public IReadOnlyList<SourceContribution> Sources { get; }
 
     /// <summary>Target species that no datum bearing on the quantity contains.</summary>
@@ -114,7 +119,13 @@ public sealed class ValueProvenance
             .ToArray();
         var priors = entries
             .Where(entry => model.IsPrior(entry.ObservationIndex))
-            .Select(entry => (Source: model.Systematics[entry.ObservationIndex - model.Measurements.Count].Source, entry.VarianceContribution));
+            .Select(entry => (Source: model.Systematics[entry.ObservationIndex - model.Measurements.Count].Source, entry.VarianceContribution))
+            .ToArray();
+        SourceContribution[] systematics = priors
+            .GroupBy(prior => prior.Source, StringComparer.Ordinal)
+            .Select(group => new SourceContribution(group.Key, 0, group.Sum(item => item.VarianceContribution), variance > 0.0 ? group.Sum(item => item.VarianceContribution) / variance : 0.0))
+            .OrderByDescending(item => item.VarianceContribution)
+            .ToArray();
         var sources = contributions
             .Select(item => (item.Measurement.Source, Counted: 1, item.VarianceContribution))
             .Concat(priors.Select(prior => (prior.Source, Counted: 0, prior.VarianceContribution)))
@@ -127,7 +138,7 @@ public sealed class ValueProvenance
             .OrderByDescending(source => source.VarianceContribution)
             .ThenBy(source => source.Source, StringComparer.Ordinal)
             .ToArray();
-        return new ValueProvenance(model, family, target, provenance.Estimate.Value, variance, contributions, sources, [], null);
+        return new ValueProvenance(model, family, target, provenance.Estimate.Value, variance, contributions, sources, [], null, systematics);
     }
 
     /// <summary>Traces ΔrH°, ΔrS° or ΔrG° of <paramref name="target"/> through the network's joint solution.</summary>

@@ -422,7 +422,8 @@ public static class NetworkReader
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static void AddNetworkWarnings(List<Measurement> measurements, SpeciesCatalog catalog, IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities, List<Diagnostic> diagnostics)
     {
-        var seen = new Dictionary<(string Source, ThermoProperty Property, string Reaction), Measurement>();
+        // Measurements at different temperatures are different determinations (a K series, a ΔH at 500 K).
+        var seen = new Dictionary<(string Source, ThermoProperty Property, string Reaction, double Temperature), Measurement>();
 
         // Rows that repeat an equation text share its parsed equation: work its signature out once.
         var signatures = new Dictionary<ChemicalEquation, string>(ReferenceEqualityComparer.Instance);
@@ -436,10 +437,10 @@ public static class NetworkReader
                 signatures[measurement.Equation] = signature;
             }
 
-            var key = (measurement.Source, measurement.Property, signature);
+            var key = (measurement.Source, measurement.Property, signature, Math.Round(measurement.Temperature, 2));
             if (seen.TryGetValue(key, out Measurement? first))
             {
-                diagnostics.Add(Diagnostic.Warning("repeated-measurement", measurement.Location with { Field = "equation" }, $"'{measurement.Id}' measures the same reaction as '{first.Id}' in source '{measurement.Source}'", "if both are independent determinations keep them; if one is a copy, drop it"));
+                diagnostics.Add(Diagnostic.Warning("repeated-measurement", measurement.Location with { Field = "equation" }, $"'{measurement.Id}' measures the same reaction at the same temperature as '{first.Id}' in source '{measurement.Source}'", "if both are independent determinations keep them; if one is a copy, drop it"));
             }
             else
             {

@@ -95,10 +95,26 @@ public static partial class FigureBuilder
     }
 
     /// <summary>The closure ladder of a cycle: the same picture, ending in the gap where it fails to close.</summary>
-    /// <remarks>A cycle that mixes properties (<see cref="CycleCheck.IsMixed"/>) is no chemical ladder; its steps are drawn with their values all the same.</remarks>
+    /// <remarks>
+    /// A cycle that mixes properties (<see cref="CycleCheck.IsMixed"/>, a G = H − TS closure) passes through no chemical
+    /// states: its ladder adds the terms cᵢ·vᵢ in the cycle's order, each level named by the datum it adds.
+    /// </remarks>
     public static CycleClosure CycleLevels(CycleCheck cycle)
     {
         ArgumentNullException.ThrowIfNull(cycle);
+        if (cycle.IsMixed)
+        {
+            var terms = cycle.Members.Select(member =>
+            {
+                double c = member.Factor.ToDouble();
+                string state = member.Measurement.Measurement.Property == ThermoProperty.AbsoluteEntropy
+                    ? $"S°({FormulaMarkup.ToUnicodeText(member.Measurement.Equation.Terms[0].Species.Name)})"
+                    : $"{member.Measurement.Symbol} of {TitleText(member.Measurement.Equation)}";
+                return new EnthalpyStep(Usage(member.Measurement.Id, member.Factor), c * member.Measurement.Value, state, Math.Abs(c) * member.Measurement.Uncertainty);
+            }).ToList();
+            return new CycleClosure($"Cycle {cycle.Number}: {CombinationText(cycle)} (G = H − TS)", "0", terms, cycle.Uncertainty, cycle.Z, cycle.Symbol, cycle.Unit);
+        }
+
         var members = cycle.Members.Select(member =>
         {
             ChemicalEquation scaled = member.Measurement.Equation.Scale(member.Factor);

@@ -90,7 +90,7 @@ public sealed class SolveCommandTests
         Assert.Equal(ExitCodes.Success, table.ExitCode);
         Assert.Contains("ΔfH° at 298.15 K in kJ/mol", table.Out, StringComparison.Ordinal);
         Assert.Contains("DME(g)", table.Out, StringComparison.Ordinal);
-        Assert.Contains("Suspects down-weighted: C03", table.Out, StringComparison.Ordinal);
+        Assert.Contains("Suspects down-weighted: E04, C03", table.Out, StringComparison.Ordinal);
         Assert.Equal(ExitCodes.Success, markdown.ExitCode);
         Assert.StartsWith("| species | ΔfH° / (kJ/mol) |", markdown.Out, StringComparison.Ordinal);
         Assert.Contains("| CO2(g) | -393.51 |", markdown.Out, StringComparison.Ordinal);
@@ -135,8 +135,8 @@ public sealed class SolveCommandTests
         // Then the text is the same, with decimal points. Full-precision numbers (csv, json) are compared as
         // numbers: the native dense kernel may differ in the last bit from one run to the next (see the report).
         Assert.Equal(ExitCodes.Success, german.ExitCode);
-        Assert.Contains("-393.51", german.Out, StringComparison.Ordinal);
-        Assert.DoesNotContain("-393,51", german.Out, StringComparison.Ordinal);
+        Assert.Contains("-393.5", german.Out, StringComparison.Ordinal);
+        Assert.DoesNotContain("-393,5", german.Out, StringComparison.Ordinal);
         switch (format)
         {
             case "csv":

@@ -29,9 +29,12 @@ public sealed class TraceCommandTests
         using JsonDocument document = JsonDocument.Parse(run.Out);
         JsonElement root = document.RootElement;
         Assert.True(root.GetProperty("determined").GetBoolean());
-        double total = root.GetProperty("measurements").EnumerateArray().Sum(item => item.GetProperty("share").GetDouble());
+        // the measurements' shares and the declared systematic's (group-a, sources.csv) add up to the whole variance
+        JsonElement[] parts = [.. root.GetProperty("measurements").EnumerateArray(), .. root.GetProperty("systematics").EnumerateArray()];
+        Assert.Single(root.GetProperty("systematics").EnumerateArray());
+        double total = parts.Sum(item => item.GetProperty("share").GetDouble());
         Assert.Equal(1.0, total, 1e-9);
-        double variance = root.GetProperty("measurements").EnumerateArray().Sum(item => item.GetProperty("varianceContribution").GetDouble());
+        double variance = parts.Sum(item => item.GetProperty("varianceContribution").GetDouble());
         Assert.Equal(Math.Pow(root.GetProperty("uncertainty").GetDouble(), 2), variance, 1e-9);
     }
 

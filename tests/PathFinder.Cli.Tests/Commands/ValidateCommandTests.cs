@@ -17,10 +17,11 @@ public sealed class ValidateCommandTests : IDisposable
 
         // Then the summary is printed and the result is valid
         Assert.Equal(0, run.ExitCode);
-        Assert.Contains("38 usable measurement(s) in 4 file(s)", run.Out, StringComparison.Ordinal);
+        Assert.Contains("46 usable measurement(s) in 5 file(s)", run.Out, StringComparison.Ordinal);
         Assert.Contains("0 error(s)", run.Out, StringComparison.Ordinal);
         Assert.Contains("Result: valid", run.Out, StringComparison.Ordinal);
-        Assert.Contains("group-a (14), group-b (9), group-c (7), group-d (8)", run.Out, StringComparison.Ordinal);
+        Assert.Contains("group-a (14), group-b (9), group-c (7), group-d (8), group-e (8)", run.Out, StringComparison.Ordinal);
+        Assert.Contains("(1 source(s) declared)", run.Out, StringComparison.Ordinal);
         Assert.Equal("", run.Error);
     }
 
@@ -56,10 +57,10 @@ public sealed class ValidateCommandTests : IDisposable
         JsonElement root = document.RootElement;
         Assert.True(root.GetProperty("valid").GetBoolean());
         Assert.Equal(0, root.GetProperty("errors").GetInt32());
-        Assert.Equal(4, root.GetProperty("files").GetArrayLength());
+        Assert.Equal(5, root.GetProperty("files").GetArrayLength());
         JsonElement summary = root.GetProperty("summary");
-        Assert.Equal(38, summary.GetProperty("measurements").GetInt32());
-        Assert.Equal(["group-a", "group-b", "group-c", "group-d"], summary.GetProperty("sources").EnumerateArray().Select(source => source.GetProperty("name").GetString()));
+        Assert.Equal(46, summary.GetProperty("measurements").GetInt32());
+        Assert.Equal(["group-a", "group-b", "group-c", "group-d", "group-e"], summary.GetProperty("sources").EnumerateArray().Select(source => source.GetProperty("name").GetString()));
         Assert.Equal(["C", "H", "O"], summary.GetProperty("elements").EnumerateArray().Select(element => element.GetString()));
         Assert.Contains("dU", summary.GetProperty("properties").EnumerateArray().Select(property => property.GetProperty("property").GetString()));
         Assert.EndsWith("species.csv", root.GetProperty("speciesFile").GetString(), StringComparison.Ordinal);
@@ -130,12 +131,12 @@ public sealed class ValidateCommandTests : IDisposable
     [Fact]
     public void Validate_WithoutSourcesFileHasAnEmptyList()
     {
-        CliRun run = CliRun.Of("validate", RepoPaths.Demo("combustion-lab"), "--json");
+        CliRun run = CliRun.Of("validate", RepoPaths.Demo("brine-ions.csv"), "--json");
 
         using JsonDocument document = JsonDocument.Parse(run.Out);
         Assert.Equal(JsonValueKind.Null, document.RootElement.GetProperty("sourcesFile").ValueKind);
         Assert.Equal(0, document.RootElement.GetProperty("sourceSystematics").GetArrayLength());
-        Assert.DoesNotContain("systematics", CliRun.Of("validate", RepoPaths.Demo("combustion-lab")).Out, StringComparison.Ordinal);
+        Assert.DoesNotContain("systematics", CliRun.Of("validate", RepoPaths.Demo("brine-ions.csv")).Out, StringComparison.Ordinal);
     }
 
     [Fact]

@@ -254,7 +254,7 @@ public sealed class ConsistencyCheckTests : IDisposable
         Assert.Equal(u / Math.Sqrt(8), offset.Uncertainty, 1e-9);
         Assert.Equal(Math.Sqrt(10) * 2 / Math.Sqrt(1.25), offset.Z, 1e-6);
         Assert.Equal(32.0, offset.ChiSquaredDrop, 1e-6);
-        Assert.True(offset.BestSingleChiSquaredDrop < offset.ChiSquaredDrop);
+        Assert.True(offset.DisplacedChiSquared <= offset.ChiSquaredDrop);
 
         // and with E's offset fitted the data close exactly: E's own rows and the sound sources, which without the
         // offset sat at −√10 · 0.5/√1.25 each, now sit at 0 and none is flagged
@@ -333,19 +333,29 @@ public sealed class ConsistencyCheckTests : IDisposable
     }
 
     [Fact]
-    public void Run_Demo_FlagsTheSlippedValueC03First()
+    public void Run_Demo_FlagsItsTwoPlantedSlips_AndFitsTheDeclaredSystematic()
     {
-        // Given the combustion-lab demo, whose group-c notes say C03 carries a slipped value
+        // Given the combustion-lab demo: group-c's notes say C03 carries a slipped ΔH, group-e's that E04 (ΔfG° of CO)
+        // was copied from a kcal/mol column, and sources.csv declares a systematic for group-a
         NetworkReadResult read = NetworkReader.Read(RepoPaths.Demo("combustion-lab"));
 
-        // When checked
-        ConsistencyReport report = ConsistencyCheck.Run(read.Network, read.HeatCapacities);
+        // When checked as the CLI does
+        ConsistencyReport report = ConsistencyCheck.Run(read.Network, read.HeatCapacities, systematics: read.SourceSystematics);
 
-        // Then it is inconsistent and C03 is the first enthalpy suspect
+        // Then it is inconsistent with exactly those two suspects, E04 first (a ΔG slip only the tie to ΔfH° and S° can
+        // see), named as a calorie slip, and C03 as an enthalpy suspect with no slip of a known kind
         Assert.False(report.Consistent);
         ModelConsistency analysis = Assert.IsType<ModelConsistency>(report.Analysis);
-        Assert.Equal("C03", analysis.Suspects[0].Measurement.Id);
-        Assert.Equal(ThermoProperty.Enthalpy, analysis.Suspects[0].Measurement.Measurement.Property);
+        Assert.Equal(["E04", "C03"], analysis.Suspects.Select(suspect => suspect.Measurement.Id));
+        Assert.Equal(SlipKind.Calorie, analysis.Suspects[0].LikelyCause?.Kind);
+        Assert.Equal(ThermoProperty.Enthalpy, analysis.Suspects[1].Measurement.Measurement.Property);
+        Assert.Null(analysis.Suspects[1].LikelyCause);
+
+        // and group-a's declared offset is fitted within its declared 0.15 kJ/mol, while no offset is inferred
+        SourceOffset offset = Assert.Single(analysis.Sources.Single(source => source.Source == "group-a").Offsets);
+        Assert.Equal(0.15, offset.Declared);
+        Assert.InRange(Math.Abs(offset.Z), 0.0, 2.0);
+        Assert.Empty(analysis.OffsetSources);
     }
 
     private static Matrix<double> DenseMatrix(ThermoModel model)

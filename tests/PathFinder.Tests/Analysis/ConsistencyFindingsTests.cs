@@ -91,7 +91,7 @@ public sealed class ConsistencyFindingsTests : IDisposable
         Assert.True(offset.IsInferred);
         Assert.Equal(1.2, offset.Value, 0.05);
         Assert.Equal(["B1", "B2", "B3"], offset.Rows);
-        Assert.True(offset.ChiSquaredDrop > offset.BestSingleChiSquaredDrop);
+        Assert.True(offset.ChiSquaredDrop >= offset.DisplacedChiSquared);
         Assert.Empty(analysis.Suspects);
         Assert.False(analysis.Consistent);
     }

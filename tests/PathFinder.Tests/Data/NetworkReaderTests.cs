@@ -260,7 +260,7 @@ public sealed class NetworkReaderTests : IDisposable
         Assert.Equal(Severity.Warning, warning.Severity);
         Assert.Equal("repeated-measurement", warning.Code);
         Assert.Equal(3, warning.Location.Line);
-        Assert.Equal("'w2' measures the same reaction as 'w1' in source 'lab'", warning.Message);
+        Assert.Equal("'w2' measures the same reaction at the same temperature as 'w1' in source 'lab'", warning.Message);
         Assert.Equal(2, result.Network.Measurements.Count);
         Assert.False(result.HasErrors);
     }
