@@ -17,7 +17,16 @@ internal static class SuspectCauses
 
         PreparedMeasurement measurement = model.Measurements[index];
         var question = new SlipQuestion(measurement.Measurement.Property, measurement.Value, measurement.Correction, measurement.Uncertainty, p, up, Phases(model, solution, measurement));
-        return SlipDiagnosis.Diagnose(question);
+        LikelyCause? cause = SlipDiagnosis.Diagnose(question);
+        if (cause is null || !measurement.Measurement.Property.IsEquilibriumConstant())
+        {
+            return cause;
+        }
+
+        // The analysis compares K rows as ΔrG° in kJ/mol; say what the undone value is in the number the user typed.
+        double lnK = -(cause.ExplainedValue - measurement.Correction) * 1000.0 / (PhysicalConstants.GasConstant * measurement.Measurement.Temperature);
+        double typed = measurement.Measurement.Property == ThermoProperty.Log10EquilibriumConstant ? lnK / Math.Log(10.0) : lnK;
+        return cause with { Detail = string.Create(System.Globalization.CultureInfo.InvariantCulture, $"{cause.Detail} (as ΔrG° in kJ/mol; as {measurement.Measurement.Property.Symbol()}: {typed:0.###})") };
     }
 
     /// <summary>For each species of the equation, every other state of the same formula that the model knows, with ν·(X(other) − X(written)) in the row's property.</summary>

@@ -124,6 +124,48 @@ public sealed class JointModelTests : IDisposable
     }
 
     [Fact]
+    public void UntiedFamilies_GiveTheSameValuesAsSeparateSolvesOfEachFamily()
+    {
+        // Given ΔH and S° data on hydrocarbons and ΔG data on nitrogen species (values invented), which no datum ties:
+        // no ΔG or K row involves a species with ΔH or S° data
+        string csv =
+            "id,equation,property,value,uncertainty,unit\n" +
+            "h1,CO2(g),dH,-393.5,0.2,kJ/mol\n" +
+            "h2,H2O(l),dH,-285.8,0.1,kJ/mol\n" +
+            "h3,CH4(g) + 2 O2(g) -> CO2(g) + 2 H2O(l),dH,-890.4,0.5,kJ/mol\n" +
+            "h4,CH4(g),dH,-74.6,0.4,kJ/mol\n" +
+            "h5,2 CH4(g) -> C2H6(g) + H2(g),dH,65.1,0.6,kJ/mol\n" +
+            "h6,C2H6(g) + 7/2 O2(g) -> 2 CO2(g) + 3 H2O(l),dH,-1560.9,0.7,kJ/mol\n" +
+            "s1,CH4(g),S,186.3,0.3,J/(mol·K)\n" +
+            "s2,C2H6(g),S,229.2,0.5,J/(mol·K)\n" +
+            "s3,CH4(g),S,186.0,0.4,J/(mol·K)\n" +
+            "g1,NO(g),dG,86.6,0.2,kJ/mol\n" +
+            "g2,NO2(g),dG,51.3,0.3,kJ/mol\n" +
+            "g3,2 NO(g) + O2(g) -> 2 NO2(g),dG,-70.4,0.5,kJ/mol\n" +
+            "g4,NH3(g),dG,-16.4,0.3,kJ/mol\n" +
+            "g5,4 NH3(g) + 5 O2(g) -> 4 NO(g) + 6 H2O(g),dG,-959.0,2.0,kJ/mol\n" +
+            "g6,H2O(g),dG,-228.6,0.1,kJ/mol\n";
+        ReactionNetwork network = Read(csv);
+        var solutions = new NetworkSolutions(network, adjust: false);
+
+        foreach (PropertyFamily family in new[] { PropertyFamily.Enthalpy, PropertyFamily.Entropy, PropertyFamily.GibbsEnergy })
+        {
+            // When each family is also solved on its own, as before the joint model (one unknown per species and family)
+            PropertyModel alone = PropertyModel.Build(network, family);
+            LeastSquaresSolution separate = WeightedLeastSquares.Solve(alone.ToObservationSystem());
+            SolveReport joint = solutions.Report(family)!;
+
+            // Then every species value and uncertainty of the family agrees to rounding
+            for (int j = 0; j < alone.Unknowns.Count; j++)
+            {
+                SpeciesEstimate estimate = joint.Species.Single(item => item.Species.Equals(alone.Unknowns[j]));
+                Assert.Equal(separate.Values[j], estimate.Value, 1e-9);
+                Assert.Equal(separate.StandardUncertainties[j], estimate.Uncertainty, 1e-9);
+            }
+        }
+    }
+
+    [Fact]
     public void Electron_InEntropyTerms_CountsAsHalfHydrogen()
     {
         // Given ΔS of H+(aq) + e- → ½ H2(g), which is zero by convention, and nothing else
