@@ -53,11 +53,9 @@ public sealed class SolvedAnalysis : INetworkAnalysis
 
             foreach (PathFinder.Analysis.SuspectReport suspect in analysis.Suspects)
             {
-                string reason = string.Create(CultureInfo.InvariantCulture, $"z = {suspect.NormalizedResidual:+0.0;-0.0} when first picked; its uncertainty had to grow ×{suspect.Inflation:0.#} to agree with the rest");
-                if (suspect.LikelyCause is { } cause)
-                {
-                    reason += "; " + cause.Detail;
-                }
+                // The likely slip leads: it is what a curator acts on; the statistics follow.
+                string statistics = string.Create(CultureInfo.InvariantCulture, $"z = {suspect.NormalizedResidual:+0.0;-0.0} when first picked; its uncertainty had to grow ×{suspect.Inflation:0.#} to agree with the rest");
+                string reason = suspect.LikelyCause is { } cause ? $"{cause.Detail}; {statistics}" : statistics;
 
                 suspects.Add(new SuspectReport(suspect.Measurement.Id, suspect.NormalizedResidual, suspect.Predicted, suspect.PredictedUncertainty, reason));
             }

@@ -63,7 +63,14 @@ public static class NetworkSolver
         {
             int enthalpy = model.IndexOf(species, UnknownKind.FormationEnthalpy);
             int entropy = model.IndexOf(species, UnknownKind.Entropy);
-            int measurements = Math.Max(enthalpy >= 0 ? uses[enthalpy] : 0, entropy >= 0 ? uses[entropy] : 0);
+            int enthalpyUses = enthalpy >= 0 ? uses[enthalpy] : 0;
+            int entropyUses = entropy >= 0 ? uses[entropy] : 0;
+            int measurements = family switch
+            {
+                PropertyFamily.Enthalpy => enthalpyUses,
+                PropertyFamily.Entropy => entropyUses,
+                _ => Math.Max(enthalpyUses, entropyUses),
+            };
             switch (family)
             {
                 case PropertyFamily.Enthalpy when enthalpy >= 0:
