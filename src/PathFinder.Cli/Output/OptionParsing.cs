@@ -9,10 +9,17 @@ namespace PathFinder.Cli.Output;
 public static class OptionParsing
 {
     /// <summary>Reads a property code such as dH into its family.</summary>
-    public static ThermoProperty Property(string code) =>
-        ThermoProperties.TryParse(code, out ThermoProperty property) && property != ThermoProperty.AbsoluteEntropy
-            ? property
-            : throw new UserInputException($"--property '{code}' is not one of dH, dG, dS, dU");
+    public static ThermoProperty Property(string code)
+    {
+        if (!ThermoProperties.TryParse(code, out ThermoProperty property) || property == ThermoProperty.AbsoluteEntropy)
+        {
+            throw new UserInputException($"--property '{code}' is not one of dH, dG, dS, dU");
+        }
+
+        return property.IsEquilibriumConstant()
+            ? throw new UserInputException($"--property '{code}': results are given as ΔG: use --property dG (routes --temperature T also gives K)")
+            : property;
+    }
 
     /// <summary>Reads a target against the network, with a caret under the problem when it fails.</summary>
     public static ChemicalEquation Target(string text, ReactionNetwork network)

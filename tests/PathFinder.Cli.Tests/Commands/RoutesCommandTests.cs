@@ -45,6 +45,22 @@ public sealed class RoutesCommandTests : IDisposable
         Assert.True(givenEstimate < adjustedEstimate, $"{givenEstimate} should be below {adjustedEstimate}");
     }
 
+    [Theory]
+    [InlineData("lnK")]
+    [InlineData("log10K")]
+    [InlineData("S")]
+    public void Routes_PropertyThatIsNoReactionQuantity_IsRefusedWithExitTwo(string property)
+    {
+        // Given a property code that data may use but results are not given in
+        CliRun run = CliRun.Of("routes", Handbook(), "--target", "CO(g)", "--property", property);
+
+        // Then the command refuses it, says what to use, and prints no stack trace
+        Assert.Equal(ExitCodes.InvalidInput, run.ExitCode);
+        Assert.Contains("--property", run.Error, StringComparison.Ordinal);
+        Assert.Contains("dG", run.Error, StringComparison.Ordinal);
+        Assert.DoesNotContain("   at ", run.Error, StringComparison.Ordinal);
+    }
+
     [Fact]
     public void Routes_Text_ShowsTheRouteToCarbonMonoxideWithItsValue()
     {
