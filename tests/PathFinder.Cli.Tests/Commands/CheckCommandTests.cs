@@ -10,15 +10,29 @@ public sealed class CheckCommandTests : IDisposable
     public void Dispose() => _folder.Dispose();
 
     [Fact]
-    public void Check_Demo_ExitsOneBecauseOfC03_AndNamesItFirst()
+    public void Check_Demo_ExitsOne_AndNamesE04ThenC03()
     {
         CliRun run = CliRun.Of("check", RepoPaths.Demo("combustion-lab"));
 
         Assert.Equal(ExitCodes.AnalysisProblem, run.ExitCode);
         Assert.Contains("Result: INCONSISTENT (exit code 1)", run.Out, StringComparison.Ordinal);
-        string firstSuspect = run.Out.Split('\n').SkipWhile(line => !line.Contains("Suspects (", StringComparison.Ordinal)).Skip(1).First();
-        Assert.StartsWith("     C03", firstSuspect, StringComparison.Ordinal);
-        Assert.Contains("[group-c]", firstSuspect, StringComparison.Ordinal);
+        Assert.Contains("Suspects (2, most serious first):", run.Out, StringComparison.Ordinal);
+
+        // Suspect lines start with five spaces and an id; their detail lines are indented further
+        string[] suspects = run.Out.Split('\n').SkipWhile(line => !line.Contains("Suspects (", StringComparison.Ordinal)).Skip(1)
+            .TakeWhile(line => line.StartsWith("     ", StringComparison.Ordinal))
+            .Where(line => !line.StartsWith("      ", StringComparison.Ordinal)).ToArray();
+        Assert.Equal(2, suspects.Length);
+
+        // First E04 (group E's ΔfG°(CO), copied from a kcal/mol column: off by about 104 kJ/mol, z ≈ +517), which only the
+        // tie between ΔG, ΔH and S° can see; the cause is named
+        Assert.StartsWith("     E04", suspects[0], StringComparison.Ordinal);
+        Assert.Contains("[group-e]", suspects[0], StringComparison.Ordinal);
+        Assert.Contains("looks like kcal/mol typed as kJ/mol", run.Out, StringComparison.Ordinal);
+
+        // Then C03, the water-gas shift ΔH slipped by about 6 kJ/mol in transcription, still found
+        Assert.StartsWith("     C03", suspects[1], StringComparison.Ordinal);
+        Assert.Contains("[group-c]", suspects[1], StringComparison.Ordinal);
     }
 
     [Fact]
@@ -30,7 +44,27 @@ public sealed class CheckCommandTests : IDisposable
         using JsonDocument document = JsonDocument.Parse(run.Out);
         JsonElement root = document.RootElement;
         Assert.False(root.GetProperty("consistent").GetBoolean());
-        JsonElement suspect = root.GetProperty("suspects")[0];
+        JsonElement[] suspects = root.GetProperty("suspects").EnumerateArray().ToArray();
+        Assert.Equal(["E04", "C03"], suspects.Select(suspect => suspect.GetProperty("id").GetString()));
+
+        // The first suspect is E04, most serious: ΔfG°(CO) typed from a kcal/mol column. Its likely cause is a field
+        // with the data's own code, and the rest of the network puts ΔfG°(CO, g) near ΔfH° − T·ΔfS°
+        // = −110.53 − 298.15 × (197.66 − 5.74 − ½ × 205.152) / 1000 = −137.168 kJ/mol (CODATA Key Values 1989, from memory)
+        JsonElement slip = suspects[0];
+        Assert.Equal("dG", slip.GetProperty("property").GetString());
+        Assert.Equal("group-e", slip.GetProperty("source").GetString());
+        Assert.Equal(-32.78, slip.GetProperty("measured").GetDouble(), 1e-9);
+        Assert.True(slip.GetProperty("normalizedResidual").GetDouble() > 100);
+        JsonElement cause = slip.GetProperty("likelyCause");
+        Assert.Equal("calorie", cause.GetProperty("kind").GetString());
+        Assert.Equal(-32.78 * 4.184, cause.GetProperty("explainedValue").GetDouble(), 1e-9);
+        double slipPredicted = slip.GetProperty("predicted").GetDouble();
+        double slipSpread = slip.GetProperty("predictedUncertainty").GetDouble();
+        Assert.True(slipSpread > 0);
+        Assert.InRange(slipPredicted, -137.168 - (3 * slipSpread), -137.168 + (3 * slipSpread));
+
+        // The second is C03, the water-gas shift ΔH slipped in transcription
+        JsonElement suspect = suspects[1];
         Assert.Equal("C03", suspect.GetProperty("id").GetString());
         Assert.Equal("group-c", suspect.GetProperty("source").GetString());
         Assert.Equal(-47.6, suspect.GetProperty("measured").GetDouble(), 1e-9);
@@ -47,10 +81,18 @@ public sealed class CheckCommandTests : IDisposable
         JsonElement[] cycles = root.GetProperty("cycles").EnumerateArray().ToArray();
         Assert.NotEmpty(cycles);
         Assert.Contains(cycles, cycle => cycle.GetProperty("flagged").GetBoolean() && cycle.GetProperty("members").EnumerateArray().Any(member => member.GetProperty("id").GetString() == "C03"));
+
+        // The worst cycle is a G = H − TS closure through E04 (mixed: ΔH, S° and ΔG members), which fails to close
+        JsonElement worst = cycles[0];
+        Assert.True(worst.GetProperty("flagged").GetBoolean());
+        Assert.True(worst.GetProperty("mixed").GetBoolean());
+        Assert.Contains(worst.GetProperty("members").EnumerateArray(), member => member.GetProperty("id").GetString() == "E04");
+        Assert.Equal(["S", "dG", "dH"], worst.GetProperty("members").EnumerateArray().Select(member => member.GetProperty("property").GetString()).Distinct().Order(StringComparer.Ordinal));
         Assert.All(cycles.SelectMany(cycle => cycle.GetProperty("members").EnumerateArray()), member => Assert.Matches("^-?[0-9]+(/[0-9]+|\\.[0-9]+)?$", member.GetProperty("factor").GetString()!));
         string[] sources = root.GetProperty("sources").EnumerateArray().Select(source => source.GetProperty("name").GetString()!).ToArray();
         Assert.Contains("group-a", sources);
         Assert.Contains("group-c", sources);
+        Assert.Contains("group-e", sources);
     }
 
     [Fact]

@@ -1,3 +1,5 @@
+using System.Globalization;
+using System.Text.Json;
 using System.Xml.Linq;
 using PathFinder.Cli.Tests.TestSupport;
 
@@ -46,9 +48,33 @@ public sealed class DrawCommandTests : IDisposable
 
         CliRun run = CliRun.Of("draw", Demo, "--kind", "closure", "--cycle", "1", "-o", file);
 
-        // The worst cycle of the demo runs through C03 (as 'check' lists it first)
+        // The worst cycle of the demo is a G = H − TS closure through E04 (as 'check' lists it first): its ladder of
+        // terms is drawn, naming E04 and the gap
         Assert.Equal(ExitCodes.Success, run.ExitCode);
-        Assert.Contains("C03", File.ReadAllText(file), StringComparison.Ordinal);
+        string svg = File.ReadAllText(file);
+        Assert.Contains(">E04", svg, StringComparison.Ordinal);
+        Assert.Contains("(G = H − TS)", svg, StringComparison.Ordinal);
+        Assert.Contains("does not close", svg, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Draw_ClosureOfTheFirstCycleThroughC03_NamesC03()
+    {
+        // Given the first failing cycle through C03, by the number 'check --json' gives it
+        using JsonDocument check = JsonDocument.Parse(CliRun.Of("check", Demo, "--json").Out);
+        JsonElement cycle = check.RootElement.GetProperty("cycles").EnumerateArray()
+            .First(cycle => cycle.GetProperty("flagged").GetBoolean() && cycle.GetProperty("members").EnumerateArray().Any(member => member.GetProperty("id").GetString() == "C03"));
+        string number = cycle.GetProperty("number").GetInt32().ToString(CultureInfo.InvariantCulture);
+        string file = Output("closure-c03.svg");
+
+        // When its closure is drawn
+        CliRun run = CliRun.Of("draw", Demo, "--kind", "closure", "--cycle", number, "-o", file);
+
+        // Then the drawing names C03 and shows the gap
+        Assert.Equal(ExitCodes.Success, run.ExitCode);
+        string svg = File.ReadAllText(file);
+        Assert.Contains(">C03", svg, StringComparison.Ordinal);
+        Assert.Contains("does not close", svg, StringComparison.Ordinal);
     }
 
     [Theory]

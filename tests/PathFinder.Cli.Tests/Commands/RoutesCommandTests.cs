@@ -23,7 +23,7 @@ public sealed class RoutesCommandTests : IDisposable
     [Fact]
     public void Routes_MarkRoutesThroughASuspect_UnlessTheDataAreTakenAsGiven()
     {
-        // Given the demo lab, whose water-gas shift value C03 is the suspect
+        // Given the demo lab, whose water-gas shift value C03 is a suspect (the other, E04, is a ΔG and on no ΔH route)
         string demo = RepoPaths.Demo("combustion-lab");
         const string Shift = "CO(g) + H2O(g) -> CO2(g) + H2(g)";
 

@@ -10,24 +10,43 @@ public sealed class AnalysisSessionTests : IDisposable
 
     public void Dispose() => _folder.Dispose();
 
-    private string CuratedDemo()
+    private string CuratedDemo(string curation = "C03,exclude,slipped,2026-01-01\n")
     {
         string demo = DemoCopy.CombustionLab(_folder);
-        File.WriteAllText(Path.Combine(demo, "curation.csv"), "id,action,reason,date\nC03,exclude,slipped,2026-01-01\n");
+        File.WriteAllText(Path.Combine(demo, "curation.csv"), "id,action,reason,date\n" + curation);
         return demo;
     }
 
     [Fact]
-    public void Check_WithC03Excluded_IsConsistent()
+    public void Check_WithC03Excluded_NoLongerNamesIt_ButE04Remains()
     {
         string demo = CuratedDemo();
 
         CliRun run = CliRun.Of("check", demo);
 
-        Assert.Equal(ExitCodes.Success, run.ExitCode);
-        Assert.Contains("Result: consistent.", run.Out, StringComparison.Ordinal);
+        // C03 is gone; E04 (group E's ΔG slip, which has nothing to do with C03) still makes the demo inconsistent
+        Assert.Equal(ExitCodes.AnalysisProblem, run.ExitCode);
+        Assert.Contains("Result: INCONSISTENT (exit code 1)", run.Out, StringComparison.Ordinal);
         Assert.Contains("1 measurement(s) excluded", run.Error, StringComparison.Ordinal);
         Assert.Contains("C03", run.Error, StringComparison.Ordinal);
+        Assert.Contains("Suspects (1, most serious first):", run.Out, StringComparison.Ordinal);
+        Assert.Contains("\n     E04 ", run.Out, StringComparison.Ordinal);
+        Assert.DoesNotContain("C03", run.Out, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Check_WithBothSlipsExcluded_IsConsistent()
+    {
+        string demo = CuratedDemo("C03,exclude,slipped,2026-01-01\nE04,exclude,kcal/mol column,2026-01-01\n");
+
+        CliRun run = CliRun.Of("check", demo);
+
+        Assert.Equal(ExitCodes.Success, run.ExitCode);
+        Assert.Contains("Result: consistent.", run.Out, StringComparison.Ordinal);
+        Assert.Contains("Suspects: none.", run.Out, StringComparison.Ordinal);
+        Assert.Contains("2 measurement(s) excluded", run.Error, StringComparison.Ordinal);
+        Assert.Contains("C03", run.Error, StringComparison.Ordinal);
+        Assert.Contains("E04", run.Error, StringComparison.Ordinal);
     }
 
     [Fact]
@@ -37,9 +56,10 @@ public sealed class AnalysisSessionTests : IDisposable
 
         CliRun run = CliRun.Of("solve", demo, "--json");
 
+        // C03 is no suspect any more; E04 (the ΔG slip of group E) still is, and is the only one
         Assert.Equal(ExitCodes.Success, run.ExitCode);
         using JsonDocument document = JsonDocument.Parse(run.Out);
-        Assert.Equal(0, document.RootElement.GetProperty("suspects").GetArrayLength());
+        Assert.Equal(["E04"], document.RootElement.GetProperty("suspects").EnumerateArray().Select(suspect => suspect.GetString()));
         // Every datum of the demo (the joint model solves ΔH, ΔU, S°, ΔS, ΔG and K rows together) less C03
         int rows = PathFinder.Data.NetworkReader.Read(demo).Network.Measurements.Count;
         Assert.Equal(rows - 1, document.RootElement.GetProperty("measurements").GetInt32());

@@ -9,17 +9,45 @@ namespace PathFinder.Tests.Data;
 public sealed class DemoNetworkTests
 {
     [Fact]
-    public void CombustionLab_IsValidWith38Measurements()
+    public void CombustionLab_IsValidWith46Measurements()
     {
         NetworkReadResult result = NetworkReader.Read(RepoPaths.Demo("combustion-lab"));
 
+        // 14 + 9 + 7 + 8 + 8 rows in group-a.csv … group-e.csv
         Assert.Empty(result.Errors);
-        Assert.Equal(38, result.Network.Measurements.Count);
-        Assert.Equal(4, result.Files.Count);
+        Assert.Equal(46, result.Network.Measurements.Count);
+        Assert.Equal(5, result.Files.Count);
         Assert.NotNull(result.HeatCapacityFile);
         Assert.Empty(result.Diagnostics);
         Assert.NotNull(result.SpeciesFile);
-        Assert.Equal(["group-a", "group-b", "group-c", "group-d"], result.Network.Sources);
+        Assert.Equal(["group-a", "group-b", "group-c", "group-d", "group-e"], result.Network.Sources);
+        Assert.Equal(8, result.Network.Measurements.Count(measurement => measurement.Source == "group-e"));
+
+        // sources.csv declares one systematic: group A's shared calorimeter calibration, 0.15 kJ/mol
+        Assert.NotNull(result.SourcesFile);
+        SourceSystematic declared = Assert.Single(result.SourceSystematics);
+        Assert.Equal("group-a", declared.Source);
+        Assert.Equal(0.15, declared.Systematic, 1e-12);
+        Assert.Equal(EnergyUnit.KilojoulePerMole, declared.Unit);
+    }
+
+    [Fact]
+    public void CombustionLab_GroupE_HoldsTheGibbsSeriesAndThePlantedSlip()
+    {
+        ReactionNetwork network = NetworkReader.Read(RepoPaths.Demo("combustion-lab")).Network;
+
+        // E04 is ΔfG°(CO) copied from a kcal/mol column: −32.78 "kJ/mol" where the tables give about −137.2 kJ/mol
+        Measurement slip = network["E04"];
+        Assert.Equal(ThermoProperty.GibbsEnergy, slip.Property);
+        Assert.Equal(-32.78, slip.Value, 12);
+        Assert.Equal("CO(g)", slip.Equation.FormedSpecies?.Name);
+
+        // E05–E08: log10 K of CO + 2 H2 → CH3OH(g) at 450, 500, 550 and 600 K, falling with temperature (exothermic)
+        Measurement[] series = new[] { "E05", "E06", "E07", "E08" }.Select(id => network[id]).ToArray();
+        Assert.All(series, measurement => Assert.Equal(ThermoProperty.Log10EquilibriumConstant, measurement.Property));
+        Assert.Equal(4, series.Length);
+        Assert.All(series.Zip(new[] { 450.0, 500.0, 550.0, 600.0 }), pair => Assert.Equal(pair.Second, pair.First.Temperature, 1e-9));
+        Assert.True(series.Zip(series.Skip(1)).All(pair => pair.Second.Value < pair.First.Value));
     }
 
     [Fact]

@@ -32,13 +32,63 @@ public sealed class DemoDiagramSnapshotTests
     [Fact]
     public void CycleClosure_OfTheWorstCycle_MatchesSnapshot()
     {
-        // Given the worst cycle of the combustion-lab demo (it contains the slipped C03); When its closure is drawn; Then it matches the snapshot.
+        // Given the worst cycle of the combustion-lab demo: a G = H − TS closure through E04, the ΔfG°(CO) copied from a
+        // kcal/mol column (group-e.csv), which no ΔH-only cycle can see
         CycleCheck worst = WorstCycle();
+        Assert.True(worst.IsMixed);
+        Assert.Equal(["A01", "A08", "D02", "D03", "D04", "E04"], worst.Members.Select(member => member.Measurement.Id).Order(StringComparer.Ordinal));
 
-        LevelDiagram diagram = LevelDiagramRenderer.RenderCycle(FigureBuilder.CycleLevels(worst));
+        // When its closure is drawn
+        CycleClosure closure = FigureBuilder.CycleLevels(worst);
+        LevelDiagram diagram = LevelDiagramRenderer.RenderCycle(closure);
 
+        // Then it matches the snapshot
         SnapshotAssert.Matches(diagram.Diagram.Svg, "demo-combustion-cycle1-closure.svg");
+
+        // And, independently of the golden file: the ladder adds the terms cᵢ·vᵢ from the CSV values,
+        // ΔfH°(CO2) − ΔfH°(CO) + T·(½ S°(O2) + S°(C) − S°(CO)) − ΔfG°(CO) with T = 298.15 K and S° in kJ/(mol·K):
+        // −393.51 + 283.0 + 0.149075 × 205.2 + 0.29815 × 5.74 − 0.29815 × 197.7 + 32.78 = −104.37 kJ/mol,
+        // which is E04's slip: 32.78 kcal/mol is 137.15 kJ/mol
+        double residual = -393.51 + 283.0 + (0.149075 * 205.2) + (0.29815 * 5.74) - (0.29815 * 197.7) + 32.78;
+        Assert.Equal(residual, closure.Residual, 1e-9);
+        Assert.Equal(residual, worst.Residual, 1e-9);
         Assert.False(diagram.Closes);
+        Assert.Equal(6, diagram.Arrows.Count(arrow => arrow.Kind == LevelArrowKind.Step));
+        Assert.Equal(7, diagram.Levels.Count);
+        Assert.Equal(0.0, diagram.Levels[0].Value, 1e-12);
+        Assert.Equal(residual, diagram.Levels[^1].Value, 1e-9);
+        PlacedArrow gap = Assert.Single(diagram.Arrows, arrow => arrow.Kind == LevelArrowKind.Gap);
+        Assert.Equal(diagram.Levels[0].Y, gap.Start.Y, 1e-9);
+        Assert.Equal(diagram.Levels[^1].Y, gap.End.Y, 1e-9);
+        Assert.True(gap.End.Y > gap.Start.Y, "a negative residual ends below zero (y grows downwards)");
+        string svg = diagram.Diagram.Svg;
+        Assert.All(["A01", "A08", "D02", "D03", "D04", "E04"], id => Assert.Contains($">{id}", svg, StringComparison.Ordinal));
+        Assert.Contains("E04 reversed", svg, StringComparison.Ordinal);
+        Assert.Contains("(G = H − TS)", svg, StringComparison.Ordinal);
+        Assert.Contains("does not close", svg, StringComparison.Ordinal);
+        Assert.Contains("residual −104.4 ± 0.3 kJ/mol", svg, StringComparison.Ordinal);
+        Assert.Contains("Σ / (kJ/mol)", svg, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void CycleClosure_OfTheC03Cycle_MatchesSnapshot()
+    {
+        // Given the ΔH-only cycle A02 − A08 + B04 + C03 (the demo's worst before group E; still the worst through C03),
+        // chosen by its members, not its rank
+        CycleCheck cycle = CycleThrough("A02", "A08", "B04", "C03");
+        Assert.False(cycle.IsMixed);
+
+        // When its closure is drawn
+        LevelDiagram diagram = LevelDiagramRenderer.RenderCycle(FigureBuilder.CycleLevels(cycle));
+
+        // Then it matches the snapshot, and independently: −285.83 + 283.0 + 44.01 − 47.6 = −6.42 kJ/mol does not close
+        SnapshotAssert.Matches(diagram.Diagram.Svg, "demo-combustion-c03-cycle-closure.svg");
+        Assert.False(diagram.Closes);
+        Assert.Equal(-285.83 + 283.0 + 44.01 - 47.6, diagram.Levels[^1].Value, 1e-9);
+        Assert.Equal(4, diagram.Arrows.Count(arrow => arrow.Kind == LevelArrowKind.Step));
+        Assert.All(["A02", "A08", "B04", "C03"], id => Assert.Contains($">{id}", diagram.Diagram.Svg, StringComparison.Ordinal));
+        Assert.Contains("does not close", diagram.Diagram.Svg, StringComparison.Ordinal);
+        Assert.Contains("residual −6.4 ± 0.4 kJ/mol", diagram.Diagram.Svg, StringComparison.Ordinal);
     }
 
     [Fact]
@@ -114,8 +164,9 @@ public sealed class DemoDiagramSnapshotTests
     [Fact]
     public void CycleClosure_ShowsSmallUncertaintiesWithTwoDecimals()
     {
-        // Given the worst cycle, whose A02 and B04 steps have uncertainties of 0.04 kJ/mol (group-a.csv, group-b.csv)
-        CycleClosure closure = FigureBuilder.CycleLevels(WorstCycle());
+        // Given the cycle A02 − A08 + B04 + C03 (chosen by its members: it is no longer the worst, which now runs
+        // through E04), whose A02 and B04 steps have uncertainties of 0.04 kJ/mol (group-a.csv, group-b.csv)
+        CycleClosure closure = FigureBuilder.CycleLevels(CycleThrough("A02", "A08", "B04", "C03"));
 
         // When drawn
         LevelDiagram diagram = LevelDiagramRenderer.RenderCycle(closure);
@@ -147,9 +198,15 @@ public sealed class DemoDiagramSnapshotTests
         return (report, model);
     }
 
-    private static CycleCheck WorstCycle()
+    private static IReadOnlyList<CycleCheck> Cycles()
     {
         NetworkReadResult read = NetworkReader.Read(RepoPaths.Demo("combustion-lab"));
-        return ConsistencyCheck.Analyse(ThermoModel.Build(read.Network, read.HeatCapacities)).Cycles[0];
+        return ConsistencyCheck.Analyse(ThermoModel.Build(read.Network, read.HeatCapacities)).Cycles;
     }
+
+    private static CycleCheck WorstCycle() => Cycles()[0];
+
+    // The one cycle made of exactly these measurements, wherever it ranks.
+    private static CycleCheck CycleThrough(params string[] ids) =>
+        Assert.Single(Cycles(), cycle => cycle.Members.Select(member => member.Measurement.Id).Order(StringComparer.Ordinal).SequenceEqual(ids.Order(StringComparer.Ordinal)));
 }

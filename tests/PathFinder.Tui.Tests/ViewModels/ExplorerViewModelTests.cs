@@ -236,13 +236,25 @@ public sealed class ExplorerViewModelTests : IDisposable
 
         vm.Export(route, vm.Target.Snapshot(), new DiagramFocus(Route: vm.Target.Routes[0]));
         await vm.WhenIdleAsync();
+        string routeStatus = vm.StatusText;
         vm.Export(cycle, vm.Consistency.CycleSnapshot(), new DiagramFocus(Cycle: vm.Consistency.Cycles[0].Cycle));
         await vm.WhenIdleAsync();
+        string cycleStatus = vm.StatusText;
 
+        // The status names both files of each export (a failure would say "could not export" instead)
+        Assert.Contains($"wrote {route} (network) and {Path.Combine(_demo.Folder, "route-levels.svg")} (levels)", routeStatus, StringComparison.Ordinal);
+        Assert.Contains($"wrote {cycle} (network) and {Path.Combine(_demo.Folder, "cycle-closure.svg")} (closure)", cycleStatus, StringComparison.Ordinal);
         foreach (string file in new[] { route, Path.Combine(_demo.Folder, "route-levels.svg"), cycle, Path.Combine(_demo.Folder, "cycle-closure.svg") })
         {
             Assert.Equal("svg", System.Xml.Linq.XDocument.Load(file).Root!.Name.LocalName);
         }
+
+        // The demo's worst cycle is the G = H − TS closure through E04 (ΔG from a kcal/mol column): it gets the ladder
+        // of its terms, not nothing
+        string closure = File.ReadAllText(Path.Combine(_demo.Folder, "cycle-closure.svg"));
+        Assert.Contains("(G = H − TS)", closure, StringComparison.Ordinal);
+        Assert.Contains(">E04", closure, StringComparison.Ordinal);
+        Assert.Contains("does not close", closure, StringComparison.Ordinal);
     }
 
     [Fact]

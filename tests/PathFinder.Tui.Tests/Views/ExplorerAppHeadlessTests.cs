@@ -178,7 +178,7 @@ public sealed class ExplorerAppHeadlessTests : IDisposable
             steps.Enqueue(("dialog", () => app.TopRunnableView is Dialog, () =>
             {
                 screens["dialog"] = ScreenText(app);
-                foreach (char c in "transcription error")
+                foreach (char c in "copied from the kcal column")
                 {
                     app.InjectKey(new Key(c));
                 }
@@ -197,23 +197,34 @@ public sealed class ExplorerAppHeadlessTests : IDisposable
             RunScript(app, window, steps);
         }
 
-        // Then the suspect row, its cycles and its source were shown (read from the demo data: C03 of group-c)
-        Assert.Contains("│C03", screens["before"], StringComparison.Ordinal);
-        Assert.Contains("1 suspect(s)", screens["before"], StringComparison.Ordinal);
-        Assert.Contains("showing cycles through C03", screens["cycles"], StringComparison.Ordinal);
+        // Then the suspect rows, the first one's cycles and its source were shown. The demo has two suspects; the first,
+        // most serious, is E04 of group-e (ΔfG°(CO) copied from a kcal/mol column, z ≈ +517), then C03 of group-c
+        // (the water-gas shift ΔH slipped in transcription, z ≈ −18). E04's cycles are the G = H − TS closures.
+        Assert.Contains("2 suspect(s)", screens["before"], StringComparison.Ordinal);
+        string[] suspectRows = screens["before"].Split('\n').Where(line => line.Contains("│E04", StringComparison.Ordinal) || line.Contains("│C03", StringComparison.Ordinal)).ToArray();
+        Assert.Equal(2, suspectRows.Length);
+        Assert.Contains("│E04", suspectRows[0], StringComparison.Ordinal);
+        Assert.Contains("group-e", suspectRows[0], StringComparison.Ordinal);
+        Assert.Contains("│C03", suspectRows[1], StringComparison.Ordinal);
+        Assert.Contains("group-c", suspectRows[1], StringComparison.Ordinal);
+        Assert.Contains("showing cycles through E04", screens["cycles"], StringComparison.Ordinal);
         Assert.Contains("FLAGGED", screens["cycles"], StringComparison.Ordinal);
-        Assert.Contains("group-c:", screens["source"], StringComparison.Ordinal);
-        Assert.Contains("Exclude C03", screens["dialog"], StringComparison.Ordinal);
+        Assert.Contains("│1│FLAGGED│", screens["cycles"], StringComparison.Ordinal);
+        Assert.DoesNotContain("│3│FLAGGED│", screens["cycles"], StringComparison.Ordinal); // cycle 3 is A02 − A08 + B04 + C03
+        Assert.Contains("group-e:", screens["source"], StringComparison.Ordinal);
+        Assert.Contains("Exclude E04", screens["dialog"], StringComparison.Ordinal);
 
-        // And after excluding it the re-solved analysis is on screen: no suspect left, fewer flagged cycles
-        Assert.Contains("0 suspect(s)", screens["after"], StringComparison.Ordinal);
-        Assert.DoesNotContain("│C03", screens["after"], StringComparison.Ordinal);
+        // And after excluding it the re-solved analysis is on screen: one suspect left (C03, which E04 never hid), fewer
+        // flagged cycles
+        Assert.Contains("1 suspect(s)", screens["after"], StringComparison.Ordinal);
+        Assert.DoesNotContain("│E04", screens["after"], StringComparison.Ordinal);
+        Assert.Contains("│C03", screens["after"], StringComparison.Ordinal);
         Assert.Contains("UNSAVED", screens["after"], StringComparison.Ordinal);
         Assert.NotNull(before);
         string flaggedBefore = before!.Split(';')[0];
         Assert.DoesNotContain(flaggedBefore, screens["after"], StringComparison.Ordinal);
 
-        // And when the network is opened again, the saved exclusion holds and the analysis has no suspect
+        // And when the network is opened again, the saved exclusion holds and the analysis has C03 as its one suspect
         using (IApplication app = Headless(80, 24))
         {
             ExplorerViewModel vm = ExplorerApp.CreateViewModel(app, _demo.Folder, SolvedAnalysis.Analyzer);
@@ -230,8 +241,11 @@ public sealed class ExplorerAppHeadlessTests : IDisposable
             RunScript(app, window, steps);
         }
 
-        Assert.Contains("0 suspect(s)", screens["reopened"], StringComparison.Ordinal);
+        Assert.Contains("1 suspect(s)", screens["reopened"], StringComparison.Ordinal);
+        Assert.DoesNotContain("│E04", screens["reopened"], StringComparison.Ordinal);
+        Assert.Contains("│C03", screens["reopened"], StringComparison.Ordinal);
         Assert.Contains("1 excluded, saved", screens["reopened"], StringComparison.Ordinal);
+        Assert.Contains("E04,exclude,copied from the kcal column,", File.ReadAllText(_demo.CurationPath), StringComparison.Ordinal);
     }
 
     private static void RunScript(IApplication app, ExplorerWindow window, Queue<(string Name, Func<bool> Ready, Action Act)> steps)
