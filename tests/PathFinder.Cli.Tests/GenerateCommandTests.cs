@@ -31,6 +31,26 @@ public sealed class GenerateCommandTests : IDisposable
     }
 
     [Fact]
+    public void Generate_WithEntropiesAndGibbs_WritesSAndGibbsDataThatTheReaderAccepts()
+    {
+        // Given a fresh destination folder
+        string destination = Path.Combine(_folder.Path, "joint");
+
+        // When S° is asked for half the species (10 + 6 known species) and 40 Gibbs-energy data
+        (int exitCode, string output, string error) = Invoke("generate", "--species", "20", "--measurements", "100", "--entropies", "0.5", "--gibbs", "40", "--out", destination);
+
+        // Then all 156 rows read without errors, with S°, ΔG and K rows among them, and the truth lists entropies
+        Assert.Equal(ExitCodes.Success, exitCode);
+        Assert.Equal("", error);
+        Assert.Contains("Wrote 156 measurement(s)", output, StringComparison.Ordinal);
+        NetworkReadResult read = NetworkReader.Read(destination);
+        Assert.False(read.HasErrors, string.Join(Environment.NewLine, read.Errors.Take(3)));
+        Assert.Equal(16, read.Network.Measurements.Count(measurement => measurement.Property == PathFinder.Quantities.ThermoProperty.AbsoluteEntropy));
+        Assert.Equal(40, read.Network.Measurements.Count(measurement => measurement.Temperature >= 298.15 && measurement.Property is not (PathFinder.Quantities.ThermoProperty.Enthalpy or PathFinder.Quantities.ThermoProperty.AbsoluteEntropy)));
+        Assert.Equal(16, File.ReadAllLines(Path.Combine(destination, "truth.txt")).Count(line => line.StartsWith("entropy,", StringComparison.Ordinal)));
+    }
+
+    [Fact]
     public void Generate_SameSeedGivesTheSameFiles()
     {
         // Given two folders
@@ -84,6 +104,9 @@ public sealed class GenerateCommandTests : IDisposable
     [InlineData("--species", "10", "--measurements", "10", "--outliers", "-0.1")]
     [InlineData("--species", "ten", "--measurements", "10")]
     [InlineData("--measurements", "10")]
+    [InlineData("--species", "10", "--measurements", "10", "--entropies", "1.2")]
+    [InlineData("--species", "10", "--measurements", "10", "--gibbs", "5")]
+    [InlineData("--species", "10", "--measurements", "10", "--entropies", "0.5", "--gibbs", "-1")]
     public void Generate_BadOptionsExitTwoAndWriteNothing(params string[] options)
     {
         // Given a destination folder

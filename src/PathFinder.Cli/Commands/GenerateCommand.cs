@@ -8,15 +8,17 @@ namespace PathFinder.Cli.Commands;
 /// <summary><c>pathfinder generate --species N --measurements M</c>: writes a synthetic test network with its ground truth.</summary>
 /// <remarks>
 /// The folder receives <c>measurements.csv</c> (readable by every other command) and <c>truth.txt</c> (the true
-/// formation enthalpies and the ids of the injected outliers), from <see cref="SyntheticNetworkGenerator"/>.
+/// formation enthalpies, absolute entropies when asked for, and the ids of the injected outliers), from <see cref="SyntheticNetworkGenerator"/>.
 /// The same options and seed always give the same files.
 /// </remarks>
 public sealed class GenerateCommand
 {
     private readonly Option<int> _species = new("--species") { Description = "Number of species besides the element reference states (at least 3).", Required = true };
-    private readonly Option<int> _measurements = new("--measurements") { Description = "Number of measurements (at least 1).", Required = true };
+    private readonly Option<int> _measurements = new("--measurements") { Description = "Number of ΔH measurements (at least 1); S° and --gibbs data come on top.", Required = true };
     private readonly Option<int> _seed = new("--seed") { Description = "Seed of the generator; the same seed gives the same network (default 1).", DefaultValueFactory = _ => 1 };
     private readonly Option<double> _outliers = new("--outliers") { Description = "Fraction of measurements given a gross error of 8–30 σ, from 0 to 1 (default 0).", DefaultValueFactory = _ => 0.0 };
+    private readonly Option<double> _entropies = new("--entropies") { Description = "Fraction of species given a true S° and an S° datum, from 0 to 1; element reference states, CO2(g) and H2O(l) get one too when above 0 (default 0: ΔH data only).", DefaultValueFactory = _ => 0.0 };
+    private readonly Option<int> _gibbs = new("--gibbs") { Description = "Number of ΔG, ln K and log10 K data at 298.15–1000 K over species with S° (needs --entropies; default 0).", DefaultValueFactory = _ => 0 };
     private readonly Option<string> _out = new("--out", "-o") { Description = "Folder to write measurements.csv and truth.txt into (default ./synthetic-network).", DefaultValueFactory = _ => "synthetic-network" };
     private readonly Option<bool> _force = new("--force") { Description = "Write into the folder even when it is not empty (files of the same name are replaced)." };
 
@@ -25,13 +27,18 @@ public sealed class GenerateCommand
     {
         var command = new Command("generate", "Write a synthetic, element-balanced test network of a chosen size with known true values and outliers (invented numbers, for testing and benchmarks only).")
         {
-            _species, _measurements, _seed, _outliers, _out, _force,
+            _species, _measurements, _seed, _outliers, _entropies, _gibbs, _out, _force,
         };
         command.SetAction(parse => Run(
-            parse.GetValue(_species),
-            parse.GetValue(_measurements),
-            parse.GetValue(_seed),
-            parse.GetValue(_outliers),
+            new SyntheticNetworkOptions
+            {
+                SpeciesCount = parse.GetValue(_species),
+                MeasurementCount = parse.GetValue(_measurements),
+                Seed = parse.GetValue(_seed),
+                OutlierFraction = parse.GetValue(_outliers),
+                EntropyFraction = parse.GetValue(_entropies),
+                GibbsCount = parse.GetValue(_gibbs),
+            },
             parse.GetValue(_out)!,
             parse.GetValue(_force),
             context));
@@ -39,26 +46,39 @@ public sealed class GenerateCommand
     }
 
     /// <summary>Generates and writes the network; exit 0, or <see cref="UserInputException"/> (exit 2) for bad options or a non-empty folder.</summary>
-    /// <param name="species">Number of species (≥ 3).</param>
-    /// <param name="measurements">Number of measurements (≥ 1).</param>
-    /// <param name="seed">Generator seed.</param>
-    /// <param name="outlierFraction">Fraction of measurements given a gross error, in [0, 1].</param>
+    /// <param name="options">What to generate: species (≥ 3), ΔH measurements (≥ 1), seed, outlier fraction and entropy fraction in [0, 1], Gibbs-energy data count (≥ 0, only with entropies).</param>
     /// <param name="folder">Destination folder; created when missing.</param>
     /// <param name="force">Whether a non-empty folder may be written into.</param>
     /// <param name="context">Where the summary goes.</param>
-    public static int Run(int species, int measurements, int seed, double outlierFraction, string folder, bool force, CommandContext context)
+    public static int Run(SyntheticNetworkOptions options, string folder, bool force, CommandContext context)
     {
+        ArgumentNullException.ThrowIfNull(options);
         ArgumentNullException.ThrowIfNull(folder);
         ArgumentNullException.ThrowIfNull(context);
-        if (species < 3)
+        if (options.SpeciesCount < 3)
         {
-            throw new UserInputException($"--species must be at least 3, not {species}");
+            throw new UserInputException($"--species must be at least 3, not {options.SpeciesCount}");
         }
 
-        OptionParsing.Positive(measurements, "--measurements");
-        if (!double.IsFinite(outlierFraction) || outlierFraction < 0.0 || outlierFraction > 1.0)
+        OptionParsing.Positive(options.MeasurementCount, "--measurements");
+        if (!double.IsFinite(options.OutlierFraction) || options.OutlierFraction < 0.0 || options.OutlierFraction > 1.0)
         {
             throw new UserInputException("--outliers must be a fraction from 0 to 1 (for example 0.02)");
+        }
+
+        if (!double.IsFinite(options.EntropyFraction) || options.EntropyFraction < 0.0 || options.EntropyFraction > 1.0)
+        {
+            throw new UserInputException("--entropies must be a fraction from 0 to 1 (for example 0.5)");
+        }
+
+        if (options.GibbsCount < 0)
+        {
+            throw new UserInputException($"--gibbs must be 0 or more, not {options.GibbsCount}");
+        }
+
+        if (options.GibbsCount > 0 && options.EntropyFraction <= 0.0)
+        {
+            throw new UserInputException("--gibbs needs species with S°: add --entropies (for example --entropies 0.5)");
         }
 
         if (string.IsNullOrWhiteSpace(folder))
@@ -76,19 +96,13 @@ public sealed class GenerateCommand
             throw new UserInputException($"the folder {folder} is not empty; choose another --out or add --force to write into it");
         }
 
-        SyntheticNetwork network = SyntheticNetworkGenerator.Generate(new SyntheticNetworkOptions
-        {
-            SpeciesCount = species,
-            MeasurementCount = measurements,
-            Seed = seed,
-            OutlierFraction = outlierFraction,
-        });
+        SyntheticNetwork network = SyntheticNetworkGenerator.Generate(options);
         SyntheticNetworkGenerator.Write(network, folder);
         context.Out.WriteLine(string.Create(
             CultureInfo.InvariantCulture,
-            $"Wrote {network.Network.Measurements.Count} measurement(s) over {network.Network.Species.Count} species ({network.OutlierIds.Count} injected outlier(s), seed {seed}) to {folder}"));
+            $"Wrote {network.Network.Measurements.Count} measurement(s) over {network.Network.Species.Count} species ({network.OutlierIds.Count} injected outlier(s), seed {options.Seed}) to {folder}"));
         context.Out.WriteLine($"  {Path.Combine(folder, "measurements.csv")}");
-        context.Out.WriteLine($"  {Path.Combine(folder, "truth.txt")}  (true formation enthalpies and outlier ids)");
+        context.Out.WriteLine($"  {Path.Combine(folder, "truth.txt")}  (true formation enthalpies{(network.TrueEntropy.Count > 0 ? ", absolute entropies" : "")} and outlier ids)");
         context.Out.WriteLine("The values are invented for testing; they are not data for design.");
         return ExitCodes.Success;
     }

@@ -7,7 +7,7 @@ using PathFinder.Quantities;
 
 namespace PathFinder.Synthetic;
 
-/// <summary>Makes element-balanced test networks of a chosen size from known true formation enthalpies plus noise.</summary>
+/// <summary>Makes element-balanced test networks of a chosen size from known true formation enthalpies (and, on request, absolute entropies) plus noise.</summary>
 /// <remarks>
 /// <para>Species are C/H/O/N molecules with distinct compositions, all gases. Reactions join two to four
 /// species that lie near each other in the species list (families of related compounds, as in real data)
@@ -15,6 +15,10 @@ namespace PathFinder.Synthetic;
 /// N2(g), some are formation reactions, and some repeat an earlier reaction as another determination.</para>
 /// <para>Each value is Σν·ΔfH°(true) plus Gaussian noise of its standard uncertainty (0.2–2 kJ/mol); outliers
 /// get an extra shift of 8–30 standard uncertainties with a random sign. Everything follows from the seed.</para>
+/// <para>On request (<see cref="SyntheticNetworkOptions.EntropyFraction"/>, <see cref="SyntheticNetworkOptions.GibbsCount"/>)
+/// a share of the species, the element reference states, CO2(g) and H2O(l) get a true S° and one S° datum each, and
+/// ΔG, ln K and log₁₀ K data at 298.15–1000 K follow ΔrG°(T) = ΔrH° − T·ΔrS° (ΔrCp = 0). They are drawn after the ΔH
+/// rows, which stay the same as without them.</para>
 /// </remarks>
 public static class SyntheticNetworkGenerator
 {
@@ -25,6 +29,16 @@ public static class SyntheticNetworkGenerator
         if (options.SpeciesCount < 3 || options.MeasurementCount < 1)
         {
             throw new ArgumentOutOfRangeException(nameof(options), "need at least 3 species and 1 measurement");
+        }
+
+        if (!double.IsFinite(options.EntropyFraction) || options.EntropyFraction < 0.0 || options.EntropyFraction > 1.0)
+        {
+            throw new ArgumentOutOfRangeException(nameof(options), "the entropy fraction must be from 0 to 1");
+        }
+
+        if (options.GibbsCount < 0 || (options.GibbsCount > 0 && options.EntropyFraction <= 0.0))
+        {
+            throw new ArgumentOutOfRangeException(nameof(options), "Gibbs-energy data need a count of at least 0 and an entropy fraction above 0");
         }
 
         var random = new Random(options.Seed);
@@ -97,7 +111,16 @@ public static class SyntheticNetworkGenerator
             });
         }
 
-        return new SyntheticNetwork(new ReactionNetwork($"synthetic-{options.Seed}", measurements), truth, outliers);
+        // Drawn after every ΔH row from the same stream, so a ΔH-only network is the same with or without these options.
+        var entropy = new Dictionary<Species, double>();
+        if (options.EntropyFraction > 0.0)
+        {
+            var context = new DrawContext(random, options, sources, measurements, outliers);
+            List<Species> withEntropy = AddEntropyData(context, species, carbonDioxide, water, entropy);
+            AddGibbsData(context, withEntropy, truth, entropy);
+        }
+
+        return new SyntheticNetwork(new ReactionNetwork($"synthetic-{options.Seed}", measurements), truth, outliers) { TrueEntropy = entropy };
     }
 
     /// <summary>Writes the network as a CSV file <c>measurements.csv</c> and its ground truth <c>truth.txt</c> (CSV text) into a folder.</summary>
@@ -112,15 +135,24 @@ public static class SyntheticNetworkGenerator
         data.AppendLine("id,equation,property,value,uncertainty,unit,temperature,source");
         foreach (Measurement measurement in network.Network.Measurements)
         {
-            data.AppendLine(string.Create(CultureInfo.InvariantCulture, $"{measurement.Id},{Quote(measurement.Equation.ToString())},dH,{measurement.Value:R},{measurement.Uncertainty:R},kJ/mol,298.15,{measurement.Source}"));
+            // S° belongs to one species: its equation field names the species, not a formation reaction.
+            string equation = measurement.Property == ThermoProperty.AbsoluteEntropy ? measurement.Equation.Terms[0].Species.Name : measurement.Equation.ToString();
+            data.AppendLine(string.Create(CultureInfo.InvariantCulture, $"{measurement.Id},{Quote(equation)},{measurement.Property.Code()},{measurement.Value:R},{measurement.Uncertainty:R},{measurement.Unit.Symbol},{measurement.Temperature:R},{measurement.Source}"));
         }
 
         var truth = new StringBuilder();
-        truth.AppendLine("# Ground truth of the synthetic network: true formation enthalpies and injected outliers.");
+        truth.AppendLine(network.TrueEntropy.Count == 0
+            ? "# Ground truth of the synthetic network: true formation enthalpies and injected outliers."
+            : "# Ground truth of the synthetic network: true formation enthalpies (species, kJ/mol), absolute entropies (entropy, J/(mol·K)) and injected outliers.");
         truth.AppendLine("kind,name,value");
         foreach ((Species species, double value) in network.TrueFormationEnthalpy.Where(pair => network.Network.IndexOf(pair.Key) >= 0))
         {
             truth.AppendLine(string.Create(CultureInfo.InvariantCulture, $"species,{Quote(species.Name)},{value:R}"));
+        }
+
+        foreach ((Species species, double value) in network.TrueEntropy.Where(pair => network.Network.IndexOf(pair.Key) >= 0))
+        {
+            truth.AppendLine(string.Create(CultureInfo.InvariantCulture, $"entropy,{Quote(species.Name)},{value:R}"));
         }
 
         foreach (string id in network.OutlierIds.Order(StringComparer.Ordinal))
@@ -130,6 +162,115 @@ public static class SyntheticNetworkGenerator
 
         AtomicFile.WriteAllText(Path.Combine(folder, "measurements.csv"), data.ToString());
         AtomicFile.WriteAllText(Path.Combine(folder, "truth.txt"), truth.ToString());
+    }
+
+    /// <summary>What the S° and Gibbs-energy draws share with the ΔH rows: the stream, the options, the sources and the lists they add to.</summary>
+    private sealed record DrawContext(Random Random, SyntheticNetworkOptions Options, string[] Sources, List<Measurement> Measurements, HashSet<string> Outliers)
+    {
+        /// <summary>Adds one datum: the true value plus Gaussian noise of its uncertainty, and an outlier's shift as for ΔH rows.</summary>
+        public void Add(ChemicalEquation equation, ThermoProperty property, EnergyUnit unit, double temperature, double trueValue, double uncertainty, int decimals)
+        {
+            double value = trueValue + (uncertainty * NextGaussian(Random));
+            string id = $"m{Measurements.Count + 1}";
+            if (Random.NextDouble() < Options.OutlierFraction)
+            {
+                double sigmas = Options.OutlierMinSigma + (Random.NextDouble() * (Options.OutlierMaxSigma - Options.OutlierMinSigma));
+                value += (Random.Next(2) == 0 ? -1.0 : 1.0) * sigmas * uncertainty;
+                Outliers.Add(id);
+            }
+
+            Measurements.Add(new Measurement
+            {
+                Id = id,
+                Equation = equation,
+                EquationText = property == ThermoProperty.AbsoluteEntropy ? equation.Terms[0].Species.Name : equation.ToString(),
+                Property = property,
+                Value = Math.Round(value, decimals),
+                Uncertainty = uncertainty,
+                Unit = unit,
+                Temperature = temperature,
+                Source = Sources[Random.Next(Sources.Length)],
+            });
+        }
+    }
+
+    /// <summary>True S° of the element reference states (C, H, N, O), CO2(g) and H2O(l) at 298.15 K in J/(mol·K) (CODATA key values).</summary>
+    private static readonly (string Name, double Entropy)[] KnownEntropies =
+    [
+        ("C(cr,graphite)", 5.74), ("H2(g)", 130.68), ("N2(g)", 191.61), ("O2(g)", 205.15), ("CO2(g)", 213.79), ("H2O(l)", 69.95),
+    ];
+
+    /// <summary>Draws the species with S° and their true values, and adds one S° datum each (known species first, then in list order).</summary>
+    /// <returns>The generated species with S°, in list order.</returns>
+    private static List<Species> AddEntropyData(DrawContext context, List<Species> species, Species carbonDioxide, Species water, Dictionary<Species, double> entropy)
+    {
+        Random random = context.Random;
+        int count = (int)Math.Round(context.Options.EntropyFraction * species.Count);
+        int[] order = Enumerable.Range(0, species.Count).ToArray();
+        random.Shuffle(order);
+        int[] chosen = order.Take(count).Order().ToArray();
+        var withEntropy = new List<Species>(count);
+        foreach ((string name, double value) in KnownEntropies)
+        {
+            Species known = name switch
+            {
+                "CO2(g)" => carbonDioxide,
+                "H2O(l)" => water,
+                _ => Species.Parse(name),
+            };
+            entropy[known] = value;
+        }
+
+        foreach (int index in chosen)
+        {
+            // Plausible gas-phase values: rising with the number of atoms and levelling off, 150–400 J/(mol·K) before the scatter.
+            Species item = species[index];
+            double atoms = item.Formula.Composition.Values.Sum(amount => amount.ToDouble());
+            double value = 150.0 + (250.0 * (1.0 - Math.Exp(-atoms / 12.0))) + ((random.NextDouble() * 40.0) - 20.0);
+            entropy[item] = Math.Round(Math.Clamp(value, 30.0, 400.0), 2);
+            withEntropy.Add(item);
+        }
+
+        foreach ((Species item, double value) in entropy)
+        {
+            double uncertainty = Math.Round(0.05 + (random.NextDouble() * 0.95), 3);
+            context.Add(ChemicalEquation.FromTerms([new EquationTerm(item, Fraction.One)]), ThermoProperty.AbsoluteEntropy, EnergyUnit.JoulePerMoleKelvin, PhysicalConstants.StandardTemperature, value, uncertainty, 3);
+        }
+
+        return withEntropy;
+    }
+
+    /// <summary>Adds ΔG, ln K and log₁₀ K data at 298.15–1000 K: formation reactions of species with S° and reactions among near neighbours of them.</summary>
+    private static void AddGibbsData(DrawContext context, List<Species> withEntropy, Dictionary<Species, double> enthalpy, Dictionary<Species, double> entropy)
+    {
+        Random random = context.Random;
+        // Partners come from a window at least four wide on each side, so a four-species reaction always finds distinct partners.
+        int locality = Math.Max(4, context.Options.Locality * withEntropy.Count / Math.Max(1, context.Options.SpeciesCount));
+        bool local = withEntropy.Count >= 5;
+        for (int i = 0; i < context.Options.GibbsCount && withEntropy.Count > 0; i++)
+        {
+            ChemicalEquation equation = local && random.NextDouble() < 0.7
+                ? LocalReaction(withEntropy, random, locality)
+                : ChemicalEquation.Formation(withEntropy[random.Next(withEntropy.Count)]);
+            double temperature = Math.Round(PhysicalConstants.StandardTemperature + (random.NextDouble() * (1000.0 - PhysicalConstants.StandardTemperature)), 2);
+            double reactionEnthalpy = equation.Terms.Sum(term => term.Coefficient.ToDouble() * enthalpy[term.Species]);
+            double reactionEntropy = equation.Terms.Sum(term => term.Coefficient.ToDouble() * entropy[term.Species]);
+            double gibbs = reactionEnthalpy - (temperature * reactionEntropy / 1000.0);
+            double lnK = -1000.0 * gibbs / (PhysicalConstants.GasConstant * temperature);
+            switch (random.Next(3))
+            {
+                case 0:
+                    context.Add(equation, ThermoProperty.GibbsEnergy, EnergyUnit.KilojoulePerMole, temperature, gibbs, Math.Round(0.2 + (random.NextDouble() * 2.8), 2), 3);
+                    break;
+                case 1:
+                    context.Add(equation, ThermoProperty.LnEquilibriumConstant, EnergyUnit.Dimensionless, temperature, lnK, Math.Round(0.01 + (random.NextDouble() * 0.49), 3), 4);
+                    break;
+                default:
+                    double lnKUncertainty = 0.01 + (random.NextDouble() * 0.49);
+                    context.Add(equation, ThermoProperty.Log10EquilibriumConstant, EnergyUnit.Dimensionless, temperature, lnK / Math.Log(10.0), Math.Round(lnKUncertainty / Math.Log(10.0), 4), 4);
+                    break;
+            }
+        }
     }
 
     private static string Quote(string field) =>
