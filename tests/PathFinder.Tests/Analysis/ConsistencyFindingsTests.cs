@@ -10,10 +10,14 @@ namespace PathFinder.Tests.Analysis;
 public sealed class ConsistencyFindingsTests : IDisposable
 {
     // Nitrogen oxides and water, NIST-JANAF Thermochemical Tables (1998) and CODATA Key Values (1989), from memory;
-    // T15 plants a Gibbs-energy slip: ΔfG°(NO, g) written 88.60 where the tables give 86.60 (12σ at u = 0.17).
+    // T15 plants a Gibbs-energy slip: ΔfG°(NO, g) written 88.60 where the tables give 86.60 (12σ at u = 0.17); L01 and
+    // L02 are second determinations of ΔfH°(NO) and S°(NO) (invented, consistent with the tables): with one datum of
+    // each kind, the data could not tell which of the three is wrong, only that they disagree.
     private const string NitrogenOxides =
         "id,equation,property,value,uncertainty,unit,temperature,source\n" +
         "T01,NO(g),dH,90.29,0.17,kJ/mol,,tables\n" +
+        "L01,NO(g),dH,90.20,0.25,kJ/mol,,lab L\n" +
+        "L02,NO(g),S,210.70,0.05,J/(mol·K),,lab L\n" +
         "T02,NO2(g),dH,33.10,0.80,kJ/mol,,tables\n" +
         "T04,NH3(g),dH,-45.94,0.35,kJ/mol,,tables\n" +
         "T05,H2O(g),dH,-241.826,0.040,kJ/mol,,tables\n" +
