@@ -11,9 +11,14 @@ namespace PathFinder.Chemistry;
 /// hint rather than guessed: <c>Fe3+</c> (iron(III) or an Fe3 cluster?) and <c>SO42-</c> (sulfate or SO42⁻?).</para>
 /// <para>Hydrate separators are <c>·</c> or <c>*</c>, optionally followed by a multiplier (<c>CuSO4·5H2O</c>,
 /// <c>CaSO4·0.5H2O</c>). The electron is written <c>e-</c>.</para>
+/// <para>Brackets nest at most <see cref="MaxNesting"/> levels deep; deeper nesting is refused with its location
+/// (the reader recurses once per level, and no real formula comes near the limit).</para>
 /// </remarks>
 public static class FormulaParser
 {
+    /// <summary>The deepest bracket nesting read: <c>K4[Fe(CN)6]</c> nests 2 levels; 32 leaves room for any real formula.</summary>
+    public const int MaxNesting = 32;
+
     private const string ChargeHint = "write charges as ^n+ or ^n- after the formula (Fe^3+, SO4^2-), or a single + or - for charge 1 (Na+, NH4+, Cl-)";
 
     /// <summary>Reads a formula without a state. Never throws for bad input.</summary>
@@ -115,6 +120,7 @@ public static class FormulaParser
     private sealed class Reader(string text)
     {
         private int _position;
+        private int _depth;
 
         public ParseResult<Dictionary<string, Fraction>> ReadWhole()
         {
@@ -215,8 +221,15 @@ public static class FormulaParser
                 {
                     int open = _position;
                     char expected = ch == '(' ? ')' : ']';
+                    if (_depth == MaxNesting)
+                    {
+                        return ParseResult<Dictionary<string, Fraction>>.Fail(open, "bad-formula", $"brackets nest more than {MaxNesting} levels deep here", "no real formula needs that many levels: check the brackets");
+                    }
+
                     _position++;
+                    _depth++;
                     ParseResult<Dictionary<string, Fraction>> inner = ReadSequence(expected);
+                    _depth--;
                     if (!inner.TryGetValue(out Dictionary<string, Fraction>? innerCounts))
                     {
                         return inner;

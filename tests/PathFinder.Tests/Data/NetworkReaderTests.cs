@@ -1,4 +1,5 @@
 using System.Text;
+using PathFinder.Chemistry;
 using PathFinder.Data;
 using PathFinder.Diagnostics;
 using PathFinder.Quantities;
@@ -60,6 +61,21 @@ public sealed class NetworkReaderTests : IDisposable
         Assert.Equal(ColumnOf(row, marker), diagnostic.Location.Column);
         Assert.Empty(result.Network.Measurements);
         Assert.True(result.HasErrors);
+    }
+
+    [Fact]
+    public void Read_RefusesAFormulaNestedThousandsOfLevelsDeepAtItsField()
+    {
+        // Given a row whose formula nests brackets 6,000 levels deep (it once overflowed the stack)
+        string formula = new string('(', 6000) + "H" + new string(')', 6000) + "2";
+        string file = _folder.Write("lab.csv", Header + "\nm1,H2(g) -> " + formula + "(g),dH,0.5,0.2,kJ/mol,,lab\n");
+
+        // When it is read
+        Diagnostic diagnostic = Assert.Single(NetworkReader.Read(file).Diagnostics);
+
+        // Then one located error points at the first bracket too deep
+        Assert.Equal(("bad-formula", 2), (diagnostic.Code, diagnostic.Location.Line));
+        Assert.Equal("m1,H2(g) -> ".Length + 1 + FormulaParser.MaxNesting, diagnostic.Location.Column);
     }
 
     [Fact]
