@@ -208,8 +208,10 @@ public static class NetworkReader
 
         EnergyUnit unit = propertyKnown ? property.CanonicalUnit() : EnergyUnit.KilojoulePerMole;
         string unitText = row.FieldOrEmpty(columns.Unit);
+        bool unitAccepted = true;
         if (unitText.Length > 0)
         {
+            unitAccepted = false;
             if (!EnergyUnit.TryParse(unitText, out EnergyUnit parsedUnit))
             {
                 diagnostics.Add(Diagnostic.Error("unknown-unit", row.LocationOf(columns.Unit, "unit"), $"unknown unit '{unitText}'", $"use one of {string.Join(", ", EnergyUnit.AcceptedSymbols)}"));
@@ -227,6 +229,7 @@ public static class NetworkReader
             else
             {
                 unit = parsedUnit;
+                unitAccepted = true;
             }
         }
 
@@ -252,13 +255,18 @@ public static class NetworkReader
             }
         }
 
+        if (propertyKnown && unitAccepted && value is not null && uncertainty is not null)
+        {
+            CheckMagnitudes(row, columns, property, unit, value.Value, uncertainty.Value, coverage, diagnostics);
+        }
+
         double temperature = PhysicalConstants.StandardTemperature;
         if (columns.Temperature >= 0 && row.FieldOrEmpty(columns.Temperature).Length > 0)
         {
             double? t = CsvNumber.Read(row, columns.Temperature, "temperature", table.DecimalComma, diagnostics);
-            if (t is <= 0.0 or > 10000.0)
+            if (t is not null && !AcceptedRanges.IsTemperatureAccepted(t.Value))
             {
-                diagnostics.Add(Diagnostic.Error("bad-temperature", row.LocationOf(columns.Temperature, "temperature"), $"the temperature {t.Value.ToString(CultureInfo.InvariantCulture)} K is impossible here", "give the temperature in kelvin, above 0 and at most 10000 K (298.15 for 25 °C)"));
+                diagnostics.Add(Diagnostic.Error("bad-temperature", row.LocationOf(columns.Temperature, "temperature"), $"the temperature {AcceptedRanges.Format(t.Value)} K is outside the accepted 1–10000 K", "give the temperature in kelvin, from 1 to 10000 K (298.15 for 25 °C)"));
             }
             else if (t is not null)
             {
@@ -298,6 +306,45 @@ public static class NetworkReader
             Notes = notes ?? NoNotes,
         };
     }
+
+    /// <summary>Refuses a value or a standard uncertainty outside <see cref="AcceptedRanges"/> once converted to the canonical unit.</summary>
+    /// <remarks>Beyond these magnitudes the analyses' sums, squares and weights overflow or vanish (1e300 kcal/mol, an uncertainty of 1e-300).</remarks>
+    private static void CheckMagnitudes(CsvRow row, ColumnMap columns, ThermoProperty property, EnergyUnit unit, double value, double uncertainty, double coverage, List<Diagnostic> diagnostics)
+    {
+        EnergyUnit canonical = property.CanonicalUnit();
+        double bound = AcceptedRanges.MaxMagnitude(property);
+        string boundText = WithUnit(bound, canonical);
+        double canonicalValue = unit.ToCanonicalValue(value);
+        string Shown(double number, double inCanonical) => unit == canonical || property.IsEquilibriumConstant()
+            ? WithUnit(number, unit)
+            : $"{WithUnit(number, unit)} ({WithUnit(inCanonical, canonical)})";
+        if (!AcceptedRanges.IsValueAccepted(property, canonicalValue))
+        {
+            string hint = property.Dimension() switch
+            {
+                UnitDimension.MolarEnergy => "an energy per mole of reaction as written must lie within ±1e5 kJ/mol (the largest real ones are about 2e4): check the unit and the exponent",
+                UnitDimension.MolarEntropy => "an entropy must lie within ±1e5 J/(mol·K) (real ones stay below about 1e4): check the unit and the exponent",
+                _ => "ln K must lie within ±1000 (log10 K within ±434.29): check the exponent, or whether K itself was written instead of its logarithm",
+            };
+            diagnostics.Add(Diagnostic.Error("value-out-of-range", row.LocationOf(columns.Value, "value"), $"the {property.Symbol()} value {Shown(value, canonicalValue)} is beyond the accepted ±{boundText}", hint));
+            return;
+        }
+
+        double canonicalUncertainty = unit.ToCanonicalValue(uncertainty / coverage);
+        double floor = AcceptedRanges.MinUncertainty(canonicalValue);
+        if (canonicalUncertainty > bound)
+        {
+            diagnostics.Add(Diagnostic.Error("uncertainty-out-of-range", row.LocationOf(columns.Uncertainty, "uncertainty"), $"the standard uncertainty {Shown(uncertainty / coverage, canonicalUncertainty)} is beyond the accepted {boundText}", "check the unit and the exponent; a datum known that poorly says nothing: leave the row out"));
+        }
+        else if (!(canonicalUncertainty >= floor))
+        {
+            diagnostics.Add(Diagnostic.Error("uncertainty-out-of-range", row.LocationOf(columns.Uncertainty, "uncertainty"), $"the standard uncertainty {Shown(uncertainty / coverage, canonicalUncertainty)} is below the accepted floor {WithUnit(floor, canonical)}", "no measurement is that precise (the floor is the larger of 1e-6 and 1e-9 × |value| in the canonical unit): give the real standard uncertainty"));
+        }
+    }
+
+    /// <summary>A number with its unit for messages (a pure number without one).</summary>
+    private static string WithUnit(double number, EnergyUnit unit) =>
+        unit.Dimension == UnitDimension.Dimensionless ? AcceptedRanges.Format(number) : $"{AcceptedRanges.Format(number)} {unit.Symbol}";
 
     /// <summary>The row's source: its <c>source</c> field, or the file's default when the column is absent or the field blank.</summary>
     private static string SourceOf(CsvRow row, int column, string defaultSource)

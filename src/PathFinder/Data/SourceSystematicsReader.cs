@@ -102,6 +102,12 @@ public static class SourceSystematicsReader
             {
                 diagnostics.Add(Diagnostic.Error("bad-systematic", row.LocationOf(systematicColumn, "systematic"), $"the systematic must be positive, not {systematic.Value.ToString(CultureInfo.InvariantCulture)}", "give the standard uncertainty every measurement of the source shares; leave a source without one out of the file"));
             }
+            else if (systematic is not null && unit is not null && !IsAccepted(unit, systematic.Value))
+            {
+                EnergyUnit canonical = unit.Dimension == UnitDimension.MolarEntropy ? EnergyUnit.JoulePerMoleKelvin : EnergyUnit.KilojoulePerMole;
+                string range = $"{AcceptedRanges.Format(AcceptedRanges.AbsoluteUncertaintyFloor)} to {AcceptedRanges.Format(AcceptedRanges.MaxMagnitude(unit.Dimension))} {canonical.Symbol}";
+                diagnostics.Add(Diagnostic.Error("bad-systematic", row.LocationOf(systematicColumn, "systematic"), $"the systematic {AcceptedRanges.Format(systematic.Value)} {unit.Symbol} is outside the accepted {range}", "check the unit and the exponent: a shared standard uncertainty of a real source lies well inside this range"));
+            }
 
             if (diagnostics.Count > before || systematic is null || unit is null)
             {
@@ -119,6 +125,13 @@ public static class SourceSystematicsReader
         }
 
         return declarations;
+    }
+
+    /// <summary>Whether a systematic lies within the uncertainties <see cref="AcceptedRanges"/> accepts for its dimension (canonical unit).</summary>
+    private static bool IsAccepted(EnergyUnit unit, double systematic)
+    {
+        double canonical = unit.ToCanonicalValue(systematic);
+        return canonical >= AcceptedRanges.AbsoluteUncertaintyFloor && canonical <= AcceptedRanges.MaxMagnitude(unit.Dimension);
     }
 
     private static bool ReadHeader(CsvTable table, ICollection<Diagnostic> diagnostics, out int sourceColumn, out int systematicColumn, out int unitColumn, out int noteColumn)

@@ -2,6 +2,7 @@ using System.Globalization;
 using CsvHelper;
 using CsvHelper.Configuration;
 using PathFinder.Diagnostics;
+using PathFinder.Quantities;
 
 namespace PathFinder.Thermodynamics;
 
@@ -214,6 +215,10 @@ public static class HeatCapacityTableReader
         {
             diagnostics.Add(Diagnostic.Error("heat-capacity-bad-range", cells.Location(header.TMin, "tmin"), string.Create(CultureInfo.InvariantCulture, $"the range {low:G}–{high:G} K is empty or negative"), "tmin must be at least 0 K and tmax greater than tmin"));
         }
+        else if (tmax is > AcceptedRanges.MaxHeatCapacityTemperature)
+        {
+            diagnostics.Add(Diagnostic.Error("heat-capacity-bad-range", cells.Location(header.TMax, "tmax"), $"tmax {AcceptedRanges.Format(tmax.Value)} K is beyond the accepted 20000 K", "give the range in kelvin; no fit in use reaches further"));
+        }
 
         // Coefficients: filled from c1 on; count them, then parse each (reporting every bad one).
         var coefficients = new List<double>();
@@ -270,7 +275,35 @@ public static class HeatCapacityTableReader
             "constant" => new ConstantHeatCapacity(coefficients[0], range),
             _ => new LinearHeatCapacity(coefficients[0], coefficients[1], range),
         };
+        if (!IsPlausible(model, out double at, out double cp))
+        {
+            diagnostics.Add(Diagnostic.Error("heat-capacity-out-of-range", cells.Location(header.Coefficients[0].Column, header.Coefficients[0].Name), $"Cp is {AcceptedRanges.Format(cp)} J/(mol·K) at {AcceptedRanges.Format(at)} K, beyond the accepted ±1e5 J/(mol·K)", "check the coefficients' exponents and order, and the form (nasa7 gives Cp/R, the others J/(mol·K))"));
+            return null;
+        }
+
         return new RangeRow(species, model, speciesLocation, cells.Location(header.TMin, "tmin"));
+    }
+
+    /// <summary>Whether Cp stays finite and within ±<see cref="AcceptedRanges.MaxHeatCapacity"/> at 17 evenly spaced temperatures of the range (from 1 K at least).</summary>
+    /// <remarks>Huge coefficients would otherwise overflow the Kirchhoff integrals the analyses take.</remarks>
+    private static bool IsPlausible(IHeatCapacity model, out double at, out double cp)
+    {
+        TemperatureRange range = model.ValidRange;
+        for (int k = 0; k <= 16; k++)
+        {
+            // Measurements start at 1 K: a range from 0 K is sampled from there.
+            at = Math.Max(range.Minimum + ((range.Maximum - range.Minimum) * k / 16.0), AcceptedRanges.MinTemperature);
+
+            cp = model.HeatCapacity(at);
+            if (!double.IsFinite(cp) || Math.Abs(cp) > AcceptedRanges.MaxHeatCapacity)
+            {
+                return false;
+            }
+        }
+
+        at = 0.0;
+        cp = 0.0;
+        return true;
     }
 
     private static string CountHint(string form) => form switch

@@ -40,6 +40,19 @@ public sealed class NetworkReaderTests : IDisposable
     [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2,kJ/mol,-5,lab", "bad-temperature", "-5")]
     [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2,kJ/mol,0,lab", "bad-temperature", "0,lab")]
     [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2,kJ/mol,20000,lab", "bad-temperature", "20000")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2,kJ/mol,1e-300,lab", "bad-temperature", "1e-300")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2,kJ/mol,0.5,lab", "bad-temperature", "0.5")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,1e300,0.2,kcal/mol,,lab", "value-out-of-range", "1e300")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,1e308,0.2,kJ/mol,,lab", "value-out-of-range", "1e308")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-2e8,0.2,J/mol,,lab", "value-out-of-range", "-2e8")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-2000,0.2,eV,,lab", "value-out-of-range", "-2000")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),lnK,2000,0.2,,,lab", "value-out-of-range", "2000")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),log10K,500,0.2,,,lab", "value-out-of-range", "500")]
+    [InlineData("m1,CO2(g),S,2e5,1,J/(mol·K),,lab", "value-out-of-range", "2e5")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,1e-300,kJ/mol,,lab", "uncertainty-out-of-range", "1e-300")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,1e-7,kJ/mol,,lab", "uncertainty-out-of-range", "1e-7")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-90000,5e-5,kJ/mol,,lab", "uncertainty-out-of-range", "5e-5")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,1e6,kJ/mol,,lab", "uncertainty-out-of-range", "1e6")]
     [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dX,-283.0,0.2,kJ/mol,,lab", "unknown-property", "dX")]
     [InlineData(",CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2,kJ/mol,,lab", "missing-id", "")]
     [InlineData("m1,,dH,-283.0,0.2,kJ/mol,,lab", "missing-equation", ",dH")]
@@ -76,6 +89,37 @@ public sealed class NetworkReaderTests : IDisposable
         // Then one located error points at the first bracket too deep
         Assert.Equal(("bad-formula", 2), (diagnostic.Code, diagnostic.Location.Line));
         Assert.Equal("m1,H2(g) -> ".Length + 1 + FormulaParser.MaxNesting, diagnostic.Location.Column);
+    }
+
+    [Theory]
+    [InlineData("dH,-99999,1e-4,kJ/mol,")]
+    [InlineData("dH,-283.0,1e-6,kJ/mol,")]
+    [InlineData("dH,-67.6,0.05,kcal/mol,")]
+    [InlineData("dH,-2.93,0.001,eV,")]
+    [InlineData("dH,-283.0,0.2,kJ/mol,1")]
+    [InlineData("dH,-283.0,0.2,kJ/mol,10000")]
+    [InlineData("lnK,999,0.5,,")]
+    [InlineData("log10K,-434,0.5,1,")]
+    public void Read_AcceptsMagnitudesAtTheEdgesOfTheRanges(string fields)
+    {
+        // Given one row near an edge of the accepted ranges (README, data format)
+        string file = _folder.Write("lab.csv", Header + "\nm1,CO(g) + 1/2 O2(g) -> CO2(g)," + fields + ",lab\n");
+
+        // When it is read, then it is used without an error
+        NetworkReadResult result = NetworkReader.Read(file);
+        Assert.Empty(result.Errors);
+        Assert.Single(result.Network.Measurements);
+    }
+
+    [Fact]
+    public void Read_SaysTheConvertedValueWhenAUnitMakesItTooLarge()
+    {
+        string file = _folder.Write("lab.csv", Header + "\nm1,CO(g) + 1/2 O2(g) -> CO2(g),dH,1e300,0.2,kcal/mol,,lab\n");
+
+        Diagnostic diagnostic = Assert.Single(NetworkReader.Read(file).Diagnostics);
+
+        Assert.Equal("the ΔH value 1e+300 kcal/mol (4.184e+300 kJ/mol) is beyond the accepted ±100000 kJ/mol", diagnostic.Message);
+        Assert.Contains("check the unit and the exponent", diagnostic.Hint, StringComparison.Ordinal);
     }
 
     [Fact]
