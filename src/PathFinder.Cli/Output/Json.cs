@@ -5,7 +5,7 @@ using PathFinder.Diagnostics;
 
 namespace PathFinder.Cli.Output;
 
-/// <summary>JSON output shared by every command: camelCase, indented, readable Unicode (Δ, ±, °).</summary>
+/// <summary>JSON output shared by every command: camelCase, indented, readable Unicode (Δ, ±, °); NaN and ±∞ become null.</summary>
 public static class Json
 {
     /// <summary>The serializer settings.</summary>
@@ -16,6 +16,7 @@ public static class Json
         Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping,
         DefaultIgnoreCondition = JsonIgnoreCondition.Never,
         NumberHandling = JsonNumberHandling.Strict,
+        Converters = { new FiniteNumberConverter() },
     };
 
     /// <summary>Writes <paramref name="value"/> as JSON followed by a newline.</summary>
