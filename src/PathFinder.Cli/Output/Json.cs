@@ -35,7 +35,7 @@ public static class Json
         ArgumentNullException.ThrowIfNull(diagnostic);
         return new
         {
-            severity = diagnostic.Severity == Severity.Error ? "error" : "warning",
+            severity = diagnostic.SeverityWord,
             code = diagnostic.Code,
             file = diagnostic.Location.File,
             line = diagnostic.Location.Line,

@@ -60,6 +60,32 @@ public sealed class CsvTable
         return -1;
     }
 
+    /// <summary>Adds an error, located at the second, for every header name written twice (case-insensitive; blank names aside).</summary>
+    /// <returns>Whether any name was repeated: which of the two columns is meant cannot be told, so the table should not be read.</returns>
+    public bool ReportDuplicateColumns(ICollection<Diagnostic> diagnostics)
+    {
+        ArgumentNullException.ThrowIfNull(diagnostics);
+        var first = new Dictionary<string, int>(StringComparer.OrdinalIgnoreCase);
+        bool found = false;
+        for (int i = 0; i < Header.Count; i++)
+        {
+            if (Header[i].Length == 0)
+            {
+                continue;
+            }
+
+            if (!first.TryAdd(Header[i], i))
+            {
+                int column = HeaderColumns.Count > i ? HeaderColumns[i] : 1;
+                int earlier = HeaderColumns.Count > first[Header[i]] ? HeaderColumns[first[Header[i]]] : 1;
+                diagnostics.Add(Diagnostic.Error("duplicate-column", new SourceLocation(File, HeaderLine, column), $"the column '{DiagnosticText.Excerpt(Header[i])}' appears twice (first at column {earlier}): the file is not read", "keep one of them, or rename the other (a note column may have any other name)"));
+                found = true;
+            }
+        }
+
+        return found;
+    }
+
     /// <summary>The measurement header, named by the hint for an empty file unless a table says otherwise.</summary>
     public const string MeasurementHeader = "id,equation,property,value,uncertainty,unit,temperature,source";
 
@@ -173,7 +199,7 @@ public sealed class CsvTable
                 int badLine = args.Context?.Parser?.RawRow ?? 0;
                 if (badRows.Add(badLine))
                 {
-                    diagnostics.Add(Diagnostic.Error("bad-csv", new SourceLocation(displayPath, badLine), $"a field holds a stray quote: '{Shorten(args.Field)}'", "enclose a field that contains quotes in double quotes and double each quote inside it (\"\"), or remove the quote"));
+                    diagnostics.Add(Diagnostic.Error("bad-csv", new SourceLocation(displayPath, badLine), $"a field holds a stray quote: '{DiagnosticText.Excerpt(args.Field)}'", "enclose a field that contains quotes in double quotes and double each quote inside it (\"\"), or remove the quote"));
                 }
             },
             TrimOptions = TrimOptions.None,
@@ -229,8 +255,6 @@ public sealed class CsvTable
 
         return new CsvTable(displayPath, header, headerLine, headerColumns, rows, delimiter);
     }
-
-    private static string Shorten(string text) => text.Length <= 40 ? text : text[..39] + "…";
 
     private static string FirstLine(string message)
     {

@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Runtime.CompilerServices;
 using System.Text;
 using Fractions;
+using PathFinder.Analysis;
 using PathFinder.Chemistry;
 using PathFinder.Diagnostics;
 using PathFinder.Quantities;
@@ -28,6 +29,9 @@ public static class NetworkReader
     /// <summary>The optional columns with a meaning.</summary>
     public static IReadOnlyList<string> OptionalColumns { get; } = ["unit", "temperature", "source", "coverage"];
 
+    /// <summary>The code of the warning on a row that only checks a convention (<c>H+(aq) + e- -> 1/2 H2(g)</c>) and that no analysis uses.</summary>
+    public const string ConventionalOnlyCode = "conventional-only";
+
     /// <summary>Beyond this distance from 298.15 K (in K) a measurement without heat-capacity data is warned about.</summary>
     public const double TemperatureWarningDistance = 10.0;
 
@@ -44,18 +48,27 @@ public static class NetworkReader
             return new NetworkReadResult(new ReactionNetwork(name, []), diagnostics, [], null, null, NoHeatCapacities);
         }
 
-        IReadOnlyList<string> files = NetworkFiles.MeasurementFiles(path);
+        if (File.Exists(path) && !FileKinds.IsRegularFile(path))
+        {
+            diagnostics.Add(Diagnostic.Error("not-a-regular-file", new SourceLocation(path), "not a regular file (a FIFO, a device or a socket): it is not read", "give a CSV file or a folder of CSV files"));
+            return new NetworkReadResult(new ReactionNetwork(name, []), diagnostics, [], null, null, NoHeatCapacities);
+        }
+
+        IReadOnlyList<string> files = NetworkFiles.MeasurementFiles(path, out IReadOnlyList<SkippedEntry> skipped);
+        foreach (SkippedEntry entry in skipped)
+        {
+            diagnostics.Add(Diagnostic.Note("skipped-file", new SourceLocation(entry.Path), $"not read: {entry.Reason}", entry.Hint));
+        }
+
         if (files.Count == 0)
         {
             diagnostics.Add(Diagnostic.Error("empty-network", new SourceLocation(path), "the folder holds no measurement CSV files", "put one or more CSV files with the header id,equation,property,value,uncertainty in it"));
             return new NetworkReadResult(new ReactionNetwork(name, []), diagnostics, files, null, null, NoHeatCapacities);
         }
 
-        string speciesPath = NetworkFiles.Companion(path, NetworkFiles.SpeciesFileName);
-        string? speciesFile = File.Exists(speciesPath) ? speciesPath : null;
+        string? speciesFile = CompanionFile(path, NetworkFiles.SpeciesFileName, diagnostics);
         SpeciesCatalog catalog = SpeciesCatalog.Read(speciesFile, speciesFile ?? "", diagnostics);
-        string heatCapacityPath = NetworkFiles.Companion(path, NetworkFiles.HeatCapacityFileName);
-        string? heatCapacityFile = File.Exists(heatCapacityPath) ? heatCapacityPath : null;
+        string? heatCapacityFile = CompanionFile(path, NetworkFiles.HeatCapacityFileName, diagnostics);
         Dictionary<Species, IHeatCapacity> heatCapacities = ReadHeatCapacities(heatCapacityFile, catalog, diagnostics);
 
         var measurements = new List<Measurement>();
@@ -68,8 +81,7 @@ public static class NetworkReader
         }
 
         // After the measurements: a declaration must name a source of the data (before any curation exclusion).
-        string sourcesPath = NetworkFiles.Companion(path, NetworkFiles.SourcesFileName);
-        string? sourcesFile = File.Exists(sourcesPath) ? sourcesPath : null;
+        string? sourcesFile = CompanionFile(path, NetworkFiles.SourcesFileName, diagnostics);
         var dimensions = measurements
             .Select(measurement => (measurement.Source, Dimension: measurement.Property.Dimension() == UnitDimension.MolarEntropy ? UnitDimension.MolarEntropy : UnitDimension.MolarEnergy))
             .ToHashSet();
@@ -91,6 +103,24 @@ public static class NetworkReader
             heatCapacities,
             sourcesFile,
             systematics);
+    }
+
+    /// <summary>The companion table's path when it exists as a regular file; an error when something else has its name.</summary>
+    private static string? CompanionFile(string networkPath, string fileName, List<Diagnostic> diagnostics)
+    {
+        string path = NetworkFiles.Companion(networkPath, fileName);
+        if (!File.Exists(path))
+        {
+            return null;
+        }
+
+        if (!FileKinds.IsRegularFile(path))
+        {
+            diagnostics.Add(Diagnostic.Error("not-a-regular-file", new SourceLocation(path), "not a regular file (a FIFO, a device or a socket): it is not read", $"make {fileName} a CSV file, or remove it"));
+            return null;
+        }
+
+        return path;
     }
 
     private static readonly IReadOnlyDictionary<Species, IHeatCapacity> NoHeatCapacities = new Dictionary<Species, IHeatCapacity>();
@@ -140,6 +170,11 @@ public static class NetworkReader
             sources.Add(SourceOf(row, sourceColumn, defaultSource));
         }
 
+        if (table.ReportDuplicateColumns(diagnostics))
+        {
+            return;
+        }
+
         var columns = RequiredColumns.Concat(OptionalColumns).ToDictionary(column => column, table.IndexOf, StringComparer.Ordinal);
         string[] missing = RequiredColumns.Where(column => columns[column] < 0).ToArray();
         if (missing.Length > 0)
@@ -173,6 +208,10 @@ public static class NetworkReader
             if (measurement is not null && !duplicate)
             {
                 measurements.Add(measurement);
+                if (ThermoModel.MeasuresOnlyConventions(measurement))
+                {
+                    diagnostics.Add(Diagnostic.Warning(ConventionalOnlyCode, measurement.Location, $"'{measurement.Id}' involves only species whose contributions are zero by convention (elements in their reference states, H+(aq), e-): it only checks that convention and is not used by any analysis", "its value should be 0 within its uncertainty; drop the row, or check the equation"));
+                }
             }
         }
     }

@@ -41,6 +41,11 @@ public sealed class SpeciesCatalog
             return catalog;
         }
 
+        if (table.ReportDuplicateColumns(diagnostics))
+        {
+            return catalog;
+        }
+
         int keyColumn = table.IndexOf("key");
         int formulaColumn = table.IndexOf("formula");
         int stateColumn = table.IndexOf("state");

@@ -123,6 +123,76 @@ public sealed class NetworkReaderTests : IDisposable
     }
 
     [Fact]
+    public void Read_WarnsOnTheRowThatARowAmongConventionalZerosIsNotUsed()
+    {
+        // Given the hydrogen-electrode convention measured as a row beside a real one
+        string file = _folder.Write("lab.csv", Header + "\n" + GoodRow + "\nm2,H+(aq) + e- -> 1/2 H2(g),dH,0.0,0.1,kJ/mol,,lab\n");
+
+        // When it is read
+        NetworkReadResult result = NetworkReader.Read(file);
+
+        // Then the row is valid, but a warning on it says it only checks a convention and is used by no analysis
+        Assert.False(result.HasErrors);
+        Diagnostic warning = Assert.Single(result.UnusedRows);
+        Assert.Equal(("conventional-only", Severity.Warning, 3, 4), (warning.Code, warning.Severity, warning.Location.Line, warning.Location.Column));
+        Assert.Contains("not used by any analysis", warning.Message, StringComparison.Ordinal);
+        Assert.Contains(result.Warnings, diagnostic => diagnostic.Code == "conventional-only");
+    }
+
+    [Fact]
+    public void Read_RefusesAHeaderNamingAColumnTwiceAtTheSecond()
+    {
+        // Given a header with 'value' twice (the first column used to win silently)
+        string file = _folder.Write("lab.csv", "id,equation,property,value,uncertainty,Value\nm1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2,-67.6\n");
+
+        // When it is read
+        Diagnostic error = Assert.Single(NetworkReader.Read(file).Diagnostics);
+
+        // Then one error at the second 'value'
+        Assert.Equal(("duplicate-column", Severity.Error, 1, 40), (error.Code, error.Severity, error.Location.Line, error.Location.Column));
+        Assert.Contains("'Value' appears twice (first at column 22)", error.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Read_AcceptsSeveralBlankHeaderNames()
+    {
+        // Given a spreadsheet export with trailing empty columns
+        string file = _folder.Write("lab.csv", Header + ",,\n" + GoodRow + ",,\n");
+
+        // When it is read, then blank names are no duplicates
+        Assert.DoesNotContain(NetworkReader.Read(file).Diagnostics, diagnostic => diagnostic.Code == "duplicate-column");
+    }
+
+    [Fact]
+    public void Read_NamesSkippedEntriesOfAFolderInNotesAndReadsAnUpperCaseExtension()
+    {
+        // Given a folder whose data are in DATA.CSV, with a spreadsheet lock file and a subfolder beside
+        _folder.Write("DATA.CSV", Header + "\n" + GoodRow + "\n");
+        _folder.Write("~$DATA.CSV", "\u0001binary lock\n");
+        Directory.CreateDirectory(Path.Combine(_folder.Path, "archive"));
+
+        // When it is read
+        NetworkReadResult result = NetworkReader.Read(_folder.Path);
+
+        // Then the data are used, the folder stays valid, and the two entries are named in notes
+        Assert.False(result.HasErrors);
+        Assert.Single(result.Network.Measurements);
+        Assert.Equal(["archive", "~$DATA.CSV"], result.Notes.Select(note => Path.GetFileName(note.Location.File)));
+        Assert.All(result.Notes, note => Assert.Equal("skipped-file", note.Code));
+        Assert.DoesNotContain(result.Warnings, warning => warning.Code == "skipped-file");
+    }
+
+    [Fact]
+    public void Read_RefusesAFifoGivenAsTheNetworkWithoutBlocking()
+    {
+        string fifo = SpecialFiles.Fifo(Path.Combine(_folder.Path, "pipe.csv"));
+
+        Diagnostic error = Assert.Single(NetworkReader.Read(fifo).Diagnostics);
+
+        Assert.Equal(("not-a-regular-file", Severity.Error), (error.Code, error.Severity));
+    }
+
+    [Fact]
     public void Read_SpellsOutTheImbalance()
     {
         string file = _folder.Write("lab.csv", Header + "\nm1,CH4(g) + 2 O2(g) -> CO2(g) + H2O(l),dH,-890.6,0.4,kJ/mol,,lab\n");
