@@ -61,7 +61,7 @@ public static class FormulaParser
             string suffix = text[(caret + 1)..];
             if (suffix.Length == 0 || (suffix[^1] != '+' && suffix[^1] != '-'))
             {
-                return ParseResult<(int, int)>.Fail(caret, "bad-charge", $"the charge '{suffix}' after '^' must end in + or -", ChargeHint);
+                return ParseResult<(int, int)>.Fail(caret, "bad-charge", $"the charge '{DiagnosticText.Excerpt(suffix)}' after '^' must end in + or -", ChargeHint);
             }
 
             string digits = suffix[..^1];
@@ -109,8 +109,8 @@ public static class FormulaParser
                 return ParseResult<(int, int)>.Fail(
                     bodyLength - digitRun,
                     "ambiguous-charge",
-                    $"'{text}' is ambiguous: the digits before '{last}' could be an atom count or the charge",
-                    $"write {withCharge} if the charge is {count[^1..]}{last}, or {body}^{last} for a count of {count} with charge 1{last}");
+                    $"'{DiagnosticText.Excerpt(text)}' is ambiguous: the digits before '{last}' could be an atom count or the charge",
+                    $"write {DiagnosticText.Excerpt(withCharge)} if the charge is {count[^1..]}{last}, or {DiagnosticText.Excerpt(body + "^" + last)} for a count of {DiagnosticText.Excerpt(count)} with charge 1{last}");
             }
         }
 
@@ -139,7 +139,7 @@ public static class FormulaParser
 
                     if (_position > start && (!RationalText.TryParse(text[start.._position], out multiplier) || multiplier <= Fraction.Zero))
                     {
-                        return ParseResult<Dictionary<string, Fraction>>.Fail(start, "bad-formula", $"'{text[start.._position]}' is not a positive hydrate multiplier", "write it as CuSO4·5H2O or CaSO4·0.5H2O");
+                        return ParseResult<Dictionary<string, Fraction>>.Fail(start, "bad-formula", $"'{DiagnosticText.Excerpt(text[start.._position])}' is not a positive hydrate multiplier", "write it as CuSO4·5H2O or CaSO4·0.5H2O");
                     }
                 }
 
@@ -204,7 +204,7 @@ public static class FormulaParser
                     string symbol = ReadSymbol();
                     if (!ElementTable.Contains(symbol))
                     {
-                        return ParseResult<Dictionary<string, Fraction>>.Fail(start, "unknown-element", $"'{symbol}' is not an element symbol", "element symbols start with a capital letter followed by at most one small letter (Co is cobalt, CO is carbon + oxygen)");
+                        return ParseResult<Dictionary<string, Fraction>>.Fail(start, "unknown-element", $"'{DiagnosticText.Excerpt(symbol)}' is not an element symbol", "element symbols start with a capital letter followed by at most one small letter (Co is cobalt, CO is carbon + oxygen)");
                     }
 
                     ParseResult<int> count = ReadCount();
@@ -315,7 +315,7 @@ public static class FormulaParser
             string digits = text[start.._position];
             if (!int.TryParse(digits, NumberStyles.None, CultureInfo.InvariantCulture, out int count) || count == 0 || count > 100000)
             {
-                return ParseResult<int>.Fail(start, "bad-formula", $"the atom count '{digits}' must be a whole number from 1 to 100000", "write counts as positive integers");
+                return ParseResult<int>.Fail(start, "bad-formula", $"the atom count '{DiagnosticText.Excerpt(digits)}' must be a whole number from 1 to 100000", "write counts as positive integers");
             }
 
             return ParseResult<int>.Ok(count);

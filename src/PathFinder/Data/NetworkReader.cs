@@ -200,7 +200,7 @@ public static class NetworkReader
             bool duplicate = false;
             if (id.Length > 0 && !firstById.TryAdd(id, row.LocationOf(map.Id, "id")))
             {
-                diagnostics.Add(Diagnostic.Error("duplicate-id", row.LocationOf(map.Id, "id"), $"measurement id '{id}' was already used at {firstById[id]}", "give every measurement its own id"));
+                diagnostics.Add(Diagnostic.Error("duplicate-id", row.LocationOf(map.Id, "id"), $"measurement id '{DiagnosticText.Excerpt(id)}' was already used at {firstById[id]}", "give every measurement its own id"));
                 duplicate = true;
             }
 
@@ -210,7 +210,7 @@ public static class NetworkReader
                 measurements.Add(measurement);
                 if (ThermoModel.MeasuresOnlyConventions(measurement))
                 {
-                    diagnostics.Add(Diagnostic.Warning(ConventionalOnlyCode, measurement.Location, $"'{measurement.Id}' involves only species whose contributions are zero by convention (elements in their reference states, H+(aq), e-): it only checks that convention and is not used by any analysis", "its value should be 0 within its uncertainty; drop the row, or check the equation"));
+                    diagnostics.Add(Diagnostic.Warning(ConventionalOnlyCode, measurement.Location, $"'{DiagnosticText.Excerpt(measurement.Id)}' involves only species whose contributions are zero by convention (elements in their reference states, H+(aq), e-): it only checks that convention and is not used by any analysis", "its value should be 0 within its uncertainty; drop the row, or check the equation"));
                 }
             }
         }
@@ -240,7 +240,7 @@ public static class NetworkReader
         bool propertyKnown = ThermoProperties.TryParse(propertyText, out property);
         if (!propertyKnown)
         {
-            diagnostics.Add(Diagnostic.Error("unknown-property", row.LocationOf(columns.Property, "property"), $"unknown property '{propertyText}'", $"use one of {string.Join(", ", ThermoProperties.Codes)}"));
+            diagnostics.Add(Diagnostic.Error("unknown-property", row.LocationOf(columns.Property, "property"), $"unknown property '{DiagnosticText.Excerpt(propertyText)}'", $"use one of {string.Join(", ", ThermoProperties.Codes)}"));
         }
 
         ChemicalEquation? equation = ReadEquation(row, columns.Equation, catalog, equations, propertyKnown ? property : null, diagnostics);
@@ -253,7 +253,7 @@ public static class NetworkReader
             unitAccepted = false;
             if (!EnergyUnit.TryParse(unitText, out EnergyUnit parsedUnit))
             {
-                diagnostics.Add(Diagnostic.Error("unknown-unit", row.LocationOf(columns.Unit, "unit"), $"unknown unit '{unitText}'", $"use one of {string.Join(", ", EnergyUnit.AcceptedSymbols)}"));
+                diagnostics.Add(Diagnostic.Error("unknown-unit", row.LocationOf(columns.Unit, "unit"), $"unknown unit '{DiagnosticText.Excerpt(unitText)}'", $"use one of {string.Join(", ", EnergyUnit.AcceptedSymbols)}"));
             }
             else if (propertyKnown && parsedUnit.Dimension != property.Dimension())
             {
@@ -526,7 +526,7 @@ public static class NetworkReader
             var key = (measurement.Source, measurement.Property, signature, Math.Round(measurement.Temperature, 2));
             if (seen.TryGetValue(key, out Measurement? first))
             {
-                diagnostics.Add(Diagnostic.Warning("repeated-measurement", measurement.Location with { Field = "equation" }, $"'{measurement.Id}' measures the same reaction at the same temperature as '{first.Id}' in source '{measurement.Source}'", "if both are independent determinations keep them; if one is a copy, drop it"));
+                diagnostics.Add(Diagnostic.Warning("repeated-measurement", measurement.Location with { Field = "equation" }, $"'{DiagnosticText.Excerpt(measurement.Id)}' measures the same reaction at the same temperature as '{DiagnosticText.Excerpt(first.Id)}' in source '{measurement.Source}'", "if both are independent determinations keep them; if one is a copy, drop it"));
             }
             else
             {
@@ -541,7 +541,7 @@ public static class NetworkReader
                     .ToArray();
                 if (lacking.Length > 0)
                 {
-                    diagnostics.Add(Diagnostic.Warning("no-heat-capacity", measurement.Location with { Field = "temperature" }, $"'{measurement.Id}' was measured at {measurement.Temperature.ToString("0.##", CultureInfo.InvariantCulture)} K and there are no heat-capacity data for {string.Join(", ", lacking)} to correct it to 298.15 K", $"add those species to {NetworkFiles.HeatCapacityFileName} beside the data; until then the value is used uncorrected"));
+                    diagnostics.Add(Diagnostic.Warning("no-heat-capacity", measurement.Location with { Field = "temperature" }, $"'{DiagnosticText.Excerpt(measurement.Id)}' was measured at {measurement.Temperature.ToString("0.##", CultureInfo.InvariantCulture)} K and there are no heat-capacity data for {string.Join(", ", lacking)} to correct it to 298.15 K", $"add those species to {NetworkFiles.HeatCapacityFileName} beside the data; until then the value is used uncorrected"));
                 }
             }
 
@@ -562,7 +562,7 @@ public static class NetworkReader
             if (list.Count == 1 && !ReferenceStates.HasZeroFormationProperties(species))
             {
                 Measurement only = list[0];
-                diagnostics.Add(Diagnostic.Warning("single-use-species", only.Location with { Field = "equation" }, $"{species.Name} appears only in '{only.Id}': nothing can check that value", "add another measurement involving this species to make it checkable"));
+                diagnostics.Add(Diagnostic.Warning("single-use-species", only.Location with { Field = "equation" }, $"{species.Name} appears only in '{DiagnosticText.Excerpt(only.Id)}': nothing can check that value", "add another measurement involving this species to make it checkable"));
             }
         }
 

@@ -79,7 +79,7 @@ public static class HeatCapacityTableReader
                 diagnostics.Add(Diagnostic.Error(
                     "heat-capacity-bad-csv",
                     new SourceLocation(fileName, args.Context.Parser?.RawRow ?? 0),
-                    $"malformed CSV field '{args.Field}'",
+                    $"malformed CSV field '{DiagnosticText.Excerpt(args.Field)}'",
                     "quote fields that contain quotes, and double the quotes inside them"));
             },
         };
@@ -134,7 +134,7 @@ public static class HeatCapacityTableReader
             string name = cells.Text(i).Trim();
             if (!columns.TryAdd(name, i))
             {
-                diagnostics.Add(Diagnostic.Error("heat-capacity-duplicate-column", cells.Location(i, name), $"the column '{name}' appears twice", "keep one of them"));
+                diagnostics.Add(Diagnostic.Error("heat-capacity-duplicate-column", cells.Location(i, name), $"the column '{DiagnosticText.Excerpt(name)}' appears twice", "keep one of them"));
                 continue;
             }
 
@@ -148,7 +148,7 @@ public static class HeatCapacityTableReader
 
             if (!known)
             {
-                diagnostics.Add(Diagnostic.Warning("heat-capacity-unknown-column", cells.Location(i, name), $"the column '{name}' is not part of the heat-capacity format and is ignored", "remove it, or rename it to 'note'"));
+                diagnostics.Add(Diagnostic.Warning("heat-capacity-unknown-column", cells.Location(i, name), $"the column '{DiagnosticText.Excerpt(name)}' is not part of the heat-capacity format and is ignored", "remove it, or rename it to 'note'"));
             }
         }
 
@@ -175,7 +175,7 @@ public static class HeatCapacityTableReader
 
         foreach (string name in missing)
         {
-            diagnostics.Add(Diagnostic.Error("heat-capacity-missing-column", new SourceLocation(fileName, cells.FirstLine, 1), $"the header lacks the column '{name}'", "the header must name species,form,tmin,tmax,c1,c2,... (c1 to c8 cover every form)"));
+            diagnostics.Add(Diagnostic.Error("heat-capacity-missing-column", new SourceLocation(fileName, cells.FirstLine, 1), $"the header lacks the column '{DiagnosticText.Excerpt(name)}'", "the header must name species,form,tmin,tmax,c1,c2,... (c1 to c8 cover every form)"));
         }
 
         return missing.Count > 0 || diagnostics.Any(d => d.Severity == Severity.Error)
@@ -206,7 +206,7 @@ public static class HeatCapacityTableReader
         };
         if (allowedCounts is null)
         {
-            diagnostics.Add(Diagnostic.Error("heat-capacity-unknown-form", formLocation, $"unknown heat-capacity form '{cells.Text(header.Form).Trim()}'", "use nasa7, shomate, constant or linear"));
+            diagnostics.Add(Diagnostic.Error("heat-capacity-unknown-form", formLocation, $"unknown heat-capacity form '{DiagnosticText.Excerpt(cells.Text(header.Form).Trim())}'", "use nasa7, shomate, constant or linear"));
         }
 
         double? tmin = ParseNumber(cells, header.TMin, "tmin", diagnostics);
@@ -257,7 +257,7 @@ public static class HeatCapacityTableReader
             SourceLocation where = filled > allowedCounts.Max()
                 ? cells.Location(header.Coefficients[allowedCounts.Max()].Column, header.Coefficients[allowedCounts.Max()].Name)
                 : cells.Location(header.Coefficients[0].Column, header.Coefficients[0].Name);
-            diagnostics.Add(Diagnostic.Error("heat-capacity-coefficient-count", where, $"the form '{form}' needs {expected} coefficients, the row has {filled}", CountHint(form)));
+            diagnostics.Add(Diagnostic.Error("heat-capacity-coefficient-count", where, $"the form '{DiagnosticText.Excerpt(form)}' needs {expected} coefficients, the row has {filled}", CountHint(form)));
         }
 
         int errorsAfter = diagnostics.Count(d => d.Severity == Severity.Error);
@@ -323,7 +323,7 @@ public static class HeatCapacityTableReader
         }
 
         string hint = text.Contains(',', StringComparison.Ordinal) ? "use a dot as the decimal separator" : "write a finite number such as 1000 or -8.671914 or 1.5e-3";
-        string shown = text.Length == 0 ? "an empty field" : $"'{text}'";
+        string shown = text.Length == 0 ? "an empty field" : $"'{DiagnosticText.Excerpt(text)}'";
         diagnostics.Add(Diagnostic.Error("heat-capacity-bad-number", cells.Location(column, name), $"{name} is {shown}, not a number", hint));
         return null;
     }
@@ -355,7 +355,7 @@ public static class HeatCapacityTableReader
 
                 ok = false;
                 bool gap = start > end;
-                string message = string.Create(CultureInfo.InvariantCulture, $"the ranges of '{group.Key}' {(gap ? "leave a gap" : "overlap")}: {previous.Model.ValidRange} (line {previous.SpeciesLocation.Line}) and {current.Model.ValidRange} (line {current.SpeciesLocation.Line})");
+                string message = string.Create(CultureInfo.InvariantCulture, $"the ranges of '{DiagnosticText.Excerpt(group.Key)}' {(gap ? "leave a gap" : "overlap")}: {previous.Model.ValidRange} (line {previous.SpeciesLocation.Line}) and {current.Model.ValidRange} (line {current.SpeciesLocation.Line})");
                 diagnostics.Add(Diagnostic.Error(gap ? "heat-capacity-range-gap" : "heat-capacity-range-overlap", current.TMinLocation, message, "each range must start where the previous one ends"));
             }
 
@@ -386,7 +386,7 @@ public static class HeatCapacityTableReader
             diagnostics.Add(Diagnostic.Warning(
                 "heat-capacity-discontinuity",
                 upper.TMinLocation,
-                string.Create(CultureInfo.InvariantCulture, $"Cp of '{upper.Species}' jumps from {below:F3} to {above:F3} J/(mol K) at {joint:G} K"),
+                string.Create(CultureInfo.InvariantCulture, $"Cp of '{DiagnosticText.Excerpt(upper.Species)}' jumps from {below:F3} to {above:F3} J/(mol K) at {joint:G} K"),
                 "check the coefficients of both ranges (order, signs, exponents)"));
         }
     }
@@ -402,7 +402,7 @@ public static class HeatCapacityTableReader
                 diagnostics.Add(Diagnostic.Warning(
                     "heat-capacity-nonpositive-cp",
                     row.TMinLocation,
-                    string.Create(CultureInfo.InvariantCulture, $"Cp of '{row.Species}' is not positive at {t:G} K ({row.Model.HeatCapacity(t):G4} J/(mol K))"),
+                    string.Create(CultureInfo.InvariantCulture, $"Cp of '{DiagnosticText.Excerpt(row.Species)}' is not positive at {t:G} K ({row.Model.HeatCapacity(t):G4} J/(mol K))"),
                     "check the coefficients (order, signs, exponents)"));
                 return;
             }

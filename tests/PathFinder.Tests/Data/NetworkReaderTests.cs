@@ -192,6 +192,33 @@ public sealed class NetworkReaderTests : IDisposable
         Assert.Equal(("not-a-regular-file", Severity.Error), (error.Code, error.Severity));
     }
 
+    [Theory]
+    [InlineData("property")]
+    [InlineData("unit")]
+    [InlineData("value")]
+    [InlineData("equation")]
+    public void Read_CutsA100000CharacterValueIn80CharacterMessages(string column)
+    {
+        // Given one field of 100,000 characters (its text used to be echoed in full)
+        char letter = column == "equation" ? 'H' : 'x';
+        string huge = new string(letter, 100_000);
+        string row = column switch
+        {
+            "property" => $"m1,CO(g) + 1/2 O2(g) -> CO2(g),{huge},-283.0,0.2,kJ/mol,,lab",
+            "unit" => $"m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2,{huge},,lab",
+            "value" => $"m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,{huge},0.2,kJ/mol,,lab",
+            _ => $"m1,CO(g) + 1/2 O2(g) -> {huge},dH,-283.0,0.2,kJ/mol,,lab",
+        };
+        string file = _folder.Write("lab.csv", Header + "\n" + row + "\n");
+
+        // When it is read
+        Diagnostic diagnostic = Assert.Single(NetworkReader.Read(file).Errors);
+
+        // Then the message quotes at most 80 characters of it, ending in an ellipsis
+        Assert.True(diagnostic.Message.Length + diagnostic.Hint.Length < 500, $"{diagnostic.Message.Length} + {diagnostic.Hint.Length} characters");
+        Assert.Contains(new string(letter, 79) + "…", diagnostic.Message + diagnostic.Hint, StringComparison.Ordinal);
+    }
+
     [Fact]
     public void Read_SpellsOutTheImbalance()
     {
