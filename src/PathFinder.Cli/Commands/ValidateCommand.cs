@@ -60,6 +60,7 @@ public sealed class ValidateCommand
                 },
                 errors = result.Errors.Count(),
                 warnings = result.Warnings.Count(),
+                notes = result.Notes.Count(),
                 diagnostics = result.Diagnostics.Select(Json.Of),
             });
             return exitCode;
@@ -90,7 +91,9 @@ public sealed class ValidateCommand
         int errors = result.Errors.Count();
         int warnings = result.Warnings.Count();
         output.WriteLine();
-        output.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{errors} error(s), {warnings} warning(s)"));
+        int notes = result.Notes.Count();
+        string noteCount = notes > 0 ? string.Create(CultureInfo.InvariantCulture, $", {notes} note(s) on entries not read") : "";
+        output.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{errors} error(s), {warnings} warning(s){noteCount}"));
         foreach (Diagnostic diagnostic in result.Diagnostics)
         {
             output.WriteLine($"  {diagnostic}");

@@ -17,6 +17,7 @@ public static class CheckOutput
         Json.Write(output, new
         {
             consistent = report.Consistent,
+            checkable = analysis is { IndependentCycles: > 0 },
             threshold = report.Options.Threshold,
             offsetSources = analysis?.OffsetSources.Select(source => source.Source) ?? [],
             suspects = analysis?.Suspects.Select(Suspect) ?? [],
@@ -154,7 +155,10 @@ public static class CheckOutput
             output.WriteLine("No usable measurement: nothing to check.");
         }
 
-        output.WriteLine(report.Consistent
+        bool checkable = report.Analysis is { IndependentCycles: > 0 };
+        output.WriteLine(!checkable
+            ? "Result: nothing could be checked: no measurement is tied to the others by a cycle."
+            : report.Consistent
             ? "Result: consistent."
             : "Result: INCONSISTENT (exit code 1). Review the sources and suspects before using derived values.");
         output.WriteLine(Text.Caution);
@@ -205,7 +209,12 @@ public static class CheckOutput
             output.WriteLine($"   Source {source.Source} (declared systematic ± {Text.Number(offset.Declared ?? double.NaN)} {offset.Unit}): fitted offset {Text.Signed(offset.Value)} ± {Text.Number(offset.Uncertainty)} {offset.Unit}, z = {Text.Signed(offset.Z)}{beyond}");
         }
 
-        if (analysis.Suspects.Count == 0)
+        if (analysis.IndependentCycles == 0)
+        {
+            // Agreement needs redundancy: without a cycle every value is the only one for what it fixes.
+            output.WriteLine("   Nothing can be checked: the data form no cycle, so each measurement is the only source of what it determines. Add measurements that reach the same species by another route.");
+        }
+        else if (analysis.Suspects.Count == 0)
         {
             output.WriteLine("   Suspects: none. The measurements agree with each other within their uncertainties.");
         }

@@ -5,7 +5,7 @@ using PathFinder.Diagnostics;
 
 namespace PathFinder.Cli.Output;
 
-/// <summary>JSON output shared by every command: camelCase, indented, readable Unicode (Δ, ±, °).</summary>
+/// <summary>JSON output shared by every command: camelCase, indented, readable Unicode (Δ, ±, °); NaN and ±∞ become null.</summary>
 public static class Json
 {
     /// <summary>The serializer settings.</summary>
@@ -16,6 +16,7 @@ public static class Json
         Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping,
         DefaultIgnoreCondition = JsonIgnoreCondition.Never,
         NumberHandling = JsonNumberHandling.Strict,
+        Converters = { new FiniteNumberConverter() },
     };
 
     /// <summary>Writes <paramref name="value"/> as JSON followed by a newline.</summary>
@@ -34,7 +35,7 @@ public static class Json
         ArgumentNullException.ThrowIfNull(diagnostic);
         return new
         {
-            severity = diagnostic.Severity == Severity.Error ? "error" : "warning",
+            severity = diagnostic.SeverityWord,
             code = diagnostic.Code,
             file = diagnostic.Location.File,
             line = diagnostic.Location.Line,

@@ -4,6 +4,7 @@ using PathFinder.Diagnostics;
 namespace PathFinder.Cli.Output;
 
 /// <summary>Loads a network for an analysis command: stops with exit code 2 on data errors unless told to skip bad rows.</summary>
+/// <remarks>Of the warnings, only those about valid rows that no analysis uses are shown (on standard error); <c>validate</c> shows them all.</remarks>
 public static class NetworkLoading
 {
     /// <summary>Reads the network; returns null (and the exit code) when the command must stop.</summary>
@@ -16,6 +17,11 @@ public static class NetworkLoading
         ArgumentNullException.ThrowIfNull(context);
         NetworkReadResult result = NetworkReader.Read(path);
         exitCode = ExitCodes.Success;
+        foreach (Diagnostic unused in result.UnusedRows)
+        {
+            context.Error.WriteLine(unused.ToString());
+        }
+
         if (!result.HasErrors)
         {
             return result;

@@ -298,6 +298,22 @@ public sealed class ThermoModel
     }
 
     /// <summary>The joint row of a datum: (species, ΔfH° or S°, exact coefficient) terms, netted; empty when every contribution is zero by convention.</summary>
+    /// <summary>Whether a measurement involves only quantities zero by convention, so that the model leaves it out.</summary>
+    /// <remarks>Such a row (<c>H+(aq) + e- -> 1/2 H2(g)</c>) only checks the convention; the reader warns about it so every command says so.</remarks>
+    internal static bool MeasuresOnlyConventions(Measurement measurement)
+    {
+        ArgumentNullException.ThrowIfNull(measurement);
+        foreach (EquationTerm term in measurement.Equation.Terms)
+        {
+            if (!ReferenceStates.HasZeroFormationProperties(term.Species))
+            {
+                return false;
+            }
+        }
+
+        return Terms(measurement.Property, measurement.Equation, measurement.Temperature, ReferenceStates.HasZeroFormationProperties).Count == 0;
+    }
+
     private static List<(Species Species, UnknownKind Kind, Fraction Coefficient)> Terms(ThermoProperty property, ChemicalEquation equation, double temperature, Func<Species, bool> hasZeroFormation)
     {
         bool enthalpy = property is ThermoProperty.Enthalpy or ThermoProperty.InternalEnergy or ThermoProperty.GibbsEnergy || property.IsEquilibriumConstant();

@@ -243,7 +243,7 @@ public static class EquationParser
         string Word(int index) => text.Substring(words[first + index].Start, words[first + index].Length);
         if (count > 2)
         {
-            return new ParseFailure(words[first + 2].Start, $"unexpected '{Word(2)}': a term is an optional coefficient and one species", "separate species with ' + ' (spaces around the plus)", "bad-equation");
+            return new ParseFailure(words[first + 2].Start, $"unexpected '{DiagnosticText.Excerpt(Word(2))}': a term is an optional coefficient and one species", "separate species with ' + ' (spaces around the plus)", "bad-equation");
         }
 
         Fraction coefficient = Fraction.One;
@@ -254,7 +254,7 @@ public static class EquationParser
         {
             if (!RationalText.TryParse(text.AsSpan(words[first].Start, words[first].Length), out coefficient))
             {
-                return new ParseFailure(termOffset, $"'{Word(0)}' is not a coefficient", "write coefficients as 2, 0.5 or 3/2 before the species", "bad-coefficient");
+                return new ParseFailure(termOffset, $"'{DiagnosticText.Excerpt(Word(0))}' is not a coefficient", "write coefficients as 2, 0.5 or 3/2 before the species", "bad-coefficient");
             }
 
             speciesText = Word(1);
@@ -273,7 +273,7 @@ public static class EquationParser
             {
                 if (!RationalText.TryParse(word[..glued], out coefficient))
                 {
-                    return new ParseFailure(termOffset, $"'{word[..glued]}' is not a coefficient", "write coefficients as 2, 0.5 or 3/2 before the species", "bad-coefficient");
+                    return new ParseFailure(termOffset, $"'{DiagnosticText.Excerpt(word[..glued].ToString())}' is not a coefficient", "write coefficients as 2, 0.5 or 3/2 before the species", "bad-coefficient");
                 }
             }
             else

@@ -11,9 +11,14 @@ namespace PathFinder.Chemistry;
 /// hint rather than guessed: <c>Fe3+</c> (iron(III) or an Fe3 cluster?) and <c>SO42-</c> (sulfate or SO42⁻?).</para>
 /// <para>Hydrate separators are <c>·</c> or <c>*</c>, optionally followed by a multiplier (<c>CuSO4·5H2O</c>,
 /// <c>CaSO4·0.5H2O</c>). The electron is written <c>e-</c>.</para>
+/// <para>Brackets nest at most <see cref="MaxNesting"/> levels deep; deeper nesting is refused with its location
+/// (the reader recurses once per level, and no real formula comes near the limit).</para>
 /// </remarks>
 public static class FormulaParser
 {
+    /// <summary>The deepest bracket nesting read: <c>K4[Fe(CN)6]</c> nests 2 levels; 32 leaves room for any real formula.</summary>
+    public const int MaxNesting = 32;
+
     private const string ChargeHint = "write charges as ^n+ or ^n- after the formula (Fe^3+, SO4^2-), or a single + or - for charge 1 (Na+, NH4+, Cl-)";
 
     /// <summary>Reads a formula without a state. Never throws for bad input.</summary>
@@ -56,7 +61,7 @@ public static class FormulaParser
             string suffix = text[(caret + 1)..];
             if (suffix.Length == 0 || (suffix[^1] != '+' && suffix[^1] != '-'))
             {
-                return ParseResult<(int, int)>.Fail(caret, "bad-charge", $"the charge '{suffix}' after '^' must end in + or -", ChargeHint);
+                return ParseResult<(int, int)>.Fail(caret, "bad-charge", $"the charge '{DiagnosticText.Excerpt(suffix)}' after '^' must end in + or -", ChargeHint);
             }
 
             string digits = suffix[..^1];
@@ -104,8 +109,8 @@ public static class FormulaParser
                 return ParseResult<(int, int)>.Fail(
                     bodyLength - digitRun,
                     "ambiguous-charge",
-                    $"'{text}' is ambiguous: the digits before '{last}' could be an atom count or the charge",
-                    $"write {withCharge} if the charge is {count[^1..]}{last}, or {body}^{last} for a count of {count} with charge 1{last}");
+                    $"'{DiagnosticText.Excerpt(text)}' is ambiguous: the digits before '{last}' could be an atom count or the charge",
+                    $"write {DiagnosticText.Excerpt(withCharge)} if the charge is {count[^1..]}{last}, or {DiagnosticText.Excerpt(body + "^" + last)} for a count of {DiagnosticText.Excerpt(count)} with charge 1{last}");
             }
         }
 
@@ -115,6 +120,7 @@ public static class FormulaParser
     private sealed class Reader(string text)
     {
         private int _position;
+        private int _depth;
 
         public ParseResult<Dictionary<string, Fraction>> ReadWhole()
         {
@@ -133,7 +139,7 @@ public static class FormulaParser
 
                     if (_position > start && (!RationalText.TryParse(text[start.._position], out multiplier) || multiplier <= Fraction.Zero))
                     {
-                        return ParseResult<Dictionary<string, Fraction>>.Fail(start, "bad-formula", $"'{text[start.._position]}' is not a positive hydrate multiplier", "write it as CuSO4·5H2O or CaSO4·0.5H2O");
+                        return ParseResult<Dictionary<string, Fraction>>.Fail(start, "bad-formula", $"'{DiagnosticText.Excerpt(text[start.._position])}' is not a positive hydrate multiplier", "write it as CuSO4·5H2O or CaSO4·0.5H2O");
                     }
                 }
 
@@ -198,7 +204,7 @@ public static class FormulaParser
                     string symbol = ReadSymbol();
                     if (!ElementTable.Contains(symbol))
                     {
-                        return ParseResult<Dictionary<string, Fraction>>.Fail(start, "unknown-element", $"'{symbol}' is not an element symbol", "element symbols start with a capital letter followed by at most one small letter (Co is cobalt, CO is carbon + oxygen)");
+                        return ParseResult<Dictionary<string, Fraction>>.Fail(start, "unknown-element", $"'{DiagnosticText.Excerpt(symbol)}' is not an element symbol", "element symbols start with a capital letter followed by at most one small letter (Co is cobalt, CO is carbon + oxygen)");
                     }
 
                     ParseResult<int> count = ReadCount();
@@ -215,8 +221,15 @@ public static class FormulaParser
                 {
                     int open = _position;
                     char expected = ch == '(' ? ')' : ']';
+                    if (_depth == MaxNesting)
+                    {
+                        return ParseResult<Dictionary<string, Fraction>>.Fail(open, "bad-formula", $"brackets nest more than {MaxNesting} levels deep here", "no real formula needs that many levels: check the brackets");
+                    }
+
                     _position++;
+                    _depth++;
                     ParseResult<Dictionary<string, Fraction>> inner = ReadSequence(expected);
+                    _depth--;
                     if (!inner.TryGetValue(out Dictionary<string, Fraction>? innerCounts))
                     {
                         return inner;
@@ -302,7 +315,7 @@ public static class FormulaParser
             string digits = text[start.._position];
             if (!int.TryParse(digits, NumberStyles.None, CultureInfo.InvariantCulture, out int count) || count == 0 || count > 100000)
             {
-                return ParseResult<int>.Fail(start, "bad-formula", $"the atom count '{digits}' must be a whole number from 1 to 100000", "write counts as positive integers");
+                return ParseResult<int>.Fail(start, "bad-formula", $"the atom count '{DiagnosticText.Excerpt(digits)}' must be a whole number from 1 to 100000", "write counts as positive integers");
             }
 
             return ParseResult<int>.Ok(count);

@@ -61,6 +61,8 @@ public static class SpeciesParser
             return ParseResult<Species>.Fail(formula.Failure);
         }
 
-        return ParseResult<Species>.Fail(text.Length, "missing-state", $"'{text}' has no state", $"add the state after the formula, e.g. {text}(g), {text}(l), {text}(cr) or {text}(aq)");
+        return ParseResult<Species>.Fail(text.Length, "missing-state", $"'{DiagnosticText.Excerpt(text)}' has no state", StateHint(DiagnosticText.Excerpt(text)));
     }
+
+    private static string StateHint(string formula) => $"add the state after the formula, e.g. {formula}(g), {formula}(l), {formula}(cr) or {formula}(aq)";
 }

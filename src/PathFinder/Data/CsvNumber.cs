@@ -37,13 +37,13 @@ internal static class CsvNumber
             string hint = !decimalComma && text.Contains(',', StringComparison.Ordinal)
                 ? "use a decimal point (1.5), not a decimal comma"
                 : $"write a plain number such as {example} or 1.2e3";
-            diagnostics.Add(Diagnostic.Error("bad-number", row.LocationOf(column, field), $"the {field} '{text}' is not a number", hint));
+            diagnostics.Add(Diagnostic.Error("bad-number", row.LocationOf(column, field), $"the {field} '{DiagnosticText.Excerpt(text)}' is not a number", hint));
             return null;
         }
 
         if (!double.IsFinite(number))
         {
-            diagnostics.Add(Diagnostic.Error("bad-number", row.LocationOf(column, field), $"the {field} '{text}' is not a finite number", "give a finite value; leave the row out if there is none"));
+            diagnostics.Add(Diagnostic.Error("bad-number", row.LocationOf(column, field), $"the {field} '{DiagnosticText.Excerpt(text)}' is not a finite number", "give a finite value; leave the row out if there is none"));
             return null;
         }
 

@@ -60,6 +60,32 @@ public sealed class CsvTable
         return -1;
     }
 
+    /// <summary>Adds an error, located at the second, for every header name written twice (case-insensitive; blank names aside).</summary>
+    /// <returns>Whether any name was repeated: which of the two columns is meant cannot be told, so the table should not be read.</returns>
+    public bool ReportDuplicateColumns(ICollection<Diagnostic> diagnostics)
+    {
+        ArgumentNullException.ThrowIfNull(diagnostics);
+        var first = new Dictionary<string, int>(StringComparer.OrdinalIgnoreCase);
+        bool found = false;
+        for (int i = 0; i < Header.Count; i++)
+        {
+            if (Header[i].Length == 0)
+            {
+                continue;
+            }
+
+            if (!first.TryAdd(Header[i], i))
+            {
+                int column = HeaderColumns.Count > i ? HeaderColumns[i] : 1;
+                int earlier = HeaderColumns.Count > first[Header[i]] ? HeaderColumns[first[Header[i]]] : 1;
+                diagnostics.Add(Diagnostic.Error("duplicate-column", new SourceLocation(File, HeaderLine, column), $"the column '{DiagnosticText.Excerpt(Header[i])}' appears twice (first at column {earlier}): the file is not read", "keep one of them, or rename the other (a note column may have any other name)"));
+                found = true;
+            }
+        }
+
+        return found;
+    }
+
     /// <summary>The measurement header, named by the hint for an empty file unless a table says otherwise.</summary>
     public const string MeasurementHeader = "id,equation,property,value,uncertainty,unit,temperature,source";
 
@@ -169,11 +195,11 @@ public sealed class CsvTable
             DetectColumnCountChanges = false,
             BadDataFound = args =>
             {
-                // A quote in the middle of an unquoted field (or a stray one) makes the row's fields unreliable.
-                int badLine = args.Context?.Parser?.RawRow ?? 0;
-                if (badRows.Add(badLine))
+                // A quote in the middle of an unquoted field, or one never closed, makes the row's fields unreliable.
+                int rawRow = args.Context?.Parser?.RawRow ?? 0;
+                if (badRows.Add(rawRow))
                 {
-                    diagnostics.Add(Diagnostic.Error("bad-csv", new SourceLocation(displayPath, badLine), $"a field holds a stray quote: '{Shorten(args.Field)}'", "enclose a field that contains quotes in double quotes and double each quote inside it (\"\"), or remove the quote"));
+                    diagnostics.Add(BadQuote(args.RawRecord ?? "", rawRow, delimiter, displayPath));
                 }
             },
             TrimOptions = TrimOptions.None,
@@ -230,7 +256,105 @@ public sealed class CsvTable
         return new CsvTable(displayPath, header, headerLine, headerColumns, rows, delimiter);
     }
 
-    private static string Shorten(string text) => text.Length <= 40 ? text : text[..39] + "…";
+    /// <summary>The error for a record with a bad quote, located at the quote: one never closed, or a stray one inside an unquoted field.</summary>
+    /// <param name="raw">The raw record as the parser read it.</param>
+    /// <param name="rawRow">The parser's line count after the record (every line break it consumed).</param>
+    /// <param name="delimiter">The field separator.</param>
+    /// <param name="displayPath">The file name for the location.</param>
+    private static Diagnostic BadQuote(string raw, int rawRow, char delimiter, string displayPath)
+    {
+        (int index, bool unclosed) = FindBadQuote(raw, delimiter);
+
+        // An unclosed quote swallows every line break to the end of the file, the trailing one included.
+        int startLine = rawRow - (unclosed ? raw.AsSpan().Count('\n') : CountLineBreaks(raw));
+        if (index < 0)
+        {
+            return Diagnostic.Error("bad-csv", new SourceLocation(displayPath, Math.Max(startLine, 1)), $"a field holds a stray quote: '{DiagnosticText.Excerpt(raw.TrimEnd('\r', '\n'))}'", StrayQuoteHint);
+        }
+
+        int lineStart = raw.LastIndexOf('\n', Math.Max(index - 1, 0)) + 1;
+        if (index == 0)
+        {
+            lineStart = 0;
+        }
+
+        var location = new SourceLocation(displayPath, startLine + raw.AsSpan(0, index).Count('\n'), index - lineStart + 1);
+        if (unclosed)
+        {
+            int lines = raw.AsSpan(index).TrimEnd("\r\n").Count('\n') + 1;
+            return Diagnostic.Error("bad-csv", location, string.Create(CultureInfo.InvariantCulture, $"the quote opened here is never closed: the rest of the file ({lines} line(s)) reads as one field"), "close the quote at the end of the field, and double every quote inside it (\"\")");
+        }
+
+        int end = raw.IndexOfAny(['\r', '\n'], index);
+        string line = raw[lineStart..(end < 0 ? raw.Length : end)];
+        return Diagnostic.Error("bad-csv", location, $"a field holds a stray quote: '{DiagnosticText.Excerpt(line)}'", StrayQuoteHint);
+    }
+
+    private const string StrayQuoteHint = "enclose a field that contains quotes in double quotes and double each quote inside it (\"\"), or remove the quote";
+
+    /// <summary>The offset of the first bad quote in a raw record (RFC 4180) and whether it opens a field that is never closed; -1 when none is found.</summary>
+    private static (int Index, bool Unclosed) FindBadQuote(string raw, char delimiter)
+    {
+        int i = 0;
+        while (i < raw.Length)
+        {
+            // At the start of a field: spaces, then a quote opens a quoted field.
+            int start = i;
+            while (i < raw.Length && raw[i] == ' ')
+            {
+                i++;
+            }
+
+            if (i < raw.Length && raw[i] == '"')
+            {
+                int open = i++;
+                while (true)
+                {
+                    if (i >= raw.Length)
+                    {
+                        return (open, true);
+                    }
+
+                    if (raw[i] == '"')
+                    {
+                        if (i + 1 < raw.Length && raw[i + 1] == '"')
+                        {
+                            i += 2;
+                            continue;
+                        }
+
+                        i++;
+                        break;
+                    }
+
+                    i++;
+                }
+            }
+            else
+            {
+                i = start;
+            }
+
+            while (i < raw.Length && raw[i] != delimiter && raw[i] != '\n' && raw[i] != '\r')
+            {
+                if (raw[i] == '"')
+                {
+                    return (i, false);
+                }
+
+                i++;
+            }
+
+            if (i < raw.Length && raw[i] != delimiter)
+            {
+                break;
+            }
+
+            i++;
+        }
+
+        return (-1, false);
+    }
 
     private static string FirstLine(string message)
     {

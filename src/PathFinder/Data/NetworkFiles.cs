@@ -16,18 +16,76 @@ public static class NetworkFiles
     public const string SourcesFileName = "sources.csv";
 
     /// <summary>The measurement files of a network: the file itself, or every other <c>*.csv</c> in the folder, sorted.</summary>
-    public static IReadOnlyList<string> MeasurementFiles(string path)
+    public static IReadOnlyList<string> MeasurementFiles(string path) => MeasurementFiles(path, out _);
+
+    /// <summary>The measurement files of a network, and every other entry of a folder network with the reason it is not read.</summary>
+    /// <remarks>
+    /// In a folder, measurement files are the regular files whose name ends in <c>.csv</c> in any letter case
+    /// (<c>data.CSV</c> too), except the auxiliary tables. Named as skipped: subfolders (a network is not read
+    /// recursively), other files, editors' lock files (<c>~$x.csv</c>, <c>.~lock.x.csv#</c>, <c>.#x.csv</c>), FIFOs,
+    /// devices and sockets (reading them would block or never end), an auxiliary table in the wrong letter case,
+    /// and a single-file network's companions (<c>lab.species.csv</c>), which a folder network does not read.
+    /// The curation file is read by the commands and is not listed.
+    /// </remarks>
+    /// <param name="path">A file or a folder.</param>
+    /// <param name="skipped">The entries of a folder that are not read; empty for a file.</param>
+    public static IReadOnlyList<string> MeasurementFiles(string path, out IReadOnlyList<SkippedEntry> skipped)
     {
         if (File.Exists(path))
         {
+            skipped = [];
             return [path];
         }
 
-        return Directory.EnumerateFiles(path, "*.csv", SearchOption.TopDirectoryOnly)
-            .Where(file => !IsAuxiliary(Path.GetFileName(file)))
-            .Order(StringComparer.Ordinal)
-            .ToArray();
+        var files = new List<string>();
+        var notRead = new List<SkippedEntry>();
+        foreach (string entry in Directory.EnumerateFileSystemEntries(path, "*", SearchOption.TopDirectoryOnly).Order(StringComparer.Ordinal))
+        {
+            string name = Path.GetFileName(entry);
+            if (Directory.Exists(entry))
+            {
+                notRead.Add(new SkippedEntry(entry, "a subfolder: a network folder is not read recursively", "move its CSV files into the network folder, or give the subfolder as a network of its own"));
+            }
+            else if (IsLockFile(name))
+            {
+                notRead.Add(new SkippedEntry(entry, "an editor's lock file (the data are open in a spreadsheet or editor)"));
+            }
+            else if (!name.EndsWith(".csv", StringComparison.OrdinalIgnoreCase))
+            {
+                notRead.Add(new SkippedEntry(entry, "not a .csv file"));
+            }
+            else if (!FileKinds.IsRegularFile(entry))
+            {
+                notRead.Add(new SkippedEntry(entry, "not a regular file (a FIFO, a device or a socket)", "replace it with a CSV file"));
+            }
+            else if (AuxiliaryNames.FirstOrDefault(auxiliary => name.Equals(auxiliary, StringComparison.OrdinalIgnoreCase)) is { } auxiliaryName)
+            {
+                if (!name.Equals(auxiliaryName, StringComparison.Ordinal))
+                {
+                    notRead.Add(new SkippedEntry(entry, $"named like {auxiliaryName} in other letter case", $"rename it to {auxiliaryName} to have it read"));
+                }
+            }
+            else if (IsAuxiliary(name))
+            {
+                notRead.Add(new SkippedEntry(entry, "a companion table of a single-file network; a folder network reads species.csv, heat-capacity.csv, sources.csv and curation.csv", "rename it to the folder's table name to have it read with the folder"));
+            }
+            else
+            {
+                files.Add(entry);
+            }
+        }
+
+        skipped = notRead;
+        return files;
     }
+
+    /// <summary>Whether a file name is an editor's lock file: <c>~$x.csv</c> (Office), <c>.~lock.x.csv#</c> (LibreOffice), <c>.#x.csv</c> (Emacs).</summary>
+    public static bool IsLockFile(string fileName) =>
+        fileName.StartsWith("~$", StringComparison.Ordinal)
+        || fileName.StartsWith(".~lock.", StringComparison.Ordinal)
+        || fileName.StartsWith(".#", StringComparison.Ordinal);
+
+    private static readonly string[] AuxiliaryNames = [SpeciesFileName, HeatCapacityFileName, CurationFileName, SourcesFileName];
 
     /// <summary>A file beside the network: inside a folder network, or next to a single-file network with its stem as prefix.</summary>
     /// <remarks>For <c>lab.csv</c> the curation file is <c>lab.curation.csv</c>; for a folder it is <c>folder/curation.csv</c>.</remarks>

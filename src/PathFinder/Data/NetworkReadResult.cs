@@ -103,6 +103,13 @@ public sealed class NetworkReadResult
     /// <summary>The errors, in file and line order.</summary>
     public IEnumerable<Diagnostic> Errors => _rowDiagnostics.Where(diagnostic => diagnostic.Severity == Severity.Error);
 
+    /// <summary>The notes (entries of a network folder not read on purpose), in file order.</summary>
+    public IEnumerable<Diagnostic> Notes => _rowDiagnostics.Where(diagnostic => diagnostic.Severity == Severity.Note);
+
+    /// <summary>The warnings about rows that are valid but used by no analysis (<c>conventional-only</c>), found while reading, in file and line order.</summary>
+    /// <remarks>Analysis commands show these even though they show no other warning: a row left out must never go unsaid.</remarks>
+    public IEnumerable<Diagnostic> UnusedRows => _rowDiagnostics.Where(diagnostic => diagnostic.Code == NetworkReader.ConventionalOnlyCode);
+
     /// <summary>The warnings, in file and line order.</summary>
     public IEnumerable<Diagnostic> Warnings => Diagnostics.Where(diagnostic => diagnostic.Severity == Severity.Warning);
 

@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Runtime.CompilerServices;
 using System.Text;
 using Fractions;
+using PathFinder.Analysis;
 using PathFinder.Chemistry;
 using PathFinder.Diagnostics;
 using PathFinder.Quantities;
@@ -28,6 +29,9 @@ public static class NetworkReader
     /// <summary>The optional columns with a meaning.</summary>
     public static IReadOnlyList<string> OptionalColumns { get; } = ["unit", "temperature", "source", "coverage"];
 
+    /// <summary>The code of the warning on a row that only checks a convention (<c>H+(aq) + e- -> 1/2 H2(g)</c>) and that no analysis uses.</summary>
+    public const string ConventionalOnlyCode = "conventional-only";
+
     /// <summary>Beyond this distance from 298.15 K (in K) a measurement without heat-capacity data is warned about.</summary>
     public const double TemperatureWarningDistance = 10.0;
 
@@ -44,18 +48,27 @@ public static class NetworkReader
             return new NetworkReadResult(new ReactionNetwork(name, []), diagnostics, [], null, null, NoHeatCapacities);
         }
 
-        IReadOnlyList<string> files = NetworkFiles.MeasurementFiles(path);
+        if (File.Exists(path) && !FileKinds.IsRegularFile(path))
+        {
+            diagnostics.Add(Diagnostic.Error("not-a-regular-file", new SourceLocation(path), "not a regular file (a FIFO, a device or a socket): it is not read", "give a CSV file or a folder of CSV files"));
+            return new NetworkReadResult(new ReactionNetwork(name, []), diagnostics, [], null, null, NoHeatCapacities);
+        }
+
+        IReadOnlyList<string> files = NetworkFiles.MeasurementFiles(path, out IReadOnlyList<SkippedEntry> skipped);
+        foreach (SkippedEntry entry in skipped)
+        {
+            diagnostics.Add(Diagnostic.Note("skipped-file", new SourceLocation(entry.Path), $"not read: {entry.Reason}", entry.Hint));
+        }
+
         if (files.Count == 0)
         {
             diagnostics.Add(Diagnostic.Error("empty-network", new SourceLocation(path), "the folder holds no measurement CSV files", "put one or more CSV files with the header id,equation,property,value,uncertainty in it"));
             return new NetworkReadResult(new ReactionNetwork(name, []), diagnostics, files, null, null, NoHeatCapacities);
         }
 
-        string speciesPath = NetworkFiles.Companion(path, NetworkFiles.SpeciesFileName);
-        string? speciesFile = File.Exists(speciesPath) ? speciesPath : null;
+        string? speciesFile = CompanionFile(path, NetworkFiles.SpeciesFileName, diagnostics);
         SpeciesCatalog catalog = SpeciesCatalog.Read(speciesFile, speciesFile ?? "", diagnostics);
-        string heatCapacityPath = NetworkFiles.Companion(path, NetworkFiles.HeatCapacityFileName);
-        string? heatCapacityFile = File.Exists(heatCapacityPath) ? heatCapacityPath : null;
+        string? heatCapacityFile = CompanionFile(path, NetworkFiles.HeatCapacityFileName, diagnostics);
         Dictionary<Species, IHeatCapacity> heatCapacities = ReadHeatCapacities(heatCapacityFile, catalog, diagnostics);
 
         var measurements = new List<Measurement>();
@@ -68,8 +81,7 @@ public static class NetworkReader
         }
 
         // After the measurements: a declaration must name a source of the data (before any curation exclusion).
-        string sourcesPath = NetworkFiles.Companion(path, NetworkFiles.SourcesFileName);
-        string? sourcesFile = File.Exists(sourcesPath) ? sourcesPath : null;
+        string? sourcesFile = CompanionFile(path, NetworkFiles.SourcesFileName, diagnostics);
         var dimensions = measurements
             .Select(measurement => (measurement.Source, Dimension: measurement.Property.Dimension() == UnitDimension.MolarEntropy ? UnitDimension.MolarEntropy : UnitDimension.MolarEnergy))
             .ToHashSet();
@@ -91,6 +103,24 @@ public static class NetworkReader
             heatCapacities,
             sourcesFile,
             systematics);
+    }
+
+    /// <summary>The companion table's path when it exists as a regular file; an error when something else has its name.</summary>
+    private static string? CompanionFile(string networkPath, string fileName, List<Diagnostic> diagnostics)
+    {
+        string path = NetworkFiles.Companion(networkPath, fileName);
+        if (!File.Exists(path))
+        {
+            return null;
+        }
+
+        if (!FileKinds.IsRegularFile(path))
+        {
+            diagnostics.Add(Diagnostic.Error("not-a-regular-file", new SourceLocation(path), "not a regular file (a FIFO, a device or a socket): it is not read", $"make {fileName} a CSV file, or remove it"));
+            return null;
+        }
+
+        return path;
     }
 
     private static readonly IReadOnlyDictionary<Species, IHeatCapacity> NoHeatCapacities = new Dictionary<Species, IHeatCapacity>();
@@ -140,6 +170,11 @@ public static class NetworkReader
             sources.Add(SourceOf(row, sourceColumn, defaultSource));
         }
 
+        if (table.ReportDuplicateColumns(diagnostics))
+        {
+            return;
+        }
+
         var columns = RequiredColumns.Concat(OptionalColumns).ToDictionary(column => column, table.IndexOf, StringComparer.Ordinal);
         string[] missing = RequiredColumns.Where(column => columns[column] < 0).ToArray();
         if (missing.Length > 0)
@@ -165,7 +200,7 @@ public static class NetworkReader
             bool duplicate = false;
             if (id.Length > 0 && !firstById.TryAdd(id, row.LocationOf(map.Id, "id")))
             {
-                diagnostics.Add(Diagnostic.Error("duplicate-id", row.LocationOf(map.Id, "id"), $"measurement id '{id}' was already used at {firstById[id]}", "give every measurement its own id"));
+                diagnostics.Add(Diagnostic.Error("duplicate-id", row.LocationOf(map.Id, "id"), $"measurement id '{DiagnosticText.Excerpt(id)}' was already used at {firstById[id]}", "give every measurement its own id"));
                 duplicate = true;
             }
 
@@ -173,6 +208,10 @@ public static class NetworkReader
             if (measurement is not null && !duplicate)
             {
                 measurements.Add(measurement);
+                if (ThermoModel.MeasuresOnlyConventions(measurement))
+                {
+                    diagnostics.Add(Diagnostic.Warning(ConventionalOnlyCode, measurement.Location, $"'{DiagnosticText.Excerpt(measurement.Id)}' involves only species whose contributions are zero by convention (elements in their reference states, H+(aq), e-): it only checks that convention and is not used by any analysis", "its value should be 0 within its uncertainty; drop the row, or check the equation"));
+                }
             }
         }
     }
@@ -201,18 +240,20 @@ public static class NetworkReader
         bool propertyKnown = ThermoProperties.TryParse(propertyText, out property);
         if (!propertyKnown)
         {
-            diagnostics.Add(Diagnostic.Error("unknown-property", row.LocationOf(columns.Property, "property"), $"unknown property '{propertyText}'", $"use one of {string.Join(", ", ThermoProperties.Codes)}"));
+            diagnostics.Add(Diagnostic.Error("unknown-property", row.LocationOf(columns.Property, "property"), $"unknown property '{DiagnosticText.Excerpt(propertyText)}'", $"use one of {string.Join(", ", ThermoProperties.Codes)}"));
         }
 
         ChemicalEquation? equation = ReadEquation(row, columns.Equation, catalog, equations, propertyKnown ? property : null, diagnostics);
 
         EnergyUnit unit = propertyKnown ? property.CanonicalUnit() : EnergyUnit.KilojoulePerMole;
         string unitText = row.FieldOrEmpty(columns.Unit);
+        bool unitAccepted = true;
         if (unitText.Length > 0)
         {
+            unitAccepted = false;
             if (!EnergyUnit.TryParse(unitText, out EnergyUnit parsedUnit))
             {
-                diagnostics.Add(Diagnostic.Error("unknown-unit", row.LocationOf(columns.Unit, "unit"), $"unknown unit '{unitText}'", $"use one of {string.Join(", ", EnergyUnit.AcceptedSymbols)}"));
+                diagnostics.Add(Diagnostic.Error("unknown-unit", row.LocationOf(columns.Unit, "unit"), $"unknown unit '{DiagnosticText.Excerpt(unitText)}'", $"use one of {string.Join(", ", EnergyUnit.AcceptedSymbols)}"));
             }
             else if (propertyKnown && parsedUnit.Dimension != property.Dimension())
             {
@@ -227,6 +268,7 @@ public static class NetworkReader
             else
             {
                 unit = parsedUnit;
+                unitAccepted = true;
             }
         }
 
@@ -252,13 +294,18 @@ public static class NetworkReader
             }
         }
 
+        if (propertyKnown && unitAccepted && value is not null && uncertainty is not null)
+        {
+            CheckMagnitudes(row, columns, property, unit, value.Value, uncertainty.Value, coverage, diagnostics);
+        }
+
         double temperature = PhysicalConstants.StandardTemperature;
         if (columns.Temperature >= 0 && row.FieldOrEmpty(columns.Temperature).Length > 0)
         {
             double? t = CsvNumber.Read(row, columns.Temperature, "temperature", table.DecimalComma, diagnostics);
-            if (t is <= 0.0 or > 10000.0)
+            if (t is not null && !AcceptedRanges.IsTemperatureAccepted(t.Value))
             {
-                diagnostics.Add(Diagnostic.Error("bad-temperature", row.LocationOf(columns.Temperature, "temperature"), $"the temperature {t.Value.ToString(CultureInfo.InvariantCulture)} K is impossible here", "give the temperature in kelvin, above 0 and at most 10000 K (298.15 for 25 °C)"));
+                diagnostics.Add(Diagnostic.Error("bad-temperature", row.LocationOf(columns.Temperature, "temperature"), $"the temperature {AcceptedRanges.Format(t.Value)} K is outside the accepted 1–10000 K", "give the temperature in kelvin, from 1 to 10000 K (298.15 for 25 °C)"));
             }
             else if (t is not null)
             {
@@ -298,6 +345,45 @@ public static class NetworkReader
             Notes = notes ?? NoNotes,
         };
     }
+
+    /// <summary>Refuses a value or a standard uncertainty outside <see cref="AcceptedRanges"/> once converted to the canonical unit.</summary>
+    /// <remarks>Beyond these magnitudes the analyses' sums, squares and weights overflow or vanish (1e300 kcal/mol, an uncertainty of 1e-300).</remarks>
+    private static void CheckMagnitudes(CsvRow row, ColumnMap columns, ThermoProperty property, EnergyUnit unit, double value, double uncertainty, double coverage, List<Diagnostic> diagnostics)
+    {
+        EnergyUnit canonical = property.CanonicalUnit();
+        double bound = AcceptedRanges.MaxMagnitude(property);
+        string boundText = WithUnit(bound, canonical);
+        double canonicalValue = unit.ToCanonicalValue(value);
+        string Shown(double number, double inCanonical) => unit == canonical || property.IsEquilibriumConstant()
+            ? WithUnit(number, unit)
+            : $"{WithUnit(number, unit)} ({WithUnit(inCanonical, canonical)})";
+        if (!AcceptedRanges.IsValueAccepted(property, canonicalValue))
+        {
+            string hint = property.Dimension() switch
+            {
+                UnitDimension.MolarEnergy => "an energy per mole of reaction as written must lie within ±1e5 kJ/mol (the largest real ones are about 2e4): check the unit and the exponent",
+                UnitDimension.MolarEntropy => "an entropy must lie within ±1e5 J/(mol·K) (real ones stay below about 1e4): check the unit and the exponent",
+                _ => "ln K must lie within ±1000 (log10 K within ±434.29): check the exponent, or whether K itself was written instead of its logarithm",
+            };
+            diagnostics.Add(Diagnostic.Error("value-out-of-range", row.LocationOf(columns.Value, "value"), $"the {property.Symbol()} value {Shown(value, canonicalValue)} is beyond the accepted ±{boundText}", hint));
+            return;
+        }
+
+        double canonicalUncertainty = unit.ToCanonicalValue(uncertainty / coverage);
+        double floor = AcceptedRanges.MinUncertainty(canonicalValue);
+        if (canonicalUncertainty > bound)
+        {
+            diagnostics.Add(Diagnostic.Error("uncertainty-out-of-range", row.LocationOf(columns.Uncertainty, "uncertainty"), $"the standard uncertainty {Shown(uncertainty / coverage, canonicalUncertainty)} is beyond the accepted {boundText}", "check the unit and the exponent; a datum known that poorly says nothing: leave the row out"));
+        }
+        else if (!(canonicalUncertainty >= floor))
+        {
+            diagnostics.Add(Diagnostic.Error("uncertainty-out-of-range", row.LocationOf(columns.Uncertainty, "uncertainty"), $"the standard uncertainty {Shown(uncertainty / coverage, canonicalUncertainty)} is below the accepted floor {WithUnit(floor, canonical)}", "no measurement is that precise (the floor is the larger of 1e-6 and 1e-9 × |value| in the canonical unit): give the real standard uncertainty"));
+        }
+    }
+
+    /// <summary>A number with its unit for messages (a pure number without one).</summary>
+    private static string WithUnit(double number, EnergyUnit unit) =>
+        unit.Dimension == UnitDimension.Dimensionless ? AcceptedRanges.Format(number) : $"{AcceptedRanges.Format(number)} {unit.Symbol}";
 
     /// <summary>The row's source: its <c>source</c> field, or the file's default when the column is absent or the field blank.</summary>
     private static string SourceOf(CsvRow row, int column, string defaultSource)
@@ -440,7 +526,7 @@ public static class NetworkReader
             var key = (measurement.Source, measurement.Property, signature, Math.Round(measurement.Temperature, 2));
             if (seen.TryGetValue(key, out Measurement? first))
             {
-                diagnostics.Add(Diagnostic.Warning("repeated-measurement", measurement.Location with { Field = "equation" }, $"'{measurement.Id}' measures the same reaction at the same temperature as '{first.Id}' in source '{measurement.Source}'", "if both are independent determinations keep them; if one is a copy, drop it"));
+                diagnostics.Add(Diagnostic.Warning("repeated-measurement", measurement.Location with { Field = "equation" }, $"'{DiagnosticText.Excerpt(measurement.Id)}' measures the same reaction at the same temperature as '{DiagnosticText.Excerpt(first.Id)}' in source '{measurement.Source}'", "if both are independent determinations keep them; if one is a copy, drop it"));
             }
             else
             {
@@ -455,7 +541,7 @@ public static class NetworkReader
                     .ToArray();
                 if (lacking.Length > 0)
                 {
-                    diagnostics.Add(Diagnostic.Warning("no-heat-capacity", measurement.Location with { Field = "temperature" }, $"'{measurement.Id}' was measured at {measurement.Temperature.ToString("0.##", CultureInfo.InvariantCulture)} K and there are no heat-capacity data for {string.Join(", ", lacking)} to correct it to 298.15 K", $"add those species to {NetworkFiles.HeatCapacityFileName} beside the data; until then the value is used uncorrected"));
+                    diagnostics.Add(Diagnostic.Warning("no-heat-capacity", measurement.Location with { Field = "temperature" }, $"'{DiagnosticText.Excerpt(measurement.Id)}' was measured at {measurement.Temperature.ToString("0.##", CultureInfo.InvariantCulture)} K and there are no heat-capacity data for {string.Join(", ", lacking)} to correct it to 298.15 K", $"add those species to {NetworkFiles.HeatCapacityFileName} beside the data; until then the value is used uncorrected"));
                 }
             }
 
@@ -476,7 +562,7 @@ public static class NetworkReader
             if (list.Count == 1 && !ReferenceStates.HasZeroFormationProperties(species))
             {
                 Measurement only = list[0];
-                diagnostics.Add(Diagnostic.Warning("single-use-species", only.Location with { Field = "equation" }, $"{species.Name} appears only in '{only.Id}': nothing can check that value", "add another measurement involving this species to make it checkable"));
+                diagnostics.Add(Diagnostic.Warning("single-use-species", only.Location with { Field = "equation" }, $"{species.Name} appears only in '{DiagnosticText.Excerpt(only.Id)}': nothing can check that value", "add another measurement involving this species to make it checkable"));
             }
         }
 

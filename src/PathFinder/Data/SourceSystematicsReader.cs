@@ -82,7 +82,7 @@ public static class SourceSystematicsReader
             }
             else if (unit is not null && firstBySource.TryGetValue((source, unit.Dimension), out SourceLocation first))
             {
-                diagnostics.Add(Diagnostic.Error("duplicate-source", location, $"source '{source}' already has a systematic of this kind (energy or entropy) at {first}", "keep one row per source and kind; if two effects are shared, combine them into one standard uncertainty"));
+                diagnostics.Add(Diagnostic.Error("duplicate-source", location, $"source '{DiagnosticText.Excerpt(source)}' already has a systematic of this kind (energy or entropy) at {first}", "keep one row per source and kind; if two effects are shared, combine them into one standard uncertainty"));
             }
             else
             {
@@ -93,7 +93,7 @@ public static class SourceSystematicsReader
 
                 if (!known.Contains(source))
                 {
-                    diagnostics.Add(Diagnostic.Error("unknown-source", location, $"no measurement has the source '{source}'", UnknownSourceHint(source, known)));
+                    diagnostics.Add(Diagnostic.Error("unknown-source", location, $"no measurement has the source '{DiagnosticText.Excerpt(source)}'", UnknownSourceHint(source, known)));
                 }
             }
 
@@ -101,6 +101,12 @@ public static class SourceSystematicsReader
             if (systematic is <= 0.0)
             {
                 diagnostics.Add(Diagnostic.Error("bad-systematic", row.LocationOf(systematicColumn, "systematic"), $"the systematic must be positive, not {systematic.Value.ToString(CultureInfo.InvariantCulture)}", "give the standard uncertainty every measurement of the source shares; leave a source without one out of the file"));
+            }
+            else if (systematic is not null && unit is not null && !IsAccepted(unit, systematic.Value))
+            {
+                EnergyUnit canonical = unit.Dimension == UnitDimension.MolarEntropy ? EnergyUnit.JoulePerMoleKelvin : EnergyUnit.KilojoulePerMole;
+                string range = $"{AcceptedRanges.Format(AcceptedRanges.AbsoluteUncertaintyFloor)} to {AcceptedRanges.Format(AcceptedRanges.MaxMagnitude(unit.Dimension))} {canonical.Symbol}";
+                diagnostics.Add(Diagnostic.Error("bad-systematic", row.LocationOf(systematicColumn, "systematic"), $"the systematic {AcceptedRanges.Format(systematic.Value)} {unit.Symbol} is outside the accepted {range}", "check the unit and the exponent: a shared standard uncertainty of a real source lies well inside this range"));
             }
 
             if (diagnostics.Count > before || systematic is null || unit is null)
@@ -111,7 +117,7 @@ public static class SourceSystematicsReader
             if (actsOn is not null && known.Contains(source) && !actsOn(source, unit.Dimension))
             {
                 string rows = unit.Dimension == UnitDimension.MolarEnergy ? "energy rows (ΔH, ΔU, ΔG, K)" : "entropy rows (ΔS, S°)";
-                diagnostics.Add(Diagnostic.Warning("systematic-acts-on-nothing", row.LocationOf(unitColumn, "unit"), $"source '{source}' has no {rows}: this systematic acts on no measurement", "give it in the unit of the source's data (kJ/mol for energies, J/(mol·K) for entropies), or remove the row"));
+                diagnostics.Add(Diagnostic.Warning("systematic-acts-on-nothing", row.LocationOf(unitColumn, "unit"), $"source '{DiagnosticText.Excerpt(source)}' has no {rows}: this systematic acts on no measurement", "give it in the unit of the source's data (kJ/mol for energies, J/(mol·K) for entropies), or remove the row"));
             }
 
             string note = noteColumn >= 0 ? row.FieldOrEmpty(noteColumn) : "";
@@ -119,6 +125,13 @@ public static class SourceSystematicsReader
         }
 
         return declarations;
+    }
+
+    /// <summary>Whether a systematic lies within the uncertainties <see cref="AcceptedRanges"/> accepts for its dimension (canonical unit).</summary>
+    private static bool IsAccepted(EnergyUnit unit, double systematic)
+    {
+        double canonical = unit.ToCanonicalValue(systematic);
+        return canonical >= AcceptedRanges.AbsoluteUncertaintyFloor && canonical <= AcceptedRanges.MaxMagnitude(unit.Dimension);
     }
 
     private static bool ReadHeader(CsvTable table, ICollection<Diagnostic> diagnostics, out int sourceColumn, out int systematicColumn, out int unitColumn, out int noteColumn)
@@ -143,12 +156,12 @@ public static class SourceSystematicsReader
             bool known = RequiredColumns.Contains(name, StringComparer.OrdinalIgnoreCase) || name.Equals(NoteColumn, StringComparison.OrdinalIgnoreCase);
             if (known && table.IndexOf(name) != i)
             {
-                diagnostics.Add(Diagnostic.Error("duplicate-column", location, $"the column '{name}' appears twice", "keep one of them"));
+                diagnostics.Add(Diagnostic.Error("duplicate-column", location, $"the column '{DiagnosticText.Excerpt(name)}' appears twice", "keep one of them"));
                 valid = false;
             }
             else if (!known)
             {
-                diagnostics.Add(Diagnostic.Warning("unknown-column", location, $"the column '{name}' is not part of the sources file and is ignored", $"remove it, or rename it to '{NoteColumn}'"));
+                diagnostics.Add(Diagnostic.Warning("unknown-column", location, $"the column '{DiagnosticText.Excerpt(name)}' is not part of the sources file and is ignored", $"remove it, or rename it to '{NoteColumn}'"));
             }
         }
 
@@ -170,7 +183,7 @@ public static class SourceSystematicsReader
             string[] accepted = EnergyUnit.AcceptedSymbols
                 .Where(symbol => EnergyUnit.TryParse(symbol, out EnergyUnit candidate) && candidate.Dimension != UnitDimension.Dimensionless)
                 .ToArray();
-            diagnostics.Add(Diagnostic.Error("unknown-unit", location, $"unknown unit '{text}'", $"use one of {string.Join(", ", accepted)}"));
+            diagnostics.Add(Diagnostic.Error("unknown-unit", location, $"unknown unit '{DiagnosticText.Excerpt(text)}'", $"use one of {string.Join(", ", accepted)}"));
             return null;
         }
 
@@ -192,7 +205,7 @@ public static class SourceSystematicsReader
         }
 
         string[] sorted = known.Order(StringComparer.Ordinal).ToArray();
-        string listed = string.Join(", ", sorted.Take(ListedSources).Select(name => $"'{name}'"));
+        string listed = string.Join(", ", sorted.Take(ListedSources).Select(name => $"'{DiagnosticText.Excerpt(name)}'"));
         string sources = sorted.Length > ListedSources
             ? string.Create(CultureInfo.InvariantCulture, $"the data's sources include {listed} and {sorted.Length - ListedSources} more")
             : $"the data's sources are {listed}";
@@ -203,7 +216,7 @@ public static class SourceSystematicsReader
         }
 
         string rule = near.Equals(source, StringComparison.OrdinalIgnoreCase) ? "source names are case-sensitive" : "source names must match the data exactly";
-        return $"did you mean '{near}'? {char.ToUpperInvariant(rule[0])}{rule[1..]}; {sources}";
+        return $"did you mean '{DiagnosticText.Excerpt(near)}'? {char.ToUpperInvariant(rule[0])}{rule[1..]}; {sources}";
     }
 
     /// <summary>The data source closest to <paramref name="source"/> ignoring case, when it is a likely misspelling.</summary>

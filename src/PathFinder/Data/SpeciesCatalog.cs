@@ -41,6 +41,11 @@ public sealed class SpeciesCatalog
             return catalog;
         }
 
+        if (table.ReportDuplicateColumns(diagnostics))
+        {
+            return catalog;
+        }
+
         int keyColumn = table.IndexOf("key");
         int formulaColumn = table.IndexOf("formula");
         int stateColumn = table.IndexOf("state");
@@ -61,7 +66,7 @@ public sealed class SpeciesCatalog
             string name = nameColumn >= 0 ? row.FieldOrEmpty(nameColumn) : "";
             if (key.Length == 0 || key.Any(char.IsWhiteSpace) || key.Contains('+', StringComparison.Ordinal))
             {
-                diagnostics.Add(Diagnostic.Error("bad-species-key", row.LocationOf(keyColumn, "key"), $"species key '{key}' must be non-empty, without spaces or '+'", "use a short name such as DME or EtOH"));
+                diagnostics.Add(Diagnostic.Error("bad-species-key", row.LocationOf(keyColumn, "key"), $"species key '{DiagnosticText.Excerpt(key)}' must be non-empty, without spaces or '+'", "use a short name such as DME or EtOH"));
                 continue;
             }
 
@@ -77,7 +82,7 @@ public sealed class SpeciesCatalog
             Species declared = Species.Create(parsed.Formula, parsed.State, key, name: key, description: name);
             if (!catalog._byKey.TryAdd(key, declared))
             {
-                diagnostics.Add(Diagnostic.Error("duplicate-species-key", row.LocationOf(keyColumn, "key"), $"species key '{key}' is declared twice", "give each species its own key"));
+                diagnostics.Add(Diagnostic.Error("duplicate-species-key", row.LocationOf(keyColumn, "key"), $"species key '{DiagnosticText.Excerpt(key)}' is declared twice", "give each species its own key"));
                 continue;
             }
 
@@ -130,7 +135,7 @@ public sealed class SpeciesCatalog
         {
             return isomers.Count == 1
                 ? ParseResult<Species>.Ok(isomers[0])
-                : ParseResult<Species>.Fail(0, "ambiguous-species", $"'{text}' matches several declared isomers: {string.Join(", ", isomers.Select(isomer => isomer.Label))}", "write the species key from species.csv instead of the formula");
+                : ParseResult<Species>.Fail(0, "ambiguous-species", $"'{DiagnosticText.Excerpt(text)}' matches several declared isomers: {string.Join(", ", isomers.Select(isomer => isomer.Label))}", "write the species key from species.csv instead of the formula");
         }
 
         return parsed;

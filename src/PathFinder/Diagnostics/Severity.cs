@@ -8,4 +8,7 @@ public enum Severity
 
     /// <summary>The affected record cannot be used; the data set does not pass validation.</summary>
     Error,
+
+    /// <summary>Said for completeness: something was not read on purpose (a subfolder, a lock file); no action needed.</summary>
+    Note,
 }

@@ -2,6 +2,7 @@ using System.Globalization;
 using CsvHelper;
 using CsvHelper.Configuration;
 using PathFinder.Diagnostics;
+using PathFinder.Quantities;
 
 namespace PathFinder.Thermodynamics;
 
@@ -78,7 +79,7 @@ public static class HeatCapacityTableReader
                 diagnostics.Add(Diagnostic.Error(
                     "heat-capacity-bad-csv",
                     new SourceLocation(fileName, args.Context.Parser?.RawRow ?? 0),
-                    $"malformed CSV field '{args.Field}'",
+                    $"malformed CSV field '{DiagnosticText.Excerpt(args.Field)}'",
                     "quote fields that contain quotes, and double the quotes inside them"));
             },
         };
@@ -133,7 +134,7 @@ public static class HeatCapacityTableReader
             string name = cells.Text(i).Trim();
             if (!columns.TryAdd(name, i))
             {
-                diagnostics.Add(Diagnostic.Error("heat-capacity-duplicate-column", cells.Location(i, name), $"the column '{name}' appears twice", "keep one of them"));
+                diagnostics.Add(Diagnostic.Error("heat-capacity-duplicate-column", cells.Location(i, name), $"the column '{DiagnosticText.Excerpt(name)}' appears twice", "keep one of them"));
                 continue;
             }
 
@@ -147,7 +148,7 @@ public static class HeatCapacityTableReader
 
             if (!known)
             {
-                diagnostics.Add(Diagnostic.Warning("heat-capacity-unknown-column", cells.Location(i, name), $"the column '{name}' is not part of the heat-capacity format and is ignored", "remove it, or rename it to 'note'"));
+                diagnostics.Add(Diagnostic.Warning("heat-capacity-unknown-column", cells.Location(i, name), $"the column '{DiagnosticText.Excerpt(name)}' is not part of the heat-capacity format and is ignored", "remove it, or rename it to 'note'"));
             }
         }
 
@@ -174,7 +175,7 @@ public static class HeatCapacityTableReader
 
         foreach (string name in missing)
         {
-            diagnostics.Add(Diagnostic.Error("heat-capacity-missing-column", new SourceLocation(fileName, cells.FirstLine, 1), $"the header lacks the column '{name}'", "the header must name species,form,tmin,tmax,c1,c2,... (c1 to c8 cover every form)"));
+            diagnostics.Add(Diagnostic.Error("heat-capacity-missing-column", new SourceLocation(fileName, cells.FirstLine, 1), $"the header lacks the column '{DiagnosticText.Excerpt(name)}'", "the header must name species,form,tmin,tmax,c1,c2,... (c1 to c8 cover every form)"));
         }
 
         return missing.Count > 0 || diagnostics.Any(d => d.Severity == Severity.Error)
@@ -205,7 +206,7 @@ public static class HeatCapacityTableReader
         };
         if (allowedCounts is null)
         {
-            diagnostics.Add(Diagnostic.Error("heat-capacity-unknown-form", formLocation, $"unknown heat-capacity form '{cells.Text(header.Form).Trim()}'", "use nasa7, shomate, constant or linear"));
+            diagnostics.Add(Diagnostic.Error("heat-capacity-unknown-form", formLocation, $"unknown heat-capacity form '{DiagnosticText.Excerpt(cells.Text(header.Form).Trim())}'", "use nasa7, shomate, constant or linear"));
         }
 
         double? tmin = ParseNumber(cells, header.TMin, "tmin", diagnostics);
@@ -213,6 +214,10 @@ public static class HeatCapacityTableReader
         if (tmin is double low && tmax is double high && (low < 0.0 || !(high > low)))
         {
             diagnostics.Add(Diagnostic.Error("heat-capacity-bad-range", cells.Location(header.TMin, "tmin"), string.Create(CultureInfo.InvariantCulture, $"the range {low:G}–{high:G} K is empty or negative"), "tmin must be at least 0 K and tmax greater than tmin"));
+        }
+        else if (tmax is > AcceptedRanges.MaxHeatCapacityTemperature)
+        {
+            diagnostics.Add(Diagnostic.Error("heat-capacity-bad-range", cells.Location(header.TMax, "tmax"), $"tmax {AcceptedRanges.Format(tmax.Value)} K is beyond the accepted 20000 K", "give the range in kelvin; no fit in use reaches further"));
         }
 
         // Coefficients: filled from c1 on; count them, then parse each (reporting every bad one).
@@ -252,7 +257,7 @@ public static class HeatCapacityTableReader
             SourceLocation where = filled > allowedCounts.Max()
                 ? cells.Location(header.Coefficients[allowedCounts.Max()].Column, header.Coefficients[allowedCounts.Max()].Name)
                 : cells.Location(header.Coefficients[0].Column, header.Coefficients[0].Name);
-            diagnostics.Add(Diagnostic.Error("heat-capacity-coefficient-count", where, $"the form '{form}' needs {expected} coefficients, the row has {filled}", CountHint(form)));
+            diagnostics.Add(Diagnostic.Error("heat-capacity-coefficient-count", where, $"the form '{DiagnosticText.Excerpt(form)}' needs {expected} coefficients, the row has {filled}", CountHint(form)));
         }
 
         int errorsAfter = diagnostics.Count(d => d.Severity == Severity.Error);
@@ -270,7 +275,35 @@ public static class HeatCapacityTableReader
             "constant" => new ConstantHeatCapacity(coefficients[0], range),
             _ => new LinearHeatCapacity(coefficients[0], coefficients[1], range),
         };
+        if (!IsPlausible(model, out double at, out double cp))
+        {
+            diagnostics.Add(Diagnostic.Error("heat-capacity-out-of-range", cells.Location(header.Coefficients[0].Column, header.Coefficients[0].Name), $"Cp is {AcceptedRanges.Format(cp)} J/(mol·K) at {AcceptedRanges.Format(at)} K, beyond the accepted ±1e5 J/(mol·K)", "check the coefficients' exponents and order, and the form (nasa7 gives Cp/R, the others J/(mol·K))"));
+            return null;
+        }
+
         return new RangeRow(species, model, speciesLocation, cells.Location(header.TMin, "tmin"));
+    }
+
+    /// <summary>Whether Cp stays finite and within ±<see cref="AcceptedRanges.MaxHeatCapacity"/> at 17 evenly spaced temperatures of the range (from 1 K at least).</summary>
+    /// <remarks>Huge coefficients would otherwise overflow the Kirchhoff integrals the analyses take.</remarks>
+    private static bool IsPlausible(IHeatCapacity model, out double at, out double cp)
+    {
+        TemperatureRange range = model.ValidRange;
+        for (int k = 0; k <= 16; k++)
+        {
+            // Measurements start at 1 K: a range from 0 K is sampled from there.
+            at = Math.Max(range.Minimum + ((range.Maximum - range.Minimum) * k / 16.0), AcceptedRanges.MinTemperature);
+
+            cp = model.HeatCapacity(at);
+            if (!double.IsFinite(cp) || Math.Abs(cp) > AcceptedRanges.MaxHeatCapacity)
+            {
+                return false;
+            }
+        }
+
+        at = 0.0;
+        cp = 0.0;
+        return true;
     }
 
     private static string CountHint(string form) => form switch
@@ -290,7 +323,7 @@ public static class HeatCapacityTableReader
         }
 
         string hint = text.Contains(',', StringComparison.Ordinal) ? "use a dot as the decimal separator" : "write a finite number such as 1000 or -8.671914 or 1.5e-3";
-        string shown = text.Length == 0 ? "an empty field" : $"'{text}'";
+        string shown = text.Length == 0 ? "an empty field" : $"'{DiagnosticText.Excerpt(text)}'";
         diagnostics.Add(Diagnostic.Error("heat-capacity-bad-number", cells.Location(column, name), $"{name} is {shown}, not a number", hint));
         return null;
     }
@@ -322,7 +355,7 @@ public static class HeatCapacityTableReader
 
                 ok = false;
                 bool gap = start > end;
-                string message = string.Create(CultureInfo.InvariantCulture, $"the ranges of '{group.Key}' {(gap ? "leave a gap" : "overlap")}: {previous.Model.ValidRange} (line {previous.SpeciesLocation.Line}) and {current.Model.ValidRange} (line {current.SpeciesLocation.Line})");
+                string message = string.Create(CultureInfo.InvariantCulture, $"the ranges of '{DiagnosticText.Excerpt(group.Key)}' {(gap ? "leave a gap" : "overlap")}: {previous.Model.ValidRange} (line {previous.SpeciesLocation.Line}) and {current.Model.ValidRange} (line {current.SpeciesLocation.Line})");
                 diagnostics.Add(Diagnostic.Error(gap ? "heat-capacity-range-gap" : "heat-capacity-range-overlap", current.TMinLocation, message, "each range must start where the previous one ends"));
             }
 
@@ -353,7 +386,7 @@ public static class HeatCapacityTableReader
             diagnostics.Add(Diagnostic.Warning(
                 "heat-capacity-discontinuity",
                 upper.TMinLocation,
-                string.Create(CultureInfo.InvariantCulture, $"Cp of '{upper.Species}' jumps from {below:F3} to {above:F3} J/(mol K) at {joint:G} K"),
+                string.Create(CultureInfo.InvariantCulture, $"Cp of '{DiagnosticText.Excerpt(upper.Species)}' jumps from {below:F3} to {above:F3} J/(mol K) at {joint:G} K"),
                 "check the coefficients of both ranges (order, signs, exponents)"));
         }
     }
@@ -369,7 +402,7 @@ public static class HeatCapacityTableReader
                 diagnostics.Add(Diagnostic.Warning(
                     "heat-capacity-nonpositive-cp",
                     row.TMinLocation,
-                    string.Create(CultureInfo.InvariantCulture, $"Cp of '{row.Species}' is not positive at {t:G} K ({row.Model.HeatCapacity(t):G4} J/(mol K))"),
+                    string.Create(CultureInfo.InvariantCulture, $"Cp of '{DiagnosticText.Excerpt(row.Species)}' is not positive at {t:G} K ({row.Model.HeatCapacity(t):G4} J/(mol K))"),
                     "check the coefficients (order, signs, exponents)"));
                 return;
             }

@@ -142,4 +142,24 @@ public sealed class CheckCommandTests : IDisposable
         Assert.Contains(option, run.Error, StringComparison.Ordinal);
         Assert.Equal("", run.Out);
     }
+
+    [Fact]
+    public void Check_WithoutCycles_SaysNothingCanBeChecked()
+    {
+        // Given two measurements that share no route (no cycle: nothing is measured twice)
+        using var folder = new TempFolder();
+        string file = folder.Write("lab.csv", "id,equation,property,value,uncertainty\nm1,C(graphite) + O2(g) -> CO2(g),dH,-393.51,0.13\nm2,CO(g) + 1/2 O2(g) -> CO2(g),dH,-282.98,0.20\n");
+
+        // When it is checked, as text and as JSON
+        CliRun run = CliRun.Of("check", file);
+        CliRun json = CliRun.Of("check", file, "--json");
+
+        // Then it does not claim agreement: it says nothing could be checked
+        Assert.Equal(0, run.ExitCode);
+        Assert.DoesNotContain("agree", run.Out, StringComparison.Ordinal);
+        Assert.Contains("Nothing can be checked", run.Out, StringComparison.Ordinal);
+        Assert.Contains("Result: nothing could be checked", run.Out, StringComparison.Ordinal);
+        using System.Text.Json.JsonDocument document = System.Text.Json.JsonDocument.Parse(json.Out);
+        Assert.False(document.RootElement.GetProperty("checkable").GetBoolean());
+    }
 }

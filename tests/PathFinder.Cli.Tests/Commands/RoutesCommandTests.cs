@@ -21,6 +21,21 @@ public sealed class RoutesCommandTests : IDisposable
         + "H1,2 H2(g) + O2(g) -> 2 H2O(l),dH,-571.66,0.08,kJ/mol,,table\n");
 
     [Fact]
+    public void Routes_RefuseATargetNestedThousandsOfLevelsDeepWithExitTwo()
+    {
+        // Given a target whose formula nests brackets 6,000 levels deep (it once overflowed the stack: exit 134)
+        string target = new string('(', 6000) + "CO" + new string(')', 6000) + "(g)";
+
+        // When routes are asked for
+        CliRun run = CliRun.Of("routes", Handbook(), "--target", target);
+
+        // Then the target is refused as bad input, with the nesting limit named
+        Assert.Equal(ExitCodes.InvalidInput, run.ExitCode);
+        Assert.Contains("32 levels", run.Error, StringComparison.Ordinal);
+        Assert.DoesNotContain("   at ", run.Error, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Routes_MarkRoutesThroughASuspect_UnlessTheDataAreTakenAsGiven()
     {
         // Given the demo lab, whose water-gas shift value C03 is a suspect (the other, E04, is a ΔG and on no ΔH route)

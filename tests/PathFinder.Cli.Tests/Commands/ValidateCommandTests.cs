@@ -200,4 +200,47 @@ public sealed class ValidateCommandTests : IDisposable
             + "m3,CO(g),dH,-110.53,0.17,kJ/mol,,group A\n");
         return _folder.Write("sources.csv", sources);
     }
+
+    [Fact]
+    public void Validate_RefusesADeviceWithExitTwo()
+    {
+        // Given /dev/zero, which never ends (it once made validate exit 3)
+        CliRun run = CliRun.Of("validate", "/dev/zero");
+
+        // Then it is refused as input, located, with exit 2
+        Assert.Equal(2, run.ExitCode);
+        Assert.Contains("/dev/zero: error not-a-regular-file", run.Out, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Validate_DoesNotHangOnAFifoInTheFolderAndNamesIt()
+    {
+        // Given a network folder with a FIFO named like a data file
+        string network = Path.Combine(_folder.Path, "net");
+        Directory.CreateDirectory(network);
+        File.WriteAllText(Path.Combine(network, "lab.csv"), "id,equation,property,value,uncertainty\nm1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2\n");
+        SpecialFiles.Fifo(Path.Combine(network, "pipe.csv"));
+
+        // When it is validated (reading the FIFO would block forever)
+        CliRun run = CliRun.Of("validate", network);
+
+        // Then the data are valid and the FIFO is named in a note
+        Assert.Equal(0, run.ExitCode);
+        Assert.Contains("1 note(s) on entries not read", run.Out, StringComparison.Ordinal);
+        Assert.Contains("pipe.csv: note skipped-file: not read: not a regular file", run.Out, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Solve_ShowsThatARowAmongConventionalZerosIsNotUsed()
+    {
+        // Given a valid network with a row that only checks the hydrogen-electrode convention
+        string file = _folder.Write("lab.csv", "id,equation,property,value,uncertainty\nm1,C(graphite) + O2(g) -> CO2(g),dH,-393.51,0.13\nm2,H+(aq) + e- -> 1/2 H2(g),dH,0.0,0.1\n");
+
+        // When it is solved
+        CliRun run = CliRun.Of("solve", file);
+
+        // Then the solve succeeds and says on standard error that m2 is not used
+        Assert.Equal(0, run.ExitCode);
+        Assert.Contains($"{file}:3:4: warning conventional-only: 'm2'", run.Error, StringComparison.Ordinal);
+    }
 }

@@ -148,4 +148,35 @@ public sealed class FormulaParserTests
 
     private static IEnumerable<string> Composition(string expected) =>
         expected.Split(' ').OrderBy(part => part[..part.IndexOf(':', StringComparison.Ordinal)], StringComparer.Ordinal);
+
+    [Theory]
+    [InlineData(FormulaParser.MaxNesting)]
+    [InlineData(2)]
+    public void Parse_ReadsBracketsNestedUpToTheLimit(int depth)
+    {
+        // Given H nested in the given number of bracket levels
+        string text = new string('(', depth) + "H" + new string(')', depth) + "2";
+
+        // When it is read, then it is 2 H
+        Formula formula = FormulaParser.Parse(text).Value;
+        Assert.Equal(2, (int)formula.CountOf("H").Numerator);
+    }
+
+    [Theory]
+    [InlineData(FormulaParser.MaxNesting + 1)]
+    [InlineData(6000)]
+    [InlineData(100_000)]
+    public void Parse_RefusesNestingBeyondTheLimitAtTheFirstBracketTooDeep(int depth)
+    {
+        // Given brackets nested deeper than the limit (6,000 levels once overflowed the stack)
+        string text = new string('[', depth) + "H" + new string(']', depth);
+
+        // When it is read
+        ParseResult<Formula> result = FormulaParser.Parse(text);
+
+        // Then it is refused at the first bracket beyond the limit, without a crash
+        Assert.False(result.Success);
+        Assert.Equal(("bad-formula", FormulaParser.MaxNesting), (result.Failure.Code, result.Failure.Offset));
+        Assert.Contains("32 levels", result.Failure.Message, StringComparison.Ordinal);
+    }
 }

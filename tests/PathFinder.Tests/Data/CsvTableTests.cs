@@ -34,10 +34,26 @@ public sealed class CsvTableTests
 
         // Then one located error names the field, and only the sound row is kept
         Diagnostic error = Assert.Single(diagnostics);
-        Assert.Equal(("bad-csv", 2), (error.Code, error.Location.Line));
+        Assert.Equal(("bad-csv", 2, 6), (error.Code, error.Location.Line, error.Location.Column));
         Assert.Contains("stray quote", error.Message, StringComparison.Ordinal);
         CsvRow row = Assert.Single(table.Rows);
         Assert.Equal("m2", row.Fields[0]);
+    }
+
+    [Theory]
+    [InlineData("id,note,value\nm1,fine,1.0\nm2,\"never closed,2.5\nm3,lost,3.0\n", 3, 4, 2)]
+    [InlineData("id,note,value\nm1,fine,1.0\nm2,x,  \"2.5", 3, 8, 1)]
+    [InlineData("id,note,value\r\nm1,\"a\"\"b\",1\r\nm2,\"open\r\n\r\nm3,x,3\r\n", 3, 4, 3)]
+    public void Parse_PointsAnUnclosedQuoteAtItsOpeningLineAndColumn(string text, int line, int column, int lines)
+    {
+        // Given a field whose opening quote is never closed (it used to be reported at the end of the file, without a column)
+        List<Diagnostic> diagnostics = [];
+        Parse(text, diagnostics);
+
+        // Then the error points at the opening quote and says how much of the file it swallowed
+        Diagnostic error = Assert.Single(diagnostics);
+        Assert.Equal(("bad-csv", line, column), (error.Code, error.Location.Line, error.Location.Column));
+        Assert.Equal($"the quote opened here is never closed: the rest of the file ({lines} line(s)) reads as one field", error.Message);
     }
 
     [Fact]

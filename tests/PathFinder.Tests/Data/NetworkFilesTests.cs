@@ -56,4 +56,35 @@ public sealed class NetworkFilesTests : IDisposable
     {
         Assert.Equal(expected, NetworkFiles.IsAuxiliary(name));
     }
+
+    [Fact]
+    public void MeasurementFiles_ReadsCsvInAnyLetterCaseAndNamesEveryOtherEntryWithItsReason()
+    {
+        // Given a folder with an upper-case .CSV, lock files, a subfolder, a FIFO, a text file and misnamed tables
+        _folder.Write("a.csv", "");
+        _folder.Write("data.CSV", "");
+        _folder.Write("~$data.csv", "");
+        _folder.Write(".~lock.data.csv#", "");
+        _folder.Write("notes.txt", "");
+        _folder.Write("Species.CSV", "");
+        _folder.Write("lab.species.csv", "");
+        _folder.Write("curation.csv", "");
+        Directory.CreateDirectory(Path.Combine(_folder.Path, "old"));
+        SpecialFiles.Fifo(Path.Combine(_folder.Path, "pipe.csv"));
+
+        // When the measurement files are listed
+        IReadOnlyList<string> files = NetworkFiles.MeasurementFiles(_folder.Path, out IReadOnlyList<SkippedEntry> skipped);
+
+        // Then both CSV files are read, and every other entry but the curation file is named with its reason
+        Assert.Equal(["a.csv", "data.CSV"], files.Select(Path.GetFileName));
+        var reasons = skipped.ToDictionary(entry => Path.GetFileName(entry.Path), entry => entry.Reason);
+        Assert.Equal([".~lock.data.csv#", "Species.CSV", "lab.species.csv", "notes.txt", "old", "pipe.csv", "~$data.csv"], reasons.Keys.Order(StringComparer.Ordinal));
+        Assert.Contains("lock file", reasons["~$data.csv"], StringComparison.Ordinal);
+        Assert.Contains("lock file", reasons[".~lock.data.csv#"], StringComparison.Ordinal);
+        Assert.Contains("subfolder", reasons["old"], StringComparison.Ordinal);
+        Assert.Contains("not a regular file", reasons["pipe.csv"], StringComparison.Ordinal);
+        Assert.Contains("letter case", reasons["Species.CSV"], StringComparison.Ordinal);
+        Assert.Contains("single-file network", reasons["lab.species.csv"], StringComparison.Ordinal);
+        Assert.Equal("not a .csv file", reasons["notes.txt"]);
+    }
 }

@@ -1,4 +1,5 @@
 using System.Text;
+using PathFinder.Chemistry;
 using PathFinder.Data;
 using PathFinder.Diagnostics;
 using PathFinder.Quantities;
@@ -42,6 +43,19 @@ public sealed class NetworkReaderTests : IDisposable
     [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2,kJ/mol,-5,lab", "bad-temperature", "-5")]
     [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2,kJ/mol,0,lab", "bad-temperature", "0,lab")]
     [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2,kJ/mol,20000,lab", "bad-temperature", "20000")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2,kJ/mol,1e-300,lab", "bad-temperature", "1e-300")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2,kJ/mol,0.5,lab", "bad-temperature", "0.5")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,1e300,0.2,kcal/mol,,lab", "value-out-of-range", "1e300")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,1e308,0.2,kJ/mol,,lab", "value-out-of-range", "1e308")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-2e8,0.2,J/mol,,lab", "value-out-of-range", "-2e8")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-2000,0.2,eV,,lab", "value-out-of-range", "-2000")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),lnK,2000,0.2,,,lab", "value-out-of-range", "2000")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),log10K,500,0.2,,,lab", "value-out-of-range", "500")]
+    [InlineData("m1,CO2(g),S,2e5,1,J/(mol·K),,lab", "value-out-of-range", "2e5")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,1e-300,kJ/mol,,lab", "uncertainty-out-of-range", "1e-300")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,1e-7,kJ/mol,,lab", "uncertainty-out-of-range", "1e-7")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-90000,5e-5,kJ/mol,,lab", "uncertainty-out-of-range", "5e-5")]
+    [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,1e6,kJ/mol,,lab", "uncertainty-out-of-range", "1e6")]
     [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dX,-283.0,0.2,kJ/mol,,lab", "unknown-property", "dX")]
     [InlineData(",CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2,kJ/mol,,lab", "missing-id", "")]
     [InlineData("m1,,dH,-283.0,0.2,kJ/mol,,lab", "missing-equation", ",dH")]
@@ -63,6 +77,149 @@ public sealed class NetworkReaderTests : IDisposable
         Assert.Equal(ColumnOf(row, marker), diagnostic.Location.Column);
         Assert.Empty(result.Network.Measurements);
         Assert.True(result.HasErrors);
+    }
+
+    [Fact]
+    public void Read_RefusesAFormulaNestedThousandsOfLevelsDeepAtItsField()
+    {
+        // Given a row whose formula nests brackets 6,000 levels deep (it once overflowed the stack)
+        string formula = new string('(', 6000) + "H" + new string(')', 6000) + "2";
+        string file = _folder.Write("lab.csv", Header + "\nm1,H2(g) -> " + formula + "(g),dH,0.5,0.2,kJ/mol,,lab\n");
+
+        // When it is read
+        Diagnostic diagnostic = Assert.Single(NetworkReader.Read(file).Diagnostics);
+
+        // Then one located error points at the first bracket too deep
+        Assert.Equal(("bad-formula", 2), (diagnostic.Code, diagnostic.Location.Line));
+        Assert.Equal("m1,H2(g) -> ".Length + 1 + FormulaParser.MaxNesting, diagnostic.Location.Column);
+    }
+
+    [Theory]
+    [InlineData("dH,-99999,1e-4,kJ/mol,")]
+    [InlineData("dH,-283.0,1e-6,kJ/mol,")]
+    [InlineData("dH,-67.6,0.05,kcal/mol,")]
+    [InlineData("dH,-2.93,0.001,eV,")]
+    [InlineData("dH,-283.0,0.2,kJ/mol,1")]
+    [InlineData("dH,-283.0,0.2,kJ/mol,10000")]
+    [InlineData("lnK,999,0.5,,")]
+    [InlineData("log10K,-434,0.5,1,")]
+    public void Read_AcceptsMagnitudesAtTheEdgesOfTheRanges(string fields)
+    {
+        // Given one row near an edge of the accepted ranges (README, data format)
+        string file = _folder.Write("lab.csv", Header + "\nm1,CO(g) + 1/2 O2(g) -> CO2(g)," + fields + ",lab\n");
+
+        // When it is read, then it is used without an error
+        NetworkReadResult result = NetworkReader.Read(file);
+        Assert.Empty(result.Errors);
+        Assert.Single(result.Network.Measurements);
+    }
+
+    [Fact]
+    public void Read_SaysTheConvertedValueWhenAUnitMakesItTooLarge()
+    {
+        string file = _folder.Write("lab.csv", Header + "\nm1,CO(g) + 1/2 O2(g) -> CO2(g),dH,1e300,0.2,kcal/mol,,lab\n");
+
+        Diagnostic diagnostic = Assert.Single(NetworkReader.Read(file).Diagnostics);
+
+        Assert.Equal("the ΔH value 1e+300 kcal/mol (4.184e+300 kJ/mol) is beyond the accepted ±100000 kJ/mol", diagnostic.Message);
+        Assert.Contains("check the unit and the exponent", diagnostic.Hint, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Read_WarnsOnTheRowThatARowAmongConventionalZerosIsNotUsed()
+    {
+        // Given the hydrogen-electrode convention measured as a row beside a real one
+        string file = _folder.Write("lab.csv", Header + "\n" + GoodRow + "\nm2,H+(aq) + e- -> 1/2 H2(g),dH,0.0,0.1,kJ/mol,,lab\n");
+
+        // When it is read
+        NetworkReadResult result = NetworkReader.Read(file);
+
+        // Then the row is valid, but a warning on it says it only checks a convention and is used by no analysis
+        Assert.False(result.HasErrors);
+        Diagnostic warning = Assert.Single(result.UnusedRows);
+        Assert.Equal(("conventional-only", Severity.Warning, 3, 4), (warning.Code, warning.Severity, warning.Location.Line, warning.Location.Column));
+        Assert.Contains("not used by any analysis", warning.Message, StringComparison.Ordinal);
+        Assert.Contains(result.Warnings, diagnostic => diagnostic.Code == "conventional-only");
+    }
+
+    [Fact]
+    public void Read_RefusesAHeaderNamingAColumnTwiceAtTheSecond()
+    {
+        // Given a header with 'value' twice (the first column used to win silently)
+        string file = _folder.Write("lab.csv", "id,equation,property,value,uncertainty,Value\nm1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2,-67.6\n");
+
+        // When it is read
+        Diagnostic error = Assert.Single(NetworkReader.Read(file).Diagnostics);
+
+        // Then one error at the second 'value'
+        Assert.Equal(("duplicate-column", Severity.Error, 1, 40), (error.Code, error.Severity, error.Location.Line, error.Location.Column));
+        Assert.Contains("'Value' appears twice (first at column 22)", error.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Read_AcceptsSeveralBlankHeaderNames()
+    {
+        // Given a spreadsheet export with trailing empty columns
+        string file = _folder.Write("lab.csv", Header + ",,\n" + GoodRow + ",,\n");
+
+        // When it is read, then blank names are no duplicates
+        Assert.DoesNotContain(NetworkReader.Read(file).Diagnostics, diagnostic => diagnostic.Code == "duplicate-column");
+    }
+
+    [Fact]
+    public void Read_NamesSkippedEntriesOfAFolderInNotesAndReadsAnUpperCaseExtension()
+    {
+        // Given a folder whose data are in DATA.CSV, with a spreadsheet lock file and a subfolder beside
+        _folder.Write("DATA.CSV", Header + "\n" + GoodRow + "\n");
+        _folder.Write("~$DATA.CSV", "\u0001binary lock\n");
+        Directory.CreateDirectory(Path.Combine(_folder.Path, "archive"));
+
+        // When it is read
+        NetworkReadResult result = NetworkReader.Read(_folder.Path);
+
+        // Then the data are used, the folder stays valid, and the two entries are named in notes
+        Assert.False(result.HasErrors);
+        Assert.Single(result.Network.Measurements);
+        Assert.Equal(["archive", "~$DATA.CSV"], result.Notes.Select(note => Path.GetFileName(note.Location.File)));
+        Assert.All(result.Notes, note => Assert.Equal("skipped-file", note.Code));
+        Assert.DoesNotContain(result.Warnings, warning => warning.Code == "skipped-file");
+    }
+
+    [Fact]
+    public void Read_RefusesAFifoGivenAsTheNetworkWithoutBlocking()
+    {
+        string fifo = SpecialFiles.Fifo(Path.Combine(_folder.Path, "pipe.csv"));
+
+        Diagnostic error = Assert.Single(NetworkReader.Read(fifo).Diagnostics);
+
+        Assert.Equal(("not-a-regular-file", Severity.Error), (error.Code, error.Severity));
+    }
+
+    [Theory]
+    [InlineData("property")]
+    [InlineData("unit")]
+    [InlineData("value")]
+    [InlineData("equation")]
+    public void Read_CutsA100000CharacterValueIn80CharacterMessages(string column)
+    {
+        // Given one field of 100,000 characters (its text used to be echoed in full)
+        char letter = column == "equation" ? 'H' : 'x';
+        string huge = new string(letter, 100_000);
+        string row = column switch
+        {
+            "property" => $"m1,CO(g) + 1/2 O2(g) -> CO2(g),{huge},-283.0,0.2,kJ/mol,,lab",
+            "unit" => $"m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2,{huge},,lab",
+            "value" => $"m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,{huge},0.2,kJ/mol,,lab",
+            _ => $"m1,CO(g) + 1/2 O2(g) -> {huge},dH,-283.0,0.2,kJ/mol,,lab",
+        };
+        string file = _folder.Write("lab.csv", Header + "\n" + row + "\n");
+
+        // When it is read
+        Diagnostic diagnostic = Assert.Single(NetworkReader.Read(file).Errors);
+
+        // Then the message quotes at most 80 characters of it, ending in an ellipsis
+        Assert.True(diagnostic.Message.Length + diagnostic.Hint.Length < 500, $"{diagnostic.Message.Length} + {diagnostic.Hint.Length} characters");
+        Assert.Contains(new string(letter, 79) + "…", diagnostic.Message + diagnostic.Hint, StringComparison.Ordinal);
     }
 
     [Fact]

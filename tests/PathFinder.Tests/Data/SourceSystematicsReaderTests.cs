@@ -121,6 +121,8 @@ public sealed class SourceSystematicsReaderTests : IDisposable
     [InlineData("group A,,kJ/mol,", "missing-number", ",kJ/mol", "the systematic is empty")]
     [InlineData("group A,0,kJ/mol,", "bad-systematic", "0,kJ", "the systematic must be positive, not 0")]
     [InlineData("group A,-0.3,kJ/mol,", "bad-systematic", "-0.3", "the systematic must be positive, not -0.3")]
+    [InlineData("group A,1e-300,kJ/mol,", "bad-systematic", "1e-300", "the systematic 1e-300 kJ/mol is outside the accepted 1e-06 to 100000 kJ/mol")]
+    [InlineData("group A,1e300,kcal/mol,", "bad-systematic", "1e300", "the systematic 1e+300 kcal/mol is outside the accepted 1e-06 to 100000 kJ/mol")]
     [InlineData("group A,0.3,kJ/fortnight,", "unknown-unit", "kJ/fortnight", "unknown unit 'kJ/fortnight'")]
     [InlineData("group A,0.3,1,", "wrong-unit", ",1,", "a systematic cannot be a pure number (unit 1)")]
     [InlineData("group A,0.3,,calibration", "missing-unit", ",calibration", "the unit is empty")]

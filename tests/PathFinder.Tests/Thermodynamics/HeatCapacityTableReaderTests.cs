@@ -218,4 +218,23 @@ public class HeatCapacityTableReaderTests
         Assert.Equal(300.5, german.Values[2]);
         Assert.Contains("decimal separator", Assert.Single(german.Diagnostics), StringComparison.Ordinal);
     }
+
+    [Theory]
+    [InlineData("A,constant,300,1000,1e300", "heat-capacity-out-of-range", 21)]
+    [InlineData("A,nasa7,300,1000,3.5,1e200,0,0,0,0,0", "heat-capacity-out-of-range", 18)]
+    [InlineData("A,shomate,0,1000,29,0,0,0,1", "heat-capacity-out-of-range", 18)]
+    [InlineData("A,constant,300,1e6,29", "heat-capacity-bad-range", 16)]
+    public void Read_RefusesNonPhysicalHeatCapacitiesAtTheRow(string row, string code, int column)
+    {
+        // Given a range whose Cp is beyond ±1e5 J/(mol·K) somewhere (E/t² at 1 K), or ends beyond 20000 K
+        string text = "species,form,tmin,tmax,c1,c2,c3,c4,c5,c6,c7\n" + row + "\n";
+
+        // When read
+        HeatCapacityTable table = HeatCapacityTableReader.Read(new StringReader(text), "heat-capacity.csv");
+
+        // Then one located error, and the species is not used
+        Diagnostic error = Assert.Single(table.Diagnostics);
+        Assert.Equal((Severity.Error, code, 2, column), (error.Severity, error.Code, error.Location.Line, error.Location.Column));
+        Assert.Empty(table.Entries);
+    }
 }
