@@ -480,7 +480,7 @@ public sealed class ExplorerViewModel
         string merged = $"{saved}; the file had changed since it was read: {result.DecisionsByOthers.Count} decision(s) written there meanwhile are kept";
         return result.Conflicts.Count == 0
             ? merged
-            : $"{merged}; CONFLICT on {string.Join(", ", result.Conflicts)}: decided differently there too, both rows are in the file and yours (the later) is in force; review on the curation screen (F7)";
+            : $"{merged}; CONFLICT on {string.Join(", ", result.Conflicts)}: decided differently there too, both rows are in the file and yours (the later) is in force, review them on the curation screen (F7)";
     }
 
     private void WriteRecovery()

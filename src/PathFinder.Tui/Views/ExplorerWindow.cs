@@ -593,7 +593,7 @@ internal sealed class ExplorerWindow : Window
         RefreshConsistency();
         SetRows(_curation, CurationLogViewModel.Headers, _vm.CurationLog.Rows, (row, _) => _vm.CurationLog.Cells(row), reuse: false);
         string unapplied = _vm.UnappliedCurationRows.Count == 0 ? "" : $"  {_vm.UnappliedCurationRows.Count} row(s) of the file NOT APPLIED (kept as written; listed first).";
-        string problems = _vm.CurationDiagnostics.Count == 0 ? "" : $"  {_vm.CurationDiagnostics.Count} problem(s) in the file: {_vm.CurationDiagnostics[0]}";
+        string problems = _vm.CurationDiagnostics.Count == 0 ? "" : $"  {_vm.CurationDiagnostics.Count} problem(s) in the file (`pathfinder validate` lists each with line and column).";
         _curationInfo.Text = $"Decisions file: {_vm.CurationPath} ({(_vm.HasUnsavedChanges ? "UNSAVED changes, Ctrl+S saves" : "saved")})\n" +
             $"{_vm.Curated.Excluded.Count} measurement(s) excluded now.{unapplied}{problems}";
         SetNeedsDraw();
