@@ -197,7 +197,8 @@ internal sealed class ExplorerWindow : Window
         // characters (arriving as single keys) took minutes; the field refuses keys past the cap at once instead.
         _target.KeyDown += (_, key) =>
         {
-            if (key.AsRune.Value >= ' ' && !key.IsCtrl && !key.IsAlt && _target.Text.Length >= TargetViewModel.MaxInputLength)
+            // Only keys that insert a character are refused; Backspace, Delete and the arrows keep working at the cap.
+            if (key.AsRune.Value != 0 && !System.Text.Rune.IsControl(key.AsRune) && !key.IsCtrl && !key.IsAlt && _target.Text.Length >= TargetViewModel.MaxInputLength)
             {
                 key.Handled = true;
                 _targetRefused++;
