@@ -31,18 +31,33 @@ public sealed class ValidateCommand
         ArgumentNullException.ThrowIfNull(context);
         NetworkReadResult result = NetworkReader.Read(path);
         NetworkSummary summary = NetworkSummary.Of(result.Network);
-        int exitCode = result.HasErrors ? ExitCodes.InvalidInput : ExitCodes.Success;
+        // The curation file is read as every analysis command reads it, so its problems show here first.
+        CurationLoading curation = CurationLoading.Of(path, result.Network);
+        Diagnostic[] diagnostics = [.. result.Diagnostics, .. curation.Diagnostics];
+        bool hasErrors = result.HasErrors || curation.File.HasErrors;
+        int errors = diagnostics.Count(diagnostic => diagnostic.Severity == Severity.Error);
+        int warnings = diagnostics.Count(diagnostic => diagnostic.Severity == Severity.Warning);
+        int notes = diagnostics.Count(diagnostic => diagnostic.Severity == Severity.Note);
+        int exitCode = hasErrors ? ExitCodes.InvalidInput : ExitCodes.Success;
         if (json)
         {
             Json.Write(context.Out, new
             {
                 network = path,
-                valid = !result.HasErrors,
+                valid = !hasErrors,
                 files = result.Files,
                 speciesFile = result.SpeciesFile,
                 heatCapacityFile = result.HeatCapacityFile,
                 heatCapacitySpecies = result.HeatCapacities.Keys.Select(species => species.Name),
                 sourcesFile = result.SourcesFile,
+                curationFile = curation.Exists ? curation.Path : null,
+                curation = new
+                {
+                    decisions = curation.File.Set.Decisions.Count,
+                    excluded = curation.Applied.Excluded.Select(item => item.Measurement.Id),
+                    notApplied = curation.File.Unapplied.Count,
+                    unknownIds = curation.Applied.UnknownIds,
+                },
                 sourceSystematics = result.SourceSystematics.Select(declared => new
                 {
                     source = declared.Source,
@@ -58,10 +73,10 @@ public sealed class ValidateCommand
                     elements = summary.Elements,
                     referenceStates = summary.ReferenceStatesUsed.Select(species => species.Name),
                 },
-                errors = result.Errors.Count(),
-                warnings = result.Warnings.Count(),
-                notes = result.Notes.Count(),
-                diagnostics = result.Diagnostics.Select(Json.Of),
+                errors,
+                warnings,
+                notes,
+                diagnostics = diagnostics.Select(Json.Of),
             });
             return exitCode;
         }
@@ -83,24 +98,26 @@ public sealed class ValidateCommand
             output.WriteLine($"  systematics    {result.SourcesFile} ({result.SourceSystematics.Count} source(s) declared)");
         }
 
+        if (curation.Exists)
+        {
+            output.WriteLine($"  curation       {curation.Path}: {curation.Summary}");
+        }
+
         output.WriteLine($"  species        {summary.SpeciesCount}");
         output.WriteLine($"  sources        {summary.MeasurementsBySource.Count}: {string.Join(", ", summary.MeasurementsBySource.Select(pair => $"{pair.Key} ({pair.Value})"))}");
         output.WriteLine($"  properties     {string.Join(", ", summary.MeasurementsByProperty.Select(pair => $"{pair.Key.Code()} ({pair.Value})"))}");
         output.WriteLine($"  elements       {string.Join(", ", summary.Elements)}");
         output.WriteLine($"  reference      {string.Join(", ", summary.ReferenceStatesUsed.Select(species => species.Name))}");
-        int errors = result.Errors.Count();
-        int warnings = result.Warnings.Count();
         output.WriteLine();
-        int notes = result.Notes.Count();
         string noteCount = notes > 0 ? string.Create(CultureInfo.InvariantCulture, $", {notes} note(s) on entries not read") : "";
         output.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{errors} error(s), {warnings} warning(s){noteCount}"));
-        foreach (Diagnostic diagnostic in result.Diagnostics)
+        foreach (Diagnostic diagnostic in diagnostics)
         {
             output.WriteLine($"  {diagnostic}");
         }
 
         output.WriteLine();
-        output.WriteLine(result.HasErrors
+        output.WriteLine(hasErrors
             ? "Result: INVALID. Rows with errors are left out of every analysis until fixed (exit code 2)."
             : warnings > 0 ? "Result: valid, with warnings." : "Result: valid.");
         return exitCode;

@@ -23,29 +23,23 @@ public sealed record AnalysisSession(NetworkReadResult Read, ReactionNetwork Net
             return null;
         }
 
-        string curationPath = CurationFile.PathFor(path);
-        CurationReadResult curation = CurationFile.Read(curationPath);
-        if (curation.HasErrors)
+        CurationLoading curation = CurationLoading.Of(path, read.Network);
+        foreach (Diagnostic diagnostic in curation.Diagnostics)
         {
-            foreach (Diagnostic diagnostic in curation.Diagnostics)
-            {
-                context.Error.WriteLine(diagnostic.ToString());
-            }
+            context.Error.WriteLine(diagnostic.ToString());
+        }
 
-            context.Error.WriteLine("the curation file has errors: nothing was computed. Fix it, or move it away to analyse without curation.");
+        if (curation.File.HasErrors)
+        {
+            context.Error.WriteLine("the curation file cannot be read: nothing was computed. Fix it, or move it away to analyse without curation.");
             exitCode = ExitCodes.InvalidInput;
             return null;
         }
 
-        CurationResult applied = curation.Set.Apply(read.Network);
+        CurationResult applied = curation.Applied;
         if (applied.Excluded.Count > 0)
         {
-            context.Error.WriteLine($"note: {applied.Excluded.Count} measurement(s) excluded by {curationPath}: {string.Join(", ", applied.Excluded.Select(item => item.Measurement.Id))}");
-        }
-
-        foreach (string unknown in applied.UnknownIds)
-        {
-            context.Error.WriteLine($"warning: {curationPath} names measurement '{unknown}', which is not in the data");
+            context.Error.WriteLine($"note: {applied.Excluded.Count} measurement(s) excluded by {curation.Path}: {string.Join(", ", applied.Excluded.Select(item => item.Measurement.Id))}");
         }
 
         return new AnalysisSession(read, applied.Network, applied.Excluded);

@@ -23,6 +23,7 @@ public sealed class ExplorerViewModel
     private CancellationTokenSource? _analysisCancel;
     private int _analysisVersion;
     private string _message = "";
+    private CurationReadResult _curationFile;
 
     /// <summary>Loads the network and its curation file; the first analysis starts at once.</summary>
     public ExplorerViewModel(string networkPath, NetworkAnalyzer analyzer, IUiDispatcher dispatcher, Func<DateOnly>? today = null)
@@ -42,11 +43,18 @@ public sealed class ExplorerViewModel
         NetworkPath = networkPath;
         Data = data;
         CurationPath = CurationFile.PathFor(networkPath);
-        CurationReadResult curation = CurationFile.Read(CurationPath);
-        CurationDiagnostics = curation.Diagnostics;
-        SavedCuration = curation.Set;
-        Curation = curation.Set;
+        RecoveryPath = CurationRecovery.PathFor(CurationPath);
+        _curationFile = CurationFile.Read(CurationPath);
+        SavedCuration = _curationFile.Set;
+        Curation = _curationFile.Set;
         Curated = Curation.Apply(Data.Network);
+        CurationReadResult recovered = CurationRecovery.Read(RecoveryPath, SavedCuration);
+        RecoveredDecisions = recovered.Set.Decisions;
+        if (RecoveredDecisions.Count == 0 && !recovered.HasErrors)
+        {
+            // Nothing left to offer (or everything in it was saved before the session ended).
+            TryDeleteRecovery();
+        }
         Measurements = new MeasurementsViewModel(this);
         Species = new SpeciesViewModel(this);
         Sources = new SourcesViewModel(this);
@@ -69,8 +77,20 @@ public sealed class ExplorerViewModel
     /// <summary>The data as read, with every measurement (excluded ones too) and the data diagnostics.</summary>
     public NetworkReadResult Data { get; }
 
-    /// <summary>Problems found in the curation file when it was read.</summary>
-    public IReadOnlyList<Diagnostic> CurationDiagnostics { get; }
+    /// <summary>Where unsaved decisions are kept until they are saved or discarded (<see cref="CurationRecovery"/>).</summary>
+    public string RecoveryPath { get; }
+
+    /// <summary>Problems found in the curation file when it was last read or saved.</summary>
+    public IReadOnlyList<Diagnostic> CurationDiagnostics => _curationFile.Diagnostics;
+
+    /// <summary>Rows of the curation file that are not usable decisions: kept in the file as written, shown, not applied.</summary>
+    public IReadOnlyList<UnappliedCurationRow> UnappliedCurationRows => _curationFile.Unapplied;
+
+    /// <summary>Unsaved decisions left by an earlier session that ended without saving, offered until restored or discarded.</summary>
+    public IReadOnlyList<CurationDecision> RecoveredDecisions { get; private set; }
+
+    /// <summary>Ids decided in this session that someone else decided differently in the file meanwhile (from the last save).</summary>
+    public IReadOnlyList<string> SaveConflicts { get; private set; } = [];
 
     /// <summary>The decisions as last saved (or read).</summary>
     public CurationSet SavedCuration { get; private set; }
@@ -165,21 +185,74 @@ public sealed class ExplorerViewModel
         return "";
     }
 
-    /// <summary>Writes the decisions to <see cref="CurationPath"/> (atomically).</summary>
+    /// <summary>Adds the unsaved decisions to <see cref="CurationPath"/> (atomically), keeping whatever the file holds now.</summary>
+    /// <remarks>
+    /// When someone else wrote to the file since it was read, their content is kept and this session's decisions are added
+    /// after it (<see cref="CurationFile.Save"/>); the explorer then shows the merged file. Ids decided on both sides
+    /// differently are listed in <see cref="SaveConflicts"/> and in the message: both rows are in the file, this session's
+    /// in force.
+    /// </remarks>
     /// <returns>A one-line message saying what happened.</returns>
     public string Save()
     {
+        CurationDecision[] added = Curation.Decisions.Skip(SavedCuration.Decisions.Count).ToArray();
+        CurationSaveResult result;
         try
         {
-            CurationFile.Write(CurationPath, Curation);
-            SavedCuration = Curation;
-            return Say($"saved {Curation.Decisions.Count} decision(s) to {CurationPath}");
+            result = CurationFile.Save(CurationPath, _curationFile, added);
         }
         catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
         {
-            return Say($"could not save: {exception.Message}");
+            return Say($"could not save: {exception.Message} (the decisions stay in {Path.GetFileName(RecoveryPath)} until saved)");
         }
+
+        _curationFile = result.Read;
+        SaveConflicts = result.Conflicts;
+        SavedCuration = result.Read.Set;
+        Curation = result.Read.Set;
+        TryDeleteRecovery();
+        if (result.ChangedByOthers)
+        {
+            Curated = Curation.Apply(Data.Network);
+            Measurements.Refresh();
+            Recompute();
+        }
+
+        return Say(SaveMessage(added.Length, result));
     }
+
+    /// <summary>Takes the <see cref="RecoveredDecisions"/> back as unsaved decisions (Ctrl+S then saves them).</summary>
+    /// <returns>A one-line message.</returns>
+    public string RestoreRecovered()
+    {
+        IReadOnlyList<CurationDecision> recovered = RecoveredDecisions;
+        if (recovered.Count == 0)
+        {
+            return Say("nothing to restore");
+        }
+
+        RecoveredDecisions = [];
+        Curation = new CurationSet(Curation.Decisions.Concat(recovered));
+        Curated = Curation.Apply(Data.Network);
+        _message = $"restored {recovered.Count} unsaved decision(s); Ctrl+S saves them";
+        WriteRecovery();
+        Measurements.Refresh();
+        Recompute();
+        return _message;
+    }
+
+    /// <summary>Drops the <see cref="RecoveredDecisions"/> and their file.</summary>
+    /// <returns>A one-line message.</returns>
+    public string DiscardRecovered()
+    {
+        int count = RecoveredDecisions.Count;
+        RecoveredDecisions = [];
+        TryDeleteRecovery();
+        return Say($"discarded {count} recovered decision(s)");
+    }
+
+    /// <summary>Forgets the unsaved decisions on quitting without saving: the recovery file is removed.</summary>
+    public void DiscardUnsaved() => TryDeleteRecovery();
 
     /// <summary>Exports <paramref name="table"/> (or, for a .svg path, a diagram of <paramref name="focus"/> through the analysis) to <paramref name="path"/>.</summary>
     /// <remarks>A diagram is laid out in the background (it can take seconds); its outcome then appears in the status line.</remarks>
@@ -280,6 +353,8 @@ public sealed class ExplorerViewModel
                 {
                     Measurements.Refresh();
                 }
+
+                Target.AnalysisReady();
             },
             null,
             cancel.Token);
@@ -394,11 +469,50 @@ public sealed class ExplorerViewModel
         return new MeasurementRow(measurement, assessment, reason);
     }
 
+    private string SaveMessage(int added, CurationSaveResult result)
+    {
+        string saved = added == 0 ? "nothing new to save" : $"saved {added} decision(s) to {CurationPath}";
+        if (!result.ChangedByOthers)
+        {
+            return saved;
+        }
+
+        string merged = $"{saved}; the file had changed since it was read: {result.DecisionsByOthers.Count} decision(s) written there meanwhile are kept";
+        return result.Conflicts.Count == 0
+            ? merged
+            : $"{merged}; CONFLICT on {string.Join(", ", result.Conflicts)}: decided differently there too, both rows are in the file and yours (the later) is in force, review them on the curation screen (F7)";
+    }
+
+    private void WriteRecovery()
+    {
+        try
+        {
+            CurationRecovery.Write(RecoveryPath, Curation.Decisions.Skip(SavedCuration.Decisions.Count).ToArray());
+        }
+        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
+        {
+            _message = $"{_message}; could not write the recovery file: {exception.Message}";
+        }
+    }
+
+    private void TryDeleteRecovery()
+    {
+        try
+        {
+            CurationRecovery.Delete(RecoveryPath);
+        }
+        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
+        {
+            _message = $"could not remove {RecoveryPath}: {exception.Message}";
+        }
+    }
+
     private void ApplyCuration(CurationSet curation, string id, string message)
     {
         Curation = curation;
         Curated = curation.Apply(Data.Network);
         _message = message;
+        WriteRecovery();
         Measurements.RefreshRow(id);
         Recompute();
     }

@@ -11,6 +11,9 @@ public sealed class TargetViewModel
     /// <summary>At most this many routes are asked for.</summary>
     public const int MaxRoutes = 20;
 
+    /// <summary>The longest target accepted, in characters (a reaction written out is far shorter; longer text is a paste gone wrong).</summary>
+    public const int MaxInputLength = 2000;
+
     private readonly ExplorerViewModel _owner;
 
     internal TargetViewModel(ExplorerViewModel owner) => _owner = owner;
@@ -36,6 +39,9 @@ public sealed class TargetViewModel
     /// <summary>Whether a search is running.</summary>
     public bool IsSearching { get; private set; }
 
+    /// <summary>Whether a valid target waits for the analysis, which is still computing; the search starts when it is ready.</summary>
+    public bool IsWaitingForAnalysis { get; private set; }
+
     /// <summary>The routes found, best first.</summary>
     public IReadOnlyList<RouteReport> Routes => Report?.Routes ?? [];
 
@@ -51,6 +57,11 @@ public sealed class TargetViewModel
             if (IsSearching)
             {
                 return "searching routes…";
+            }
+
+            if (IsWaitingForAnalysis)
+            {
+                return "computing… the routes are searched as soon as the analysis is ready";
             }
 
             if (Report is null)
@@ -86,14 +97,23 @@ public sealed class TargetViewModel
     {
         Input = input ?? "";
         Report = null;
-        ChemicalEquation? target = Validate(Input);
-        if (target is null || _owner.Analysis is not { } analysis)
+        IsWaitingForAnalysis = false;
+        if (Input.Length > MaxInputLength)
         {
-            if (target is not null)
-            {
-                SetError(null, "the analysis is not ready yet; try again in a moment");
-            }
+            SetError(null, string.Create(System.Globalization.CultureInfo.InvariantCulture, $"the target is {Input.Length:N0} characters long; at most {MaxInputLength:N0} are accepted (type one reaction, or one species)"));
+            return false;
+        }
 
+        ChemicalEquation? target = Validate(Input);
+        if (target is null)
+        {
+            return false;
+        }
+
+        if (_owner.Analysis is not { } analysis)
+        {
+            // Not an error in the input: the search starts by itself when the first analysis arrives (AnalysisReady).
+            IsWaitingForAnalysis = true;
             return false;
         }
 
@@ -109,6 +129,15 @@ public sealed class TargetViewModel
             },
             () => IsSearching = false);
         return true;
+    }
+
+    /// <summary>Called when an analysis has arrived: a target that waited for it is searched now.</summary>
+    internal void AnalysisReady()
+    {
+        if (IsWaitingForAnalysis)
+        {
+            Submit(Input);
+        }
     }
 
     /// <summary>The cells of a route row; a route that uses a suspect measurement says so ("! uses suspect C03").</summary>

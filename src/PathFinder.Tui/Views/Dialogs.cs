@@ -18,8 +18,17 @@ internal static class Dialogs
         dialog.AddButton(new Button { Text = "_Cancel" });
         dialog.AddButton(new Button { Text = "_OK" });
         field.SetFocus();
+        // The text is taken when Enter or OK is pressed, and the field then takes no more keys: the dialog only closes at
+        // the end of the main-loop iteration, and keys typed fast after Enter (meant for the next decision) would
+        // otherwise still land in this field and merge two reasons into one.
+        string? accepted = null;
+        dialog.Accepting += (_, _) =>
+        {
+            accepted ??= field.Text;
+            field.ReadOnly = true;
+        };
         app.Run(dialog);
-        return dialog.Result == 1 && !dialog.Canceled ? field.Text : null;
+        return dialog.Result == 1 && !dialog.Canceled ? accepted ?? field.Text : null;
     }
 
     /// <summary>Shows lines of text until Enter or Esc.</summary>

@@ -58,6 +58,7 @@ internal sealed class ExplorerWindow : Window
     private readonly TableView _cycles = NewTable();
 
     private readonly object? _statusTimer;
+    private int _targetRefused;
     private Screen _current = Screen.Measurements;
 
     public ExplorerWindow(IApplication app, ExplorerViewModel vm)
@@ -95,6 +96,7 @@ internal sealed class ExplorerWindow : Window
         // Focus can only move once the window is running; until then the first field would keep it.
         Initialized += (_, _) => FocusCurrentScreen();
         IsRunningChanged += (_, _) => FocusCurrentScreen();
+        _app.Iteration += OfferRecoveredOnce;
         ShowScreen(Screen.Measurements);
         RefreshAll();
     }
@@ -107,6 +109,7 @@ internal sealed class ExplorerWindow : Window
         if (disposing)
         {
             _app.Keyboard.KeyDown -= OnAppKeyDown;
+            _app.Iteration -= OfferRecoveredOnce;
             if (_statusTimer is not null)
             {
                 _app.RemoveTimeout(_statusTimer);
@@ -118,6 +121,17 @@ internal sealed class ExplorerWindow : Window
         }
 
         base.Dispose(disposing);
+    }
+
+    private void OfferRecoveredOnce(object? sender, EventArgs<IApplication?> e)
+    {
+        if (!ReferenceEquals(_app.TopRunnableView, this))
+        {
+            return;
+        }
+
+        _app.Iteration -= OfferRecoveredOnce;
+        OfferRecovered();
     }
 
     private static TableView NewTable() => new()
@@ -179,9 +193,31 @@ internal sealed class ExplorerWindow : Window
         _routes.Width = Dim.Percent(70);
         _routes.Height = Dim.Fill(2);
         screen.Add(_targetLabel, _target, _targetCaret, _targetError, _routes, pickFrame, _estimate);
+        // Terminal.Gui's TextField does work proportional to its length on every key, so a paste of thousands of
+        // characters (arriving as single keys) took minutes; the field refuses keys past the cap at once instead.
+        _target.KeyDown += (_, key) =>
+        {
+            // Only keys that insert a character are refused; Backspace, Delete and the arrows keep working at the cap.
+            if (key.AsRune.Value != 0 && !System.Text.Rune.IsControl(key.AsRune) && !key.IsCtrl && !key.IsAlt && _target.Text.Length >= TargetViewModel.MaxInputLength)
+            {
+                key.Handled = true;
+                _targetRefused++;
+                ShowTargetCap();
+            }
+        };
+        _target.TextChanging += (_, e) =>
+        {
+            if (e.Result is { Length: > TargetViewModel.MaxInputLength } text)
+            {
+                _targetRefused += text.Length - TargetViewModel.MaxInputLength;
+                e.Result = text[..TargetViewModel.MaxInputLength];
+                ShowTargetCap();
+            }
+        };
         _target.Accepting += (_, e) =>
         {
             e.Handled = true;
+            _targetRefused = 0;
             _vm.Target.Submit(_target.Text);
             RefreshTarget();
         };
@@ -298,7 +334,7 @@ internal sealed class ExplorerWindow : Window
         }
         else if (key == Key.S.WithCtrl)
         {
-            _vm.Save();
+            Save();
         }
         else if (key == Key.E.WithCtrl)
         {
@@ -389,15 +425,50 @@ internal sealed class ExplorerWindow : Window
 
             if (answer == 2)
             {
-                _vm.Save();
+                Save();
                 if (_vm.HasUnsavedChanges)
                 {
                     return;
                 }
             }
+            else
+            {
+                _vm.DiscardUnsaved();
+            }
         }
 
         RequestStop();
+    }
+
+    private void Save()
+    {
+        string message = _vm.Save();
+        if (_vm.SaveConflicts.Count > 0)
+        {
+            Dialogs.ShowText(_app, "Decided differently by someone else", [.. message.Split("; ")]);
+        }
+    }
+
+    /// <summary>Offers the decisions an earlier session left unsaved (it ended without saving, e.g. the terminal was closed).</summary>
+    private void OfferRecovered()
+    {
+        IReadOnlyList<PathFinder.Curation.CurationDecision> recovered = _vm.RecoveredDecisions;
+        if (recovered.Count == 0)
+        {
+            return;
+        }
+
+        IEnumerable<string> lines = recovered.Take(8).Select(decision => "  " + decision).Concat(recovered.Count > 8 ? [$"  … and {recovered.Count - 8} more"] : []);
+        string text = $"An earlier session ended without saving {recovered.Count} decision(s):\n{string.Join("\n", lines)}\nRestore them (as unsaved; Ctrl+S saves), discard them, or decide later?";
+        int? answer = Dialogs.Ask(_app, "Unsaved decisions found", text, "_Later", "_Discard", "_Restore");
+        if (answer == 2)
+        {
+            _vm.RestoreRecovered();
+        }
+        else if (answer == 1)
+        {
+            _vm.DiscardRecovered();
+        }
     }
 
     private void ToggleExclusion()
@@ -522,9 +593,10 @@ internal sealed class ExplorerWindow : Window
         RefreshTarget();
         RefreshConsistency();
         SetRows(_curation, CurationLogViewModel.Headers, _vm.CurationLog.Rows, (row, _) => _vm.CurationLog.Cells(row), reuse: false);
-        string problems = _vm.CurationDiagnostics.Count == 0 ? "" : $"  {_vm.CurationDiagnostics.Count} problem(s) in the file: {_vm.CurationDiagnostics[0]}";
+        string unapplied = _vm.UnappliedCurationRows.Count == 0 ? "" : $"  {_vm.UnappliedCurationRows.Count} row(s) of the file NOT APPLIED (kept as written; listed first).";
+        string problems = _vm.CurationDiagnostics.Count == 0 ? "" : $"  {_vm.CurationDiagnostics.Count} problem(s) in the file (`pathfinder validate` lists each with line and column).";
         _curationInfo.Text = $"Decisions file: {_vm.CurationPath} ({(_vm.HasUnsavedChanges ? "UNSAVED changes, Ctrl+S saves" : "saved")})\n" +
-            $"{_vm.Curated.Excluded.Count} measurement(s) excluded now.{problems}";
+            $"{_vm.Curated.Excluded.Count} measurement(s) excluded now.{unapplied}{problems}";
         SetNeedsDraw();
     }
 
@@ -561,7 +633,11 @@ internal sealed class ExplorerWindow : Window
         _targetLabel.Text = $"Target ({_vm.Target.Property.Code()}):";
         bool hasError = _vm.Target.Error.Length > 0;
         _targetCaret.Text = hasError && _vm.Target.ErrorOffset is { } offset ? new string(' ', Math.Max(0, offset)) + "^ here" : "";
-        _targetError.Text = hasError ? $"INVALID: {_vm.Target.Error}" : "";
+        _targetError.Text = hasError ? $"INVALID: {_vm.Target.Error}" : _vm.Target.IsWaitingForAnalysis ? "computing… (the search starts when the analysis is ready)" : "";
+        if (_targetRefused > 0)
+        {
+            ShowTargetCap();
+        }
 
         SetRows(_routes, TargetViewModel.Headers, _vm.Target.Routes, (route, i) => _vm.Target.Cells(i, route));
         IReadOnlyList<string> choices = _vm.Target.SpeciesChoices;
@@ -572,6 +648,11 @@ internal sealed class ExplorerWindow : Window
 
         _estimate.Text = _vm.Target.EstimateText;
     }
+
+    private void ShowTargetCap() =>
+        _targetError.Text = string.Create(
+            System.Globalization.CultureInfo.InvariantCulture,
+            $"The target field holds at most {TargetViewModel.MaxInputLength:N0} characters; {_targetRefused:N0} more were refused. Type one reaction, or one species.");
 
     private void RefreshConsistency()
     {

@@ -243,4 +243,30 @@ public sealed class ValidateCommandTests : IDisposable
         Assert.Equal(0, run.ExitCode);
         Assert.Contains($"{file}:3:4: warning conventional-only: 'm2'", run.Error, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void Validate_ReadsTheCurationFileLikeEveryCommand()
+    {
+        // Given the demo with a curation file: two exclusions, an unusable row, and an id the data lack
+        string demo = DemoCopy.CombustionLab(_folder);
+        string curation = Path.Combine(demo, "curation.csv");
+        File.WriteAllText(curation, "id,action,reason,date\nC03,exclude,slipped,2026-01-01\nA07,exclude,doubtful,2026-01-02\nB01,drop,x,2026-01-02\nZ99,exclude,gone,2026-01-03\n");
+
+        // When it is validated, as text and as JSON
+        CliRun run = CliRun.Of("validate", demo);
+        CliRun json = CliRun.Of("validate", demo, "--json");
+
+        // Then it says how many decisions apply and reports each problem, located, as a warning
+        Assert.Equal(0, run.ExitCode);
+        Assert.Contains($"curation       {curation}: 3 decision(s), 2 measurement(s) excluded now, 1 row(s) not applied", run.Out, StringComparison.Ordinal);
+        Assert.Contains($"{curation}:4:5: warning unknown-action", run.Out, StringComparison.Ordinal);
+        Assert.Contains($"{curation}:5:1: warning unknown-id: the decision names measurement 'Z99'", run.Out, StringComparison.Ordinal);
+        Assert.Contains("0 error(s), 2 warning(s)", run.Out, StringComparison.Ordinal);
+        using JsonDocument document = JsonDocument.Parse(json.Out);
+        JsonElement element = document.RootElement.GetProperty("curation");
+        Assert.Equal(3, element.GetProperty("decisions").GetInt32());
+        Assert.Equal(["A07", "C03"], element.GetProperty("excluded").EnumerateArray().Select(id => id.GetString()));
+        Assert.Equal(1, element.GetProperty("notApplied").GetInt32());
+        Assert.Equal(2, document.RootElement.GetProperty("warnings").GetInt32());
+    }
 }

@@ -288,4 +288,128 @@ public sealed class ExplorerViewModelTests : IDisposable
         Assert.Equal(["C03"], vm.Measurements.Rows.Select(r => r.Measurement.Id));
         Assert.Equal("excluded", vm.AllMeasurementRows().Single(r => r.Measurement.Id == "B02").StatusText);
     }
+
+    [Fact]
+    public async Task Rows_the_explorer_cannot_use_are_shown_and_survive_a_save_byte_for_byte()
+    {
+        // Given a curation file with a day-first date (usable), an unknown action and a comment (not decisions)
+        const string before = "# reviewed by AB\nid,action,reason,date\nA07,exclude,doubtful,17/05/2024\nB02,drop,wrong unit,2024-05-18\n";
+        File.WriteAllText(_demo.CurationPath, before);
+        ExplorerViewModel vm = Open();
+        await vm.WhenIdleAsync();
+
+        // When a decision is made and saved
+        vm.Exclude("C03", "slipped digit");
+        vm.Save();
+
+        // Then the unusable row is on the curation screen as written, and the file keeps every byte it had
+        Assert.Equal(["A07", "C03"], vm.Curated.Excluded.Select(e => e.Measurement.Id));
+        IReadOnlyList<string> shown = vm.CurationLog.Cells(vm.CurationLog.Rows[0]);
+        Assert.Equal("NOT APPLIED", shown[1]);
+        Assert.StartsWith("B02,drop,wrong unit,2024-05-18", shown[3], StringComparison.Ordinal);
+        Assert.Equal(before + "C03,exclude,slipped digit,2024-05-17\n", File.ReadAllText(_demo.CurationPath));
+    }
+
+    [Fact]
+    public async Task A_decision_written_by_someone_else_meanwhile_is_kept_and_a_clash_on_the_same_id_is_reported()
+    {
+        // Given the explorer open on the demo, and someone else then writes decisions on B05 and C03 to the file
+        ExplorerViewModel vm = Open();
+        await vm.WhenIdleAsync();
+        File.WriteAllText(_demo.CurationPath, "id,action,reason,date\nB05,exclude,old calibration,2024-05-16\nC03,exclude,their reason,2024-05-16\n");
+
+        // When this session excludes C03 and A07 and saves
+        vm.Exclude("C03", "my reason");
+        vm.Exclude("A07", "doubtful");
+        string message = vm.Save();
+        await vm.WhenIdleAsync();
+
+        // Then every decision is in force or kept, C03 is named as a conflict, and the analysis follows the merged file
+        Assert.Equal(["A07", "B05", "C03"], vm.Curated.Excluded.Select(e => e.Measurement.Id).Order());
+        Assert.Equal(["C03"], vm.SaveConflicts);
+        Assert.Contains("CONFLICT on C03", message, StringComparison.Ordinal);
+        Assert.Contains("2 decision(s) written there meanwhile are kept", message, StringComparison.Ordinal);
+        Assert.Equal("my reason", vm.Curation.CurrentDecision("C03")!.Reason);
+        Assert.Contains(vm.CurationLog.Rows, row => vm.CurationLog.Cells(row)[4] == "CONFLICT");
+        Assert.False(vm.HasUnsavedChanges);
+        Assert.False(vm.Analysis!.Network.TryGetMeasurement("B05", out _));
+        string text = File.ReadAllText(_demo.CurationPath);
+        Assert.Contains("C03,exclude,their reason", text, StringComparison.Ordinal);
+        Assert.Contains("C03,exclude,my reason", text, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task Unsaved_decisions_survive_a_session_that_ends_without_saving_and_are_offered_next_time()
+    {
+        // Given a session that excludes two measurements and ends without saving (as when the terminal is closed)
+        ExplorerViewModel first = Open();
+        first.Exclude("C03", "slipped digit");
+        first.Exclude("A07", "doubtful");
+        await first.WhenIdleAsync();
+        Assert.True(File.Exists(first.RecoveryPath));
+        Assert.False(File.Exists(_demo.CurationPath));
+
+        // When the network is opened again
+        ExplorerViewModel second = Open();
+        await second.WhenIdleAsync();
+
+        // Then both decisions are offered; restored they are unsaved; saving writes them and removes the recovery file
+        Assert.Equal(["C03", "A07"], second.RecoveredDecisions.Select(d => d.MeasurementId));
+        Assert.Empty(second.Curated.Excluded);
+        second.RestoreRecovered();
+        await second.WhenIdleAsync();
+        Assert.True(second.HasUnsavedChanges);
+        Assert.Equal(["A07", "C03"], second.Curated.Excluded.Select(e => e.Measurement.Id));
+        second.Save();
+        Assert.False(File.Exists(second.RecoveryPath));
+        Assert.Equal(["C03", "A07"], CurationFile.Read(_demo.CurationPath).Set.ExcludedIds);
+
+        // And a recovery the user discards is gone for good
+        ExplorerViewModel third = Open();
+        third.Exclude("B05", "x");
+        ExplorerViewModel fourth = Open();
+        Assert.Single(fourth.RecoveredDecisions);
+        fourth.DiscardRecovered();
+        Assert.False(File.Exists(fourth.RecoveryPath));
+        await third.WhenIdleAsync();
+        await fourth.WhenIdleAsync();
+    }
+
+    [Fact]
+    public async Task A_target_typed_while_the_analysis_computes_says_computing_and_is_searched_when_it_is_ready()
+    {
+        // Given an analysis that is held back
+        using var gate = new ManualResetEventSlim();
+        ExplorerViewModel vm = Open((network, data, token) =>
+        {
+            gate.Wait(token);
+            return SolvedAnalysis.Analyzer(network, data, token);
+        });
+
+        // When a valid target is submitted before it is ready
+        bool started = vm.Target.Submit("CO(g)");
+
+        // Then it is no error: the screen says computing, and the routes come once the analysis is there
+        Assert.False(started);
+        Assert.Equal("", vm.Target.Error);
+        Assert.True(vm.Target.IsWaitingForAnalysis);
+        Assert.StartsWith("computing…", vm.Target.EstimateText, StringComparison.Ordinal);
+        gate.Set();
+        await vm.WhenIdleAsync();
+        Assert.False(vm.Target.IsWaitingForAnalysis);
+        Assert.NotEmpty(vm.Target.Routes);
+    }
+
+    [Fact]
+    public void A_target_longer_than_the_limit_is_refused_with_its_length()
+    {
+        ExplorerViewModel vm = Open();
+        string pasted = string.Concat(Enumerable.Repeat("CH4(g) + ", 300)) + "CH4(g)";
+
+        bool started = vm.Target.Submit(pasted);
+
+        Assert.False(started);
+        Assert.Contains("2,706 characters long; at most 2,000", vm.Target.Error, StringComparison.Ordinal);
+        Assert.Null(vm.Target.ErrorOffset);
+    }
 }

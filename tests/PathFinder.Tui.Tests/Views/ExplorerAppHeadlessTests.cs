@@ -248,6 +248,46 @@ public sealed class ExplorerAppHeadlessTests : IDisposable
         Assert.Contains("E04,exclude,copied from the kcal column,", File.ReadAllText(_demo.CurationPath), StringComparison.Ordinal);
     }
 
+    [Fact]
+    public void Keys_typed_fast_after_Enter_in_the_reason_dialog_never_join_that_reason()
+    {
+        // Given the explorer on the demo network, first row selected
+        string? id = null;
+        using IApplication app = Headless(100, 30);
+        ExplorerViewModel vm = ExplorerApp.CreateViewModel(app, _demo.Folder, SolvedAnalysis.Analyzer);
+        using ExplorerWindow window = ExplorerApp.CreateWindow(app, vm);
+        var steps = new Queue<(string Name, Func<bool> Ready, Action Act)>();
+        steps.Enqueue(("ready", () => !vm.IsBusy && vm.Analysis is not null, () =>
+        {
+            id = vm.Measurements.Rows[0].Measurement.Id;
+            app.InjectKey(Key.E.WithCtrl);
+        }
+        ));
+
+        // When the reason, Enter and the next keys arrive before the dialog has closed (one batch of input)
+        steps.Enqueue(("dialog", () => app.TopRunnableView is Dialog, () =>
+        {
+            foreach (char c in "first reason")
+            {
+                app.InjectKey(new Key(c));
+            }
+
+            app.InjectKey(Key.Enter);
+            foreach (char c in "next")
+            {
+                app.InjectKey(new Key(c));
+            }
+        }
+        ));
+        steps.Enqueue(("closed", () => ReferenceEquals(app.TopRunnableView, window) && vm.HasUnsavedChanges, () => app.InjectKey(Key.Q.WithCtrl)));
+        steps.Enqueue(("asked", () => app.TopRunnableView is Dialog, () => app.InjectKey(Key.Esc)));
+        steps.Enqueue(("quit", () => ReferenceEquals(app.TopRunnableView, window), () => window.RequestStop()));
+        RunScript(app, window, steps);
+
+        // Then the decision holds only the reason typed before Enter
+        Assert.Equal("first reason", vm.Curation.CurrentDecision(id!)!.Reason);
+    }
+
     private static void RunScript(IApplication app, ExplorerWindow window, Queue<(string Name, Func<bool> Ready, Action Act)> steps)
     {
         var clock = Stopwatch.StartNew();
