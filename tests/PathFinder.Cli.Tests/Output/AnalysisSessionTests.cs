@@ -93,13 +93,31 @@ public sealed class AnalysisSessionTests : IDisposable
     }
 
     [Fact]
-    public void BrokenCurationFile_StopsEveryCommandWithExitTwo()
+    public void UnusableCurationRow_IsALocatedWarningAndTheOtherDecisionsApply()
+    {
+        // Given a curation file with one row whose action is unknown (line 3) and one good exclusion
+        string demo = DemoCopy.CombustionLab(_folder);
+        string curation = Path.Combine(demo, "curation.csv");
+        File.WriteAllText(curation, "id,action,reason,date\nC03,exclude,slipped,17/05/2026\nA07,banish,doubtful,2026-01-01\nE04,exclude,kcal as kJ,2026-01-01\n");
+
+        // When an analysis command runs
+        CliRun run = CliRun.Of("check", demo);
+
+        // Then it runs with C03 (dated day first) and E04 excluded, and names the unused row by file, line and column
+        Assert.Equal(ExitCodes.Success, run.ExitCode);
+        Assert.Contains($"{curation}:3:5: warning unknown-action: unknown curation action 'banish'", run.Error, StringComparison.Ordinal);
+        Assert.Contains("2 measurement(s) excluded", run.Error, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void CurationFileWithoutItsHeader_StopsEveryCommandWithExitTwo()
     {
         string demo = DemoCopy.CombustionLab(_folder);
-        File.WriteAllText(Path.Combine(demo, "curation.csv"), "id,action,reason,date\nC03,banish,slipped,2026-01-01\n");
+        File.WriteAllText(Path.Combine(demo, "curation.csv"), "id,action,date\nC03,exclude,2026-01-01\n");
 
         Assert.Equal(ExitCodes.InvalidInput, CliRun.Of("check", demo).ExitCode);
         Assert.Equal(ExitCodes.InvalidInput, CliRun.Of("solve", demo).ExitCode);
         Assert.Equal(ExitCodes.InvalidInput, CliRun.Of("routes", demo, "--target", "CO(g)").ExitCode);
+        Assert.Equal(ExitCodes.InvalidInput, CliRun.Of("validate", demo).ExitCode);
     }
 }
