@@ -318,7 +318,7 @@ public sealed class ThermoModel
     {
         bool enthalpy = property is ThermoProperty.Enthalpy or ThermoProperty.InternalEnergy or ThermoProperty.GibbsEnergy || property.IsEquilibriumConstant();
         bool entropy = !enthalpy || property is ThermoProperty.GibbsEnergy || property.IsEquilibriumConstant();
-        Fraction entropyFactor = enthalpy ? -TemperatureFraction(temperature) / 1000 : Fraction.One;
+        Fraction entropyFactor = enthalpy && entropy ? GibbsEntropyFactor(temperature) : Fraction.One;
         var terms = new List<(Species Species, UnknownKind Kind, Fraction Coefficient)>(equation.Terms.Count * 2);
         void Add(Species species, UnknownKind kind, Fraction coefficient)
         {
@@ -361,9 +361,25 @@ public sealed class ThermoModel
 
     private static readonly Species HydrogenGas = ReferenceStates.Of("H");
 
-    /// <summary>The temperature as the exact decimal it was written as (298.15 is 5963/20, not the nearest binary fraction).</summary>
-    private static Fraction TemperatureFraction(double temperature) =>
-        Fraction.FromDecimal(decimal.Parse(temperature.ToString("R", CultureInfo.InvariantCulture), NumberStyles.Float, CultureInfo.InvariantCulture));
+    private static readonly System.Collections.Concurrent.ConcurrentDictionary<double, Fraction> GibbsEntropyFactors = new();
+
+    /// <summary>−T/1000 with T the exact decimal it was written as (298.15 is 5963/20, not the nearest binary fraction): the S° coefficient of a ΔG row, per unit of ν.</summary>
+    /// <remarks>Kept per temperature: a data set has few distinct temperatures, and the decimal round trip is dear beside the rest of a row.</remarks>
+    private static Fraction GibbsEntropyFactor(double temperature)
+    {
+        if (GibbsEntropyFactors.TryGetValue(temperature, out Fraction factor))
+        {
+            return factor;
+        }
+
+        factor = -Fraction.FromDecimal(decimal.Parse(temperature.ToString("R", CultureInfo.InvariantCulture), NumberStyles.Float, CultureInfo.InvariantCulture)) / 1000;
+        if (GibbsEntropyFactors.Count < 4096)
+        {
+            GibbsEntropyFactors.TryAdd(temperature, factor);
+        }
+
+        return factor;
+    }
 
     private static string OffsetKey(string source, bool energy) => (energy ? "E:" : "S:") + source;
 
