@@ -1,5 +1,6 @@
 using System.CommandLine;
 using PathFinder.Cli.Commands;
+using PathFinder.Cli.Output;
 
 namespace PathFinder.Cli;
 
@@ -10,6 +11,14 @@ public static class CliApp
     public static int Run(string[] args, TextWriter output, TextWriter error)
     {
         ArgumentNullException.ThrowIfNull(args);
+        ArgumentNullException.ThrowIfNull(output);
+        ArgumentNullException.ThrowIfNull(error);
+
+        // Data reaches the terminal only through these: control characters in ids, sources or file names are shown, not run.
+        using var visibleOutput = new VisibleTextWriter(output);
+        using var visibleError = new VisibleTextWriter(error);
+        output = visibleOutput;
+        error = visibleError;
         var context = new CommandContext(output, error);
         var root = new RootCommand(
             "PathFinder: combine measured reaction enthalpies (and ΔG, ΔS, ΔU) through Hess's law; validate data, " +

@@ -1,4 +1,5 @@
 using PathFinder.Data;
+using PathFinder.IO;
 using PathFinder.Tui.Analysis;
 using PathFinder.Tui.ViewModels;
 using PathFinder.Tui.Views;
@@ -39,7 +40,7 @@ public static class ExplorerApp
 
         // Reading happens before the screen opens, with a line on the terminal, so a large network never shows a
         // frozen, empty screen; everything after that runs off the UI thread.
-        Console.Out.WriteLine($"Reading {networkPath} …");
+        Console.Out.WriteLine($"Reading {TerminalText.Visible(networkPath)} …");
         var clock = System.Diagnostics.Stopwatch.StartNew();
         NetworkReadResult data = NetworkReader.Read(networkPath);
         Console.Out.WriteLine($"Read {data.Network.Measurements.Count} measurements in {clock.Elapsed.TotalSeconds:0.0} s; opening the explorer …");

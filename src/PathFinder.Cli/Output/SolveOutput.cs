@@ -1,6 +1,5 @@
 using System.Globalization;
 using System.Text;
-using CsvHelper;
 using PathFinder.Analysis;
 using PathFinder.IO;
 using PathFinder.Quantities;
@@ -48,14 +47,22 @@ public static class SolveOutput
                 csv.AppendLine(CultureInfo.InvariantCulture, $"species,{Code(report)},uncertainty,unit,measurements{extraHeader}");
                 foreach (SpeciesEstimate estimate in determined)
                 {
-                    string extra = "";
+                    var cells = new List<string>
+                    {
+                        CsvCell.Text(estimate.Species.Name),
+                        CsvCell.Number(estimate.Value),
+                        CsvCell.Number(estimate.Uncertainty),
+                        CsvCell.Text(unit),
+                        CsvCell.Number(estimate.Measurements),
+                    };
                     if (atTemperature is not null)
                     {
                         double? moved = atTemperature.Species.FirstOrDefault(row => row.Species.Equals(estimate.Species))?.AtTemperature?.Value;
-                        extra = string.Create(CultureInfo.InvariantCulture, $",{(moved is { } value ? value.ToString("R", CultureInfo.InvariantCulture) : "")},{atTemperature.Temperature:R}");
+                        cells.Add(moved is { } value ? CsvCell.Number(value) : "");
+                        cells.Add(CsvCell.Number(atTemperature.Temperature));
                     }
 
-                    csv.AppendLine(CultureInfo.InvariantCulture, $"{Quote(estimate.Species.Name)},{estimate.Value:R},{estimate.Uncertainty:R},{unit},{estimate.Measurements}{extra}");
+                    csv.AppendLine(CsvCell.Line(cells));
                 }
 
                 output.Write(csv.ToString());
@@ -65,12 +72,12 @@ public static class SolveOutput
                 output.WriteLine("|---|---:|---:|---:|");
                 foreach (SpeciesEstimate estimate in determined)
                 {
-                    output.WriteLine($"| {estimate.Species.Name} | {Text.Number(estimate.Value)} | {Text.Number(estimate.Uncertainty)} | {estimate.Measurements} |");
+                    output.WriteLine($"| {MarkdownCell.Text(estimate.Species.Name)} | {Text.Number(estimate.Value)} | {Text.Number(estimate.Uncertainty)} | {estimate.Measurements} |");
                 }
 
                 output.WriteLine();
-                WriteAtTemperature(output, atTemperature);
-                WriteFooter(output, report);
+                WriteAtTemperature(output, atTemperature, MarkdownCell.Text);
+                WriteFooter(output, report, MarkdownCell.Text);
                 return;
             default:
                 output.WriteLine($"{quantity} at 298.15 K in {unit}, joint weighted least squares over {report.Model.Measurements.Count} measurements{(report.Adjusted ? $" after the suspect procedure ({report.Adjustments.Count} adjustments, {report.Suspects.Count} suspects)" : " as given")}");
@@ -85,8 +92,8 @@ public static class SolveOutput
                 }
 
                 output.WriteLine();
-                WriteAtTemperature(output, atTemperature);
-                WriteFooter(output, report);
+                WriteAtTemperature(output, atTemperature, name => name);
+                WriteFooter(output, report, name => name);
                 return;
         }
     }
@@ -98,17 +105,11 @@ public static class SolveOutput
         AtomicFile.Write(path, stream =>
         {
             using var writer = new StreamWriter(stream, new UTF8Encoding(encoderShouldEmitUTF8Identifier: false), leaveOpen: true);
-            using var csv = new CsvWriter(writer, CultureInfo.InvariantCulture);
-            csv.WriteField("row");
-            csv.WriteField("column");
-            csv.WriteField("covariance");
-            csv.NextRecord();
+            writer.Write("row,column,covariance\n");
             foreach (CovarianceEntry entry in report.Covariances())
             {
-                csv.WriteField(entry.Row);
-                csv.WriteField(entry.Column);
-                csv.WriteField(entry.Covariance.ToString("R", CultureInfo.InvariantCulture));
-                csv.NextRecord();
+                writer.Write(CsvCell.Line([CsvCell.Text(entry.Row), CsvCell.Text(entry.Column), CsvCell.Number(entry.Covariance)]));
+                writer.Write('\n');
             }
         });
     }
@@ -121,11 +122,11 @@ public static class SolveOutput
         _ => "ΔfH° from ΔH, ΔU, ΔG and K data, solved together with S°",
     };
 
-    private static void WriteAtTemperature(TextWriter output, TemperatureTable? table)
+    private static void WriteAtTemperature(TextWriter output, TemperatureTable? table, Func<string, string> name)
     {
         if (table is not null)
         {
-            TemperatureOutput.WriteText(output, table, table.Family.Unit().Symbol);
+            TemperatureOutput.WriteText(output, table, table.Family.Unit().Symbol, name);
             output.WriteLine();
         }
     }
@@ -137,20 +138,23 @@ public static class SolveOutput
         _ => "S",
     };
 
-    private static void WriteFooter(TextWriter output, SolveReport report)
+    /// <param name="output">Where to write.</param>
+    /// <param name="report">The report.</param>
+    /// <param name="name">How a name from the data is written (escaped in Markdown, as it is in text).</param>
+    private static void WriteFooter(TextWriter output, SolveReport report, Func<string, string> name)
     {
         if (report.Undetermined.Count > 0)
         {
-            output.WriteLine($"Not determined by the data ({report.Undetermined.Count}): {string.Join(", ", report.Undetermined.Select(estimate => estimate.Species.Name))}");
+            output.WriteLine($"Not determined by the data ({report.Undetermined.Count}): {string.Join(", ", report.Undetermined.Select(estimate => name(estimate.Species.Name)))}");
             foreach (string group in report.RelativeGroups)
             {
-                output.WriteLine($"  known only relative to each other: {group}");
+                output.WriteLine($"  known only relative to each other: {name(group)}");
             }
         }
 
         if (report.Suspects.Count > 0)
         {
-            output.WriteLine($"Suspects down-weighted: {string.Join(", ", report.SuspectIds)} (see 'pathfinder check')");
+            output.WriteLine($"Suspects down-weighted: {string.Join(", ", report.SuspectIds.Select(name))} (see 'pathfinder check')");
         }
 
         output.WriteLine(Text.Caution);
@@ -162,7 +166,4 @@ public static class SolveOutput
         PropertyFamily.GibbsEnergy => "dfG",
         _ => "S",
     };
-
-    private static string Quote(string text) =>
-        text.IndexOfAny([',', '"', '\n']) >= 0 ? "\"" + text.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"" : text;
 }

@@ -18,10 +18,15 @@ public static class TemperatureOutput
     public static string Kelvin(double temperature) => temperature.ToString("0.##", CultureInfo.InvariantCulture);
 
     /// <summary>Writes the text block.</summary>
-    public static void WriteText(TextWriter output, TemperatureTable table, string unit)
+    /// <param name="output">Where to write.</param>
+    /// <param name="table">The species at the temperature.</param>
+    /// <param name="unit">The unit symbol.</param>
+    /// <param name="name">How names and notes from the data are written (Markdown escapes them); as they are when null.</param>
+    public static void WriteText(TextWriter output, TemperatureTable table, string unit, Func<string, string>? name = null)
     {
         ArgumentNullException.ThrowIfNull(output);
         ArgumentNullException.ThrowIfNull(table);
+        name ??= text => text;
         string quantity = Quantity(table);
         string at = Kelvin(table.Temperature);
         string how = table.Family switch
@@ -41,24 +46,24 @@ public static class TemperatureOutput
         }
         else
         {
-            int width = Math.Max(12, moved.Max(row => row.Species.Name.Length));
+            int width = Math.Max(12, moved.Max(row => name(row.Species.Name).Length));
             output.WriteLine($"  {"species".PadRight(width)}  {quantity + "(298.15 K)",16}  {quantity + $"({at} K)",16}  {"±u",8}");
             foreach (SpeciesAtTemperature row in moved)
             {
                 UncertainValue value = row.AtTemperature!.Value;
-                output.WriteLine($"  {row.Species.Name.PadRight(width)}  {Text.Number(row.AtReference!.Value.Value),16}  {Text.Number(value.Value),16}  {Text.Number(value.StandardUncertainty),8}");
+                output.WriteLine($"  {name(row.Species.Name).PadRight(width)}  {Text.Number(row.AtReference!.Value.Value),16}  {Text.Number(value.Value),16}  {Text.Number(value.StandardUncertainty),8}");
             }
         }
 
         SpeciesAtTemperature[] lacking = table.LackingHeatCapacities.ToArray();
         if (lacking.Length > 0)
         {
-            output.WriteLine($"Not moved, heat capacities missing ({lacking.Length}): {string.Join("; ", lacking.Select(row => $"{row.Species.Name} (needs {string.Join(", ", row.MissingHeatCapacities.Select(species => species.Name))})"))}");
+            output.WriteLine($"Not moved, heat capacities missing ({lacking.Length}): {string.Join("; ", lacking.Select(row => $"{name(row.Species.Name)} (needs {string.Join(", ", row.MissingHeatCapacities.Select(species => name(species.Name)))})"))}");
         }
 
         foreach (string note in moved.SelectMany(row => row.Notes).Distinct(StringComparer.Ordinal))
         {
-            output.WriteLine($"  note: {note}");
+            output.WriteLine($"  note: {name(note)}");
         }
     }
 

@@ -102,8 +102,8 @@ public sealed class ConsistencyViewModel
         _owner.Data.Network.TryGetMeasurement(measurementId, out Measurement m) ? m.Source : null;
 
     /// <summary>The suspects table as shown (for export).</summary>
-    public TableSnapshot Snapshot() => new("Suspects", SuspectHeaders, Suspects.Select(Cells).ToArray());
+    public TableSnapshot Snapshot() => new("Suspects", SuspectHeaders, Suspects.Select(Cells).ToArray(), [1]);
 
     /// <summary>The cycles table as shown (for export).</summary>
-    public TableSnapshot CycleSnapshot() => new("Cycles", CycleHeaders, Cycles.Select(pair => Cells(pair.Number, pair.Cycle)).ToArray());
+    public TableSnapshot CycleSnapshot() => new("Cycles", CycleHeaders, Cycles.Select(pair => Cells(pair.Number, pair.Cycle)).ToArray(), [0, 3]);
 }

@@ -107,7 +107,7 @@ public sealed class MeasurementsViewModel
     }
 
     /// <summary>The table as shown (for export).</summary>
-    public TableSnapshot Snapshot() => new("Measurements", Headers, Rows.Select(row => row.Cells).ToArray());
+    public TableSnapshot Snapshot() => new("Measurements", Headers, Rows.Select(row => row.Cells).ToArray(), [2]);
 
     /// <summary>Rebuilds every row from the data, the curation and the analysis, then filters and sorts again.</summary>
     internal void Refresh() => SetAllRows(_owner.AllMeasurementRows().ToArray());

@@ -41,5 +41,5 @@ public sealed class SpeciesViewModel
     };
 
     /// <summary>The table as shown (for export).</summary>
-    public TableSnapshot Snapshot() => new("Species", Headers, Rows.Select(Cells).ToArray());
+    public TableSnapshot Snapshot() => new("Species", Headers, Rows.Select(Cells).ToArray(), [4]);
 }

@@ -1,10 +1,12 @@
 using System.Text;
 using System.Text.Encodings.Web;
 using System.Text.Json;
+using PathFinder.IO;
 
 namespace PathFinder.Tui.ViewModels;
 
 /// <summary>Turns a <see cref="TableSnapshot"/> into CSV, JSON or Markdown text.</summary>
+/// <remarks>CSV cells and Markdown text are written by <see cref="CsvCell"/> and <see cref="MarkdownCell"/>, as in the CLI.</remarks>
 public static class TableExporter
 {
     private static readonly JsonSerializerOptions JsonOptions = new() { WriteIndented = true, Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping };
@@ -39,17 +41,14 @@ public static class TableExporter
     private static string Csv(TableSnapshot table)
     {
         var text = new StringBuilder();
-        text.Append(string.Join(",", table.Headers.Select(QuoteCsv))).Append('\n');
+        text.Append(CsvCell.Line(table.Headers.Select(CsvCell.Text))).Append('\n');
         foreach (IReadOnlyList<string> row in table.Rows)
         {
-            text.Append(string.Join(",", row.Select(QuoteCsv))).Append('\n');
+            text.Append(CsvCell.Line(row.Select((cell, column) => table.IsNumberColumn(column) ? CsvCell.NumberOrText(cell) : CsvCell.Text(cell)))).Append('\n');
         }
 
         return text.ToString();
     }
-
-    private static string QuoteCsv(string field) =>
-        field.IndexOfAny([',', '"', '\n', '\r']) >= 0 ? "\"" + field.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"" : field;
 
     private static string Json(TableSnapshot table)
     {
@@ -61,14 +60,13 @@ public static class TableExporter
 
     private static string Markdown(TableSnapshot table)
     {
-        static string Cell(string text) => text.Replace("|", "\\|", StringComparison.Ordinal).Replace("\n", " ", StringComparison.Ordinal);
         var text = new StringBuilder();
-        text.Append("## ").Append(table.Title).Append("\n\n");
-        text.Append("| ").Append(string.Join(" | ", table.Headers.Select(Cell))).Append(" |\n");
+        text.Append("## ").Append(MarkdownCell.Text(table.Title)).Append("\n\n");
+        text.Append("| ").Append(string.Join(" | ", table.Headers.Select(MarkdownCell.Text))).Append(" |\n");
         text.Append('|').Append(string.Join("|", table.Headers.Select(_ => "---"))).Append("|\n");
         foreach (IReadOnlyList<string> row in table.Rows)
         {
-            text.Append("| ").Append(string.Join(" | ", row.Select(Cell))).Append(" |\n");
+            text.Append("| ").Append(string.Join(" | ", row.Select(MarkdownCell.Text))).Append(" |\n");
         }
 
         return text.ToString();

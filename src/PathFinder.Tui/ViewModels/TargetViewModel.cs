@@ -217,7 +217,7 @@ public sealed class TargetViewModel
     }
 
     /// <summary>The routes table as shown (for export).</summary>
-    public TableSnapshot Snapshot() => new("Routes", Headers, Routes.Select((route, i) => Cells(i, route)).ToArray());
+    public TableSnapshot Snapshot() => new("Routes", Headers, Routes.Select((route, i) => Cells(i, route)).ToArray(), [0, 2]);
 
     private ChemicalEquation? Validate(string input)
     {

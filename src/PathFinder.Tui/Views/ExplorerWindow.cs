@@ -1,5 +1,6 @@
 using System.Collections.ObjectModel;
 using System.Drawing;
+using PathFinder.IO;
 using PathFinder.Quantities;
 using PathFinder.Tui.Analysis;
 using PathFinder.Tui.ViewModels;
@@ -88,7 +89,7 @@ internal sealed class ExplorerWindow : Window
         {
             if (_vm.IsBusy)
             {
-                _status.Text = _vm.StatusText;
+                _status.Text = TerminalText.Visible(_vm.StatusText);
             }
 
             return true;
@@ -237,7 +238,7 @@ internal sealed class ExplorerWindow : Window
             int index = _speciesPick.Value ?? -1;
             if (index >= 0 && index < choices.Count)
             {
-                _target.Text = choices[index];
+                _target.Text = TerminalText.Visible(choices[index]);
                 _vm.Target.PickSpecies(choices[index]);
                 RefreshTarget();
             }
@@ -584,8 +585,8 @@ internal sealed class ExplorerWindow : Window
 
     private void RefreshAll()
     {
-        Title = $"PathFinder explorer - {_vm.Title}";
-        _status.Text = _vm.StatusText;
+        Title = TerminalText.Visible($"PathFinder explorer - {_vm.Title}");
+        _status.Text = TerminalText.Visible(_vm.StatusText);
         RefreshMeasurements();
         SetRows(_species, SpeciesViewModel.Headers, _vm.Species.Rows, (row, _) => SpeciesViewModel.Cells(row));
         SetRows(_sources, SourcesViewModel.Headers, _vm.Sources.Rows, (row, _) => _vm.Sources.Cells(row), reuse: false);
@@ -595,8 +596,8 @@ internal sealed class ExplorerWindow : Window
         SetRows(_curation, CurationLogViewModel.Headers, _vm.CurationLog.Rows, (row, _) => _vm.CurationLog.Cells(row), reuse: false);
         string unapplied = _vm.UnappliedCurationRows.Count == 0 ? "" : $"  {_vm.UnappliedCurationRows.Count} row(s) of the file NOT APPLIED (kept as written; listed first).";
         string problems = _vm.CurationDiagnostics.Count == 0 ? "" : $"  {_vm.CurationDiagnostics.Count} problem(s) in the file (`pathfinder validate` lists each with line and column).";
-        _curationInfo.Text = $"Decisions file: {_vm.CurationPath} ({(_vm.HasUnsavedChanges ? "UNSAVED changes, Ctrl+S saves" : "saved")})\n" +
-            $"{_vm.Curated.Excluded.Count} measurement(s) excluded now.{unapplied}{problems}";
+        _curationInfo.Text = TerminalText.Visible($"Decisions file: {_vm.CurationPath} ({(_vm.HasUnsavedChanges ? "UNSAVED changes, Ctrl+S saves" : "saved")})") + "\n" +
+            TerminalText.Visible($"{_vm.Curated.Excluded.Count} measurement(s) excluded now.{unapplied}{problems}");
         SetNeedsDraw();
     }
 
@@ -609,9 +610,10 @@ internal sealed class ExplorerWindow : Window
 
     private void ShowMeasurementDetails() => _measurementDetails.Text = string.Join("\n", _vm.Measurements.Details(SelectedMeasurement()).Select(Fit));
 
-    /// <summary>Cuts a detail line to the screen width with "…", so one long line never wraps over the next.</summary>
+    /// <summary>Cuts a detail line to the screen width with "…", so one long line never wraps over the next; control characters from data are shown, not sent.</summary>
     private string Fit(string line)
     {
+        line = TerminalText.Visible(line);
         int width = Math.Max(20, _app.Screen.Width - 2);
         return line.Length <= width ? line : string.Concat(line.AsSpan(0, width - 1), "…");
     }
@@ -633,7 +635,7 @@ internal sealed class ExplorerWindow : Window
         _targetLabel.Text = $"Target ({_vm.Target.Property.Code()}):";
         bool hasError = _vm.Target.Error.Length > 0;
         _targetCaret.Text = hasError && _vm.Target.ErrorOffset is { } offset ? new string(' ', Math.Max(0, offset)) + "^ here" : "";
-        _targetError.Text = hasError ? $"INVALID: {_vm.Target.Error}" : _vm.Target.IsWaitingForAnalysis ? "computing… (the search starts when the analysis is ready)" : "";
+        _targetError.Text = hasError ? TerminalText.Visible($"INVALID: {_vm.Target.Error}") : _vm.Target.IsWaitingForAnalysis ? "computing… (the search starts when the analysis is ready)" : "";
         if (_targetRefused > 0)
         {
             ShowTargetCap();
@@ -643,10 +645,10 @@ internal sealed class ExplorerWindow : Window
         IReadOnlyList<string> choices = _vm.Target.SpeciesChoices;
         if (_speciesPick.Source is null || _speciesPick.Source.Count != choices.Count)
         {
-            _speciesPick.SetSource(new ObservableCollection<string>(choices));
+            _speciesPick.SetSource(new ObservableCollection<string>(choices.Select(choice => TerminalText.Visible(choice))));
         }
 
-        _estimate.Text = _vm.Target.EstimateText;
+        _estimate.Text = TerminalText.Visible(_vm.Target.EstimateText, keepLineBreaks: true);
     }
 
     private void ShowTargetCap() =>
@@ -656,7 +658,7 @@ internal sealed class ExplorerWindow : Window
 
     private void RefreshConsistency()
     {
-        _consistencySummary.Text = _vm.Consistency.Summary;
+        _consistencySummary.Text = TerminalText.Visible(_vm.Consistency.Summary, keepLineBreaks: true);
         SetRows(_suspects, ConsistencyViewModel.SuspectHeaders, _vm.Consistency.Suspects, (row, _) => _vm.Consistency.Cells(row));
         SetRows(_cycles, ConsistencyViewModel.CycleHeaders, _vm.Consistency.Cycles, (pair, _) => ConsistencyViewModel.Cells(pair.Number, pair.Cycle));
     }

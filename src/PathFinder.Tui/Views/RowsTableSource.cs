@@ -1,3 +1,4 @@
+using PathFinder.IO;
 using Terminal.Gui.Views;
 
 namespace PathFinder.Tui.Views;
@@ -5,7 +6,8 @@ namespace PathFinder.Tui.Views;
 /// <summary>A read-only table over a list of rows whose cells are formatted only when a row is drawn, then kept.</summary>
 /// <remarks>
 /// The table view asks only for the rows on screen, so a 30 000-row table costs a screenful of formatting per
-/// draw, not 30 000 rows of strings per keystroke. The list must not change while the source is shown.
+/// draw, not 30 000 rows of strings per keystroke. The list must not change while the source is shown. Control
+/// characters in cells (ids, sources, notes from the data) are shown as <c>\uXXXX</c>, never sent to the terminal.
 /// </remarks>
 /// <typeparam name="T">The row type.</typeparam>
 internal sealed class RowsTableSource<T> : ITableSource
@@ -35,7 +37,7 @@ internal sealed class RowsTableSource<T> : ITableSource
     {
         get
         {
-            IReadOnlyList<string> cells = _formatted[row] ??= _cells(RowList[row], row);
+            IReadOnlyList<string> cells = _formatted[row] ??= _cells(RowList[row], row).Select(cell => TerminalText.Visible(cell)).ToArray();
             return col < cells.Count ? cells[col] : "";
         }
     }

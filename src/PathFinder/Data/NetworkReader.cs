@@ -5,6 +5,7 @@ using Fractions;
 using PathFinder.Analysis;
 using PathFinder.Chemistry;
 using PathFinder.Diagnostics;
+using PathFinder.IO;
 using PathFinder.Quantities;
 using PathFinder.Thermodynamics;
 
@@ -233,6 +234,13 @@ public static class NetworkReader
         if (id.Length == 0)
         {
             diagnostics.Add(Diagnostic.Error("missing-id", row.LocationOf(columns.Id, "id"), "the measurement has no id", "give every row a unique id such as m1"));
+        }
+        else if (TerminalText.FirstUnsafe(id, keepLineBreaks: false) is >= 0 and int at)
+        {
+            // Ids are printed in every report and terminal: an ESC would run there, a line break would fake a line.
+            string field = row.Fields[columns.Id];
+            int offset = field.Length - field.TrimStart().Length + at;
+            diagnostics.Add(Diagnostic.Error("control-character-in-id", row.LocationOf(columns.Id, "id").Shift(offset), $"the id '{DiagnosticText.Excerpt(TerminalText.Visible(id))}' holds the control character U+{(int)id[at]:X4}", "ids are printed in reports and terminals: write them without control characters, line breaks or tabs"));
         }
 
         ThermoProperty property = ThermoProperty.Enthalpy;

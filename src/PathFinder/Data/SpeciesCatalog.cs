@@ -1,6 +1,7 @@
 using System.Collections.Concurrent;
 using PathFinder.Chemistry;
 using PathFinder.Diagnostics;
+using PathFinder.IO;
 
 namespace PathFinder.Data;
 
@@ -64,9 +65,9 @@ public sealed class SpeciesCatalog
             string formulaText = row.FieldOrEmpty(formulaColumn);
             string stateText = row.FieldOrEmpty(stateColumn);
             string name = nameColumn >= 0 ? row.FieldOrEmpty(nameColumn) : "";
-            if (key.Length == 0 || key.Any(char.IsWhiteSpace) || key.Contains('+', StringComparison.Ordinal))
+            if (key.Length == 0 || key.Any(char.IsWhiteSpace) || key.Contains('+', StringComparison.Ordinal) || TerminalText.HasUnsafe(key))
             {
-                diagnostics.Add(Diagnostic.Error("bad-species-key", row.LocationOf(keyColumn, "key"), $"species key '{DiagnosticText.Excerpt(key)}' must be non-empty, without spaces or '+'", "use a short name such as DME or EtOH"));
+                diagnostics.Add(Diagnostic.Error("bad-species-key", row.LocationOf(keyColumn, "key"), $"species key '{DiagnosticText.Excerpt(TerminalText.Visible(key))}' must be non-empty, without spaces, control characters or '+'", "use a short name such as DME or EtOH"));
                 continue;
             }
 

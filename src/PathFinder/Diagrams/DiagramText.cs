@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text;
+using PathFinder.IO;
 
 namespace PathFinder.Diagrams;
 
@@ -73,11 +74,17 @@ internal static class DiagramText
         return rounded < 0.0 ? Minus + text : text;
     }
 
-    /// <summary>Escapes text for XML content and attributes and drops characters XML 1.0 forbids.</summary>
+    /// <summary>Escapes text for XML content and attributes; no control character from data reaches the file.</summary>
+    /// <remarks>
+    /// Control characters (ESC, C1, DEL, the bidirectional overrides) and unpaired surrogates are shown as <c>\uXXXX</c>
+    /// (<see cref="TerminalText.Visible"/>): XML 1.0 forbids most of them, and the others would reach a terminal that
+    /// prints the file. Tabs and line breaks stay (XML allows them); U+FFFE and U+FFFF, not characters in XML, are dropped.
+    /// </remarks>
     public static string Escape(string text)
     {
-        var sb = new StringBuilder(text.Length + 8);
-        foreach (char c in text)
+        string visible = TerminalText.Visible(text, keepLineBreaks: true);
+        var sb = new StringBuilder(visible.Length + 8);
+        foreach (char c in visible)
         {
             switch (c)
             {
@@ -86,16 +93,8 @@ internal static class DiagramText
                 case '>': sb.Append("&gt;"); break;
                 case '"': sb.Append("&quot;"); break;
                 case '\'': sb.Append("&apos;"); break;
-                default:
-                    if (c >= 0x20 || c is '\t' or '\n' or '\r')
-                    {
-                        if (c is not ('\uFFFE' or '\uFFFF'))
-                        {
-                            sb.Append(c);
-                        }
-                    }
-
-                    break;
+                case '\uFFFE' or '\uFFFF': break;
+                default: sb.Append(c); break;
             }
         }
 

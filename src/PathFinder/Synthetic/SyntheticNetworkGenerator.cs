@@ -137,7 +137,7 @@ public static class SyntheticNetworkGenerator
         {
             // S° belongs to one species: its equation field names the species, not a formation reaction.
             string equation = measurement.Property == ThermoProperty.AbsoluteEntropy ? measurement.Equation.Terms[0].Species.Name : measurement.Equation.ToString();
-            data.AppendLine(string.Create(CultureInfo.InvariantCulture, $"{measurement.Id},{Quote(equation)},{measurement.Property.Code()},{measurement.Value:R},{measurement.Uncertainty:R},{measurement.Unit.Symbol},{measurement.Temperature:R},{measurement.Source}"));
+            data.AppendLine(string.Create(CultureInfo.InvariantCulture, $"{measurement.Id},{CsvCell.Field(equation)},{measurement.Property.Code()},{measurement.Value:R},{measurement.Uncertainty:R},{measurement.Unit.Symbol},{measurement.Temperature:R},{measurement.Source}"));
         }
 
         var truth = new StringBuilder();
@@ -147,12 +147,12 @@ public static class SyntheticNetworkGenerator
         truth.AppendLine("kind,name,value");
         foreach ((Species species, double value) in network.TrueFormationEnthalpy.Where(pair => network.Network.IndexOf(pair.Key) >= 0))
         {
-            truth.AppendLine(string.Create(CultureInfo.InvariantCulture, $"species,{Quote(species.Name)},{value:R}"));
+            truth.AppendLine(string.Create(CultureInfo.InvariantCulture, $"species,{CsvCell.Field(species.Name)},{value:R}"));
         }
 
         foreach ((Species species, double value) in network.TrueEntropy.Where(pair => network.Network.IndexOf(pair.Key) >= 0))
         {
-            truth.AppendLine(string.Create(CultureInfo.InvariantCulture, $"entropy,{Quote(species.Name)},{value:R}"));
+            truth.AppendLine(string.Create(CultureInfo.InvariantCulture, $"entropy,{CsvCell.Field(species.Name)},{value:R}"));
         }
 
         foreach (string id in network.OutlierIds.Order(StringComparer.Ordinal))
@@ -272,9 +272,6 @@ public static class SyntheticNetworkGenerator
             }
         }
     }
-
-    private static string Quote(string field) =>
-        field.IndexOfAny([',', '"', '\n']) >= 0 ? "\"" + field.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"" : field;
 
     private static List<Species> MakeSpecies(int count, Random random)
     {

@@ -1,12 +1,75 @@
 using System.Globalization;
 using System.Text.Json;
 using PathFinder.Cli.Tests.TestSupport;
+using PathFinder.Tests.TestSupport;
 
 namespace PathFinder.Cli.Tests.Commands;
 
-public sealed class SolveCommandTests
+public sealed class SolveCommandTests : IDisposable
 {
     private static readonly string Demo = RepoPaths.Demo("combustion-lab");
+
+    private readonly TempFolder _folder = new();
+
+    public void Dispose() => _folder.Dispose();
+
+    [Fact]
+    public void Solve_Csv_GuardsNamesASpreadsheetWouldRun_AndKeepsNumbersAsNumbers()
+    {
+        // Given species keyed @SUM(A1) and -Y|<b>
+        string network = HostileNetwork.Write(_folder);
+
+        // When the solution is written as CSV
+        CliRun run = CliRun.Of("solve", network, "--format", "csv", "--no-adjust");
+
+        // Then the names are text cells starting with an apostrophe, the values plain numbers
+        Assert.Equal(ExitCodes.Success, run.ExitCode);
+        string[] lines = run.Out.Split('\n', StringSplitOptions.RemoveEmptyEntries);
+        string sum = Assert.Single(lines, line => line.Contains("SUM", StringComparison.Ordinal));
+        Assert.StartsWith("'@SUM(A1),-100.0", sum, StringComparison.Ordinal);
+        Assert.StartsWith("CO2(g),-393.5", Assert.Single(lines, line => line.Contains("CO2", StringComparison.Ordinal)), StringComparison.Ordinal);
+        Assert.StartsWith("'-Y|<b>,-10.05,", Assert.Single(lines, line => line.Contains("-Y", StringComparison.Ordinal)), StringComparison.Ordinal);
+        Assert.DoesNotContain(lines, line => line[0] is '=' or '+' or '-' or '@');
+    }
+
+    [Fact]
+    public void Solve_Covariance_GuardsTextCellsAndKeepsNumbers()
+    {
+        // Given the hostile network
+        string network = HostileNetwork.Write(_folder);
+        string file = Path.Combine(_folder.Path, "cov.csv");
+
+        // When the covariance is written
+        CliRun run = CliRun.Of("solve", network, "--no-adjust", "--covariance", file);
+
+        // Then every line has three cells, the last a number, and no cell starts like a formula
+        Assert.Equal(ExitCodes.Success, run.ExitCode);
+        string[] lines = File.ReadAllText(file).Split('\n', StringSplitOptions.RemoveEmptyEntries);
+        Assert.Equal("row,column,covariance", lines[0]);
+        Assert.Equal(10, lines.Length);
+        foreach (string line in lines.Skip(1))
+        {
+            string[] cells = line.Split(',');
+            Assert.Equal(3, cells.Length);
+            Assert.True(double.TryParse(cells[2], NumberStyles.Float, CultureInfo.InvariantCulture, out _), line);
+            Assert.DoesNotContain(cells, cell => cell.Length > 0 && cell[0] is '=' or '+' or '@' or '-' && !double.TryParse(cell, NumberStyles.Float, CultureInfo.InvariantCulture, out _));
+        }
+    }
+
+    [Fact]
+    public void Solve_Markdown_EscapesPipesAndHtmlInNames()
+    {
+        // Given a species keyed -Y|<b>
+        string network = HostileNetwork.Write(_folder);
+
+        // When the solution is written as Markdown
+        CliRun run = CliRun.Of("solve", network, "--format", "markdown", "--no-adjust");
+
+        // Then the pipe cannot open a column and the tag is not HTML
+        Assert.Equal(ExitCodes.Success, run.ExitCode);
+        Assert.Contains("| -Y\\|\\<b\\> | -10.05 |", run.Out, StringComparison.Ordinal);
+        Assert.DoesNotContain("<b>", run.Out, StringComparison.Ordinal);
+    }
 
     [Fact]
     public void Solve_Json_FollowsTheContract_WithNamesAsWrittenInTheData()

@@ -58,6 +58,11 @@ public sealed class NetworkReaderTests : IDisposable
     [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,1e6,kJ/mol,,lab", "uncertainty-out-of-range", "1e6")]
     [InlineData("m1,CO(g) + 1/2 O2(g) -> CO2(g),dX,-283.0,0.2,kJ/mol,,lab", "unknown-property", "dX")]
     [InlineData(",CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2,kJ/mol,,lab", "missing-id", "")]
+    [InlineData("m\u001b[2J1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2,kJ/mol,,lab", "control-character-in-id", "\u001b")]
+    [InlineData("\"m\u001b]0;pwned\u0007\",CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2,kJ/mol,,lab", "control-character-in-id", "\u001b")]
+    [InlineData("\"m\n1\",CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2,kJ/mol,,lab", "control-character-in-id", "\n")]
+    [InlineData("m\t1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2,kJ/mol,,lab", "control-character-in-id", "\t")]
+    [InlineData("m\u202e1,CO(g) + 1/2 O2(g) -> CO2(g),dH,-283.0,0.2,kJ/mol,,lab", "control-character-in-id", "\u202e")]
     [InlineData("m1,,dH,-283.0,0.2,kJ/mol,,lab", "missing-equation", ",dH")]
     [InlineData("m1,O2(g),dH,1.0,0.2,kJ/mol,,lab", "reference-formation", "O2(g)")]
     public void Read_GivesExactlyOneDiagnosticAtTheFaultyField(string row, string code, string marker)

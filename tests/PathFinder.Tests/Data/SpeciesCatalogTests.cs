@@ -86,6 +86,7 @@ public sealed class SpeciesCatalogTests : IDisposable
     [InlineData("key,formula,state\nEt OH,C2H5OH,l\n", "bad-species-key", 2, 1)]
     [InlineData("key,formula,state\n,C2H5OH,l\n", "bad-species-key", 2, 1)]
     [InlineData("key,formula,state\nA+B,C2H5OH,l\n", "bad-species-key", 2, 1)]
+    [InlineData("key,formula,state\nDME\u001b[2J,C2H6O,g\n", "bad-species-key", 2, 1)]
     [InlineData("key,formula,state\nEtOH,C2H5OH,l\nEtOH,CH3OCH3,g\n", "duplicate-species-key", 3, 1)]
     [InlineData("key,formula,state\nEtOH,C2H5Xy,l\n", "unknown-element", 2, 10)]
     [InlineData("key,formula,state\nEtOH,C2H5OH,plasma\n", "bad-state", 2, 13)]

@@ -183,6 +183,20 @@ public class NetworkDiagramRendererTests
     }
 
     [Fact]
+    public void Render_ShowsControlCharactersInLabelsAndStaysValidXml()
+    {
+        // Given labels with a screen clear, a C1 control, DEL, a bidi override and an unpaired surrogate
+        var diagram = new NetworkDiagram("t\u001b]0;pwned\u0007", [NetworkNode.Measurement("m\u001b[2J\u009b\u007f", "x\u202e\ud800")], []);
+
+        SvgDiagram svg = NetworkDiagramRenderer.Render(diagram).Diagram!;
+
+        // Then the SVG parses as XML, holds no control character except line breaks, and shows the sequences
+        XDocument doc = SvgChecks.ParseValid(svg);
+        Assert.DoesNotContain(svg.Svg, c => (char.IsControl(c) && c is not ('\n' or '\t' or '\r')) || char.IsSurrogate(c) || c == '\u202e');
+        Assert.Contains(doc.Descendants(SvgChecks.Svg + "text"), t => t.Value == "m\\u001B[2J\\u009B\\u007F");
+    }
+
+    [Fact]
     public void Render_IsDeterministicAndCultureInvariant()
     {
         string first = RenderSample().Diagram!.Svg;

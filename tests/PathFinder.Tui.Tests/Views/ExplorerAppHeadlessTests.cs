@@ -106,6 +106,32 @@ public sealed class ExplorerAppHeadlessTests : IDisposable
     }
 
     [Fact]
+    public void Control_characters_from_the_data_are_shown_not_sent_to_the_terminal()
+    {
+        // Given the demo with a first file whose source clears the screen and retitles the window, and whose note is HTML
+        File.WriteAllText(Path.Combine(_demo.Folder, "a-first.csv"),
+            "id,equation,property,value,uncertainty,unit,temperature,source,notes\n" +
+            "Z01,H2O(l),dH,-285.80,0.05,kJ/mol,,\"\u001b]0;pwned\u0007\u001b[2Jlab\",|<script>\n");
+        var screens = new Dictionary<string, string>();
+        using IApplication app = Headless(120, 30);
+        ExplorerViewModel vm = ExplorerApp.CreateViewModel(app, _demo.Folder, SolvedAnalysis.Analyzer);
+        using ExplorerWindow window = ExplorerApp.CreateWindow(app, vm);
+
+        // When the measurements (with the first row's details) and the sources are shown
+        var steps = new Queue<(string Name, Func<bool> Ready, Action Act)>();
+        steps.Enqueue(("measurements", () => !vm.IsBusy && ScreenText(app).Contains("ready", StringComparison.Ordinal), () => screens["measurements"] = ScreenText(app)));
+        steps.Enqueue(("sources", () => true, () => app.InjectKey(Key.F4)));
+        steps.Enqueue(("sources shown", () => window.CurrentScreen == Screen.Sources, () => screens["sources"] = ScreenText(app)));
+        steps.Enqueue(("quit", () => true, () => app.InjectKey(Key.Q.WithCtrl)));
+        RunScript(app, window, steps);
+
+        // Then the sequence appears as text in the table, the details and the sources, and no ESC or BEL is drawn
+        Assert.Contains("\\u001B]0;pwned", screens["measurements"], StringComparison.Ordinal);
+        Assert.Contains("\\u001B]0;pwned", screens["sources"], StringComparison.Ordinal);
+        Assert.DoesNotContain(screens["measurements"] + screens["sources"], c => c is '\u001b' or '\u0007');
+    }
+
+    [Fact]
     public void Every_screen_key_shows_its_screen_and_F1_lists_the_keys_at_80_by_24()
     {
         var screens = new Dictionary<string, string>();
