@@ -50,7 +50,7 @@ public static class SpeciesParser
             return ParseResult<Species>.Fail(formula.Failure);
         }
 
-        return ParseResult<Species>.Ok(Species.Create(value, state.State, name: $"{value.Text}({stateText})"));
+        return ParseResult<Species>.Ok(Species.Create(value, state.State, name: $"{value.Text}({state.State})"));
     }
 
     private static ParseResult<Species> MissingState(string text)
