@@ -850,6 +850,32 @@ public sealed class NetworkReaderTests : IDisposable
         Assert.DoesNotContain(result.Warnings, diagnostic => diagnostic.Code is "value-implausible" or "zero-for-oxygen");
     }
 
+    [Fact]
+    public void Read_StrayCsvInAFolder_IsCountedFirstAndCanBeIgnored()
+    {
+        // Given a network folder with a good file and a stray notes CSV that is no measurement table
+        string folder = Path.Combine(_folder.Path, "net");
+        Directory.CreateDirectory(folder);
+        File.WriteAllText(Path.Combine(folder, "lab.csv"), Header + "\n" + GoodRow + "\n");
+        File.WriteAllText(Path.Combine(folder, "notes.csv"), "what,when\nweigh again,monday\n");
+
+        // When it is read
+        NetworkReadResult stray = NetworkReader.Read(folder);
+
+        // Then the per-file counts name the stray file first
+        Assert.True(stray.HasErrors);
+        FileProblemCount first = stray.ProblemsByFile[0];
+        Assert.Equal((Path.Combine(folder, "notes.csv"), 1), (first.File, first.Errors));
+
+        // And when .pathfinderignore names it, the network is valid and a note says the file was not read
+        File.WriteAllText(Path.Combine(folder, ".pathfinderignore"), "# scratch files\nnotes*.csv\n");
+        NetworkReadResult ignored = NetworkReader.Read(folder);
+        Assert.False(ignored.HasErrors);
+        Diagnostic note = Assert.Single(ignored.Notes);
+        Assert.Equal(("skipped-file", Path.Combine(folder, "notes.csv")), (note.Code, note.Location.File));
+        Assert.Contains(".pathfinderignore", note.Message, StringComparison.Ordinal);
+    }
+
     private static int ColumnOf(string line, string marker)
     {
         int index = line.IndexOf(marker, StringComparison.Ordinal);
