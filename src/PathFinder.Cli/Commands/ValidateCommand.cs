@@ -111,6 +111,16 @@ public sealed class ValidateCommand
         output.WriteLine();
         string noteCount = notes > 0 ? string.Create(CultureInfo.InvariantCulture, $", {notes} note(s) on entries not read") : "";
         output.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{errors} error(s), {warnings} warning(s){noteCount}"));
+        if (errors > 0)
+        {
+            foreach (FileProblemCount file in result.ProblemsByFile)
+            {
+                output.WriteLine(string.Create(CultureInfo.InvariantCulture, $"  {file.File}: {file.Errors} error(s), {file.Warnings} warning(s)"));
+            }
+
+            output.WriteLine();
+        }
+
         foreach (Diagnostic diagnostic in diagnostics)
         {
             output.WriteLine($"  {diagnostic}");

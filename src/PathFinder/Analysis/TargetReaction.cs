@@ -10,6 +10,9 @@ namespace PathFinder.Analysis;
 /// </remarks>
 public static class TargetReaction
 {
+    /// <summary>The failure code of a formation shorthand whose formation reaction is empty (an element in its reference state).</summary>
+    private const string ReferenceFormationCode = "reference-formation";
+
     /// <summary>Reads <paramref name="text"/> against the species of <paramref name="network"/>. Never throws for bad input.</summary>
     public static ParseResult<ChemicalEquation> Parse(string text, ReactionNetwork network)
     {
@@ -36,7 +39,10 @@ public static class TargetReaction
         ParseResult<ChemicalEquation> equation = EquationParser.Parse(text.Trim(), Resolve);
         if (!equation.TryGetValue(out ChemicalEquation? value))
         {
-            return equation;
+            // The parser's hint for an empty formation speaks of a data row; a target is no row.
+            return equation.Failure.Code == ReferenceFormationCode
+                ? ParseResult<ChemicalEquation>.Fail(equation.Failure with { Hint = "its formation quantities are zero by convention: choose a compound as the target, or write a reaction with an arrow (e.g. \"C(cr,graphite) -> C(cr,diamond)\")" })
+                : equation;
         }
 
         IReadOnlyList<string> imbalances = value.FindImbalances();

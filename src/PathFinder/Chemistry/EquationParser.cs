@@ -7,18 +7,18 @@ namespace PathFinder.Chemistry;
 
 /// <summary>Reads equations such as <c>CH4(g) + 2 O2(g) -> CO2(g) + 2 H2O(l)</c>, or a single species for its formation.</summary>
 /// <remarks>
-/// <para>Arrows: <c>-&gt;</c>, <c>→</c>, <c>=</c> or <c>&lt;=&gt;</c>. Terms are separated by a <c>+</c> with spaces around it
-/// (a <c>+</c> touching a formula is a charge: <c>Na+(aq) + Cl-(aq)</c>). Coefficients are integers, decimals or
-/// fractions (<c>1/2</c>, <c>3/2</c>, <c>0.5</c>), written before the species, with or without a space, and are
-/// kept exact.</para>
+/// <para>Arrows: <c>-&gt;</c>, <c>→</c>, <c>⟶</c>, <c>⇌</c>, <c>=</c> or <c>&lt;=&gt;</c>. Terms are separated by a <c>+</c> with
+/// spaces around it (a <c>+</c> touching a formula is a charge: <c>Na+(aq) + Cl-(aq)</c>). Coefficients are integers,
+/// decimals, fractions (<c>1/2</c>, <c>3/2</c>, <c>0.5</c>) or the vulgar fractions the diagrams print (<c>½</c>,
+/// <c>⅓</c>, ...), written before the species, with or without a space, and are kept exact.</para>
 /// <para>Formation shorthand: a single species and no arrow means its formation from the elements in their
 /// reference states (<see cref="ReferenceStates"/>).</para>
 /// </remarks>
 public static class EquationParser
 {
-    private static readonly string[] Arrows = ["<=>", "->", "→", "="];
+    private static readonly string[] Arrows = ["<=>", "->", "→", "⟶", "⇌", "="];
 
-    private static readonly System.Buffers.SearchValues<char> ArrowStarts = System.Buffers.SearchValues.Create("<-→=");
+    private static readonly System.Buffers.SearchValues<char> ArrowStarts = System.Buffers.SearchValues.Create("<-→⟶⇌=");
 
     [ThreadStatic]
     private static List<EquationTerm>? t_terms;
@@ -241,6 +241,11 @@ public static class EquationParser
     {
         term = default;
         string Word(int index) => text.Substring(words[first + index].Start, words[first + index].Length);
+        if (count > 1 && SpaceBeforeState(text, words, first, count) is { } spaced)
+        {
+            return spaced;
+        }
+
         if (count > 2)
         {
             return new ParseFailure(words[first + 2].Start, $"unexpected '{DiagnosticText.Excerpt(Word(2))}': a term is an optional coefficient and one species", "separate species with ' + ' (spaces around the plus)", "bad-equation");
@@ -254,6 +259,11 @@ public static class EquationParser
         {
             if (!RationalText.TryParse(text.AsSpan(words[first].Start, words[first].Length), out coefficient))
             {
+                if (GluedPlus(text, words[first].Start, words[first].Length) is { } glued)
+                {
+                    return glued;
+                }
+
                 return new ParseFailure(termOffset, $"'{DiagnosticText.Excerpt(Word(0))}' is not a coefficient", "write coefficients as 2, 0.5 or 3/2 before the species", "bad-coefficient");
             }
 
@@ -264,7 +274,7 @@ public static class EquationParser
         {
             ReadOnlySpan<char> word = text.AsSpan(termOffset, words[first].Length);
             int glued = 0;
-            while (glued < word.Length && (char.IsAsciiDigit(word[glued]) || word[glued] is '.' or '/'))
+            while (glued < word.Length && (char.IsAsciiDigit(word[glued]) || word[glued] is '.' or '/' || RationalText.IsVulgarFraction(word[glued])))
             {
                 glued++;
             }
@@ -305,5 +315,47 @@ public static class EquationParser
 
         term = new EquationTerm(value, sign < 0 ? -coefficient : coefficient);
         return null;
+    }
+    /// <summary>A failure for a state written apart from its formula (<c>NH3 (g)</c>), or null.</summary>
+    /// <remarks>Without this, the formula before the space is taken for a coefficient, which points the wrong way.</remarks>
+    private static ParseFailure? SpaceBeforeState(string text, List<(int Start, int Length)> words, int first, int count)
+    {
+        for (int w = first + 1; w < first + count; w++)
+        {
+            (int start, int length) = words[w];
+            (int previousStart, int previousLength) = words[w - 1];
+            if (text[start] != '(' || !char.IsAsciiLetterLower(text[Math.Min(start + 1, start + length - 1)]))
+            {
+                continue;
+            }
+
+            string formula = text.Substring(previousStart, previousLength);
+            string joined = formula + text.Substring(start, length);
+            return new ParseFailure(
+                previousStart + previousLength,
+                $"a space separates '{DiagnosticText.Excerpt(formula)}' from its state '{DiagnosticText.Excerpt(text.Substring(start, length))}'",
+                $"remove the space between the formula and the state: {DiagnosticText.Excerpt(joined)}",
+                "bad-spacing");
+        }
+
+        return null;
+    }
+
+    /// <summary>A failure for a <c>+</c> written without spaces between two terms (<c>NO(g)+1/2 O2(g)</c>), or null.</summary>
+    /// <remarks>The glued text is otherwise read as one word and reported as a bad coefficient or formula.</remarks>
+    private static ParseFailure? GluedPlus(string text, int start, int length)
+    {
+        int plus = text.IndexOf('+', start, length);
+        if (plus <= start || plus >= start + length - 1)
+        {
+            return null;
+        }
+
+        string word = text.Substring(start, length);
+        return new ParseFailure(
+            plus,
+            $"the '+' in '{DiagnosticText.Excerpt(word)}' has no spaces around it, so the two terms are read as one",
+            "put spaces around + and -> (reactants + reactants -> products); a + touching a formula is read as a charge",
+            "bad-spacing");
     }
 }

@@ -63,8 +63,9 @@ public static class RationalText
         return scaled.Sign < 0 ? "-" + text : text;
     }
 
-    /// <summary>Reads <c>2</c>, <c>0.25</c>, <c>3/2</c> or <c>-1/2</c> exactly; returns false on anything else.</summary>
-    /// <remarks>Decimals are converted exactly (0.1 is 1/10, not the nearest double).</remarks>
+    /// <summary>Reads <c>2</c>, <c>0.25</c>, <c>3/2</c>, <c>-1/2</c> or a vulgar fraction (<c>½</c>, <c>¼</c>, <c>¾</c>, <c>⅓</c>, <c>⅔</c>, <c>⅙</c>, <c>⅚</c>) exactly; returns false on anything else.</summary>
+    /// <remarks>Decimals are converted exactly (0.1 is 1/10, not the nearest double). The vulgar fractions are those the
+    /// diagrams print, so an equation copied from a diagram reads back.</remarks>
     public static bool TryParse(string text, out Fraction value)
     {
         value = Fraction.Zero;
@@ -72,6 +73,11 @@ public static class RationalText
         if (text.Length == 0)
         {
             return false;
+        }
+
+        if (text.Length == 1 && TryVulgarFraction(text[0], out value))
+        {
+            return true;
         }
 
         int slash = text.IndexOf('/', StringComparison.Ordinal);
@@ -146,6 +152,26 @@ public static class RationalText
         }
 
         return TryParse(text.ToString(), out value);
+    }
+
+    /// <summary>Whether <paramref name="symbol"/> is one of the vulgar fractions read as a coefficient: ½ ¼ ¾ ⅓ ⅔ ⅙ ⅚.</summary>
+    public static bool IsVulgarFraction(char symbol) => TryVulgarFraction(symbol, out _);
+
+    private static bool TryVulgarFraction(char symbol, out Fraction value)
+    {
+        (int numerator, int denominator) = symbol switch
+        {
+            '½' => (1, 2),
+            '¼' => (1, 4),
+            '¾' => (3, 4),
+            '⅓' => (1, 3),
+            '⅔' => (2, 3),
+            '⅙' => (1, 6),
+            '⅚' => (5, 6),
+            _ => (0, 0),
+        };
+        value = denominator == 0 ? Fraction.Zero : new Fraction(numerator, denominator);
+        return denominator != 0;
     }
 
     private static bool TryParseInteger(string text, out BigInteger value)

@@ -4,7 +4,8 @@ namespace PathFinder.Chemistry;
 /// <remarks>
 /// Identity is the composition (Hill notation with charge), the state and the label, so <c>C2H5OH(l)</c> and
 /// <c>CH3CH2OH(l)</c> are one species while ethanol and dimethyl ether need labels (declared in
-/// <c>species.csv</c>). <see cref="Name"/> is the species as first written in the data.
+/// <c>species.csv</c>). <see cref="Name"/> is the formula as first written in the data with the state in its
+/// canonical short form (<c>NH3(gas)</c> is shown as <c>NH3(g)</c>), or the key declared in <c>species.csv</c>.
 /// </remarks>
 public sealed class Species : IEquatable<Species>
 {
@@ -31,7 +32,7 @@ public sealed class Species : IEquatable<Species>
     /// <summary>The isomer label (a key from <c>species.csv</c>), or empty.</summary>
     public string Label { get; }
 
-    /// <summary>How the species is shown: as written in the data, e.g. <c>CH3OH(l)</c>, or its declared name.</summary>
+    /// <summary>How the species is shown: the formula as written in the data and the canonical state, e.g. <c>CH3OH(l)</c>, or its declared key.</summary>
     public string Name { get; }
 
     /// <summary>A descriptive name declared in <c>species.csv</c> (e.g. "dimethyl ether"), or empty.</summary>

@@ -50,11 +50,24 @@ public static class SpeciesParser
             return ParseResult<Species>.Fail(formula.Failure);
         }
 
-        return ParseResult<Species>.Ok(Species.Create(value, state.State, name: $"{value.Text}({stateText})"));
+        return ParseResult<Species>.Ok(Species.Create(value, state.State, name: $"{value.Text}({state.State})"));
     }
 
     private static ParseResult<Species> MissingState(string text)
     {
+        // A state in capitals, NH3(G): the G would otherwise be reported as an unknown element symbol.
+        int open = text.LastIndexOf('(');
+        if (text[^1] == ')' && open >= 0 && open + 1 < text.Length - 1 && char.IsAsciiLetterUpper(text[open + 1]))
+        {
+            string written = text[(open + 1)..^1];
+            ParseStateResult lower = PhysicalState.Parse(written.ToLowerInvariant());
+            if (lower.Error is null)
+            {
+                string fixedText = $"{text[..open]}({lower.State})";
+                return ParseResult<Species>.Fail(open + 1, "bad-state", $"the state '({DiagnosticText.Excerpt(written)})' is in capitals; states are written in lower case", $"write {DiagnosticText.Excerpt(fixedText)}");
+            }
+        }
+
         ParseResult<Formula> formula = FormulaParser.Parse(text);
         if (!formula.Success)
         {

@@ -1,3 +1,5 @@
+using System.Text.RegularExpressions;
+
 namespace PathFinder.Data;
 
 /// <summary>The file names a network folder may hold besides measurement files.</summary>
@@ -15,6 +17,9 @@ public static class NetworkFiles
     /// <summary>Declared systematic uncertainties per source: <c>source,systematic,unit[,note]</c>.</summary>
     public const string SourcesFileName = "sources.csv";
 
+    /// <summary>A folder network's list of entries not to read: one glob per line (<c>*</c>, <c>?</c>), <c>#</c> starts a comment.</summary>
+    public const string IgnoreFileName = ".pathfinderignore";
+
     /// <summary>The measurement files of a network: the file itself, or every other <c>*.csv</c> in the folder, sorted.</summary>
     public static IReadOnlyList<string> MeasurementFiles(string path) => MeasurementFiles(path, out _);
 
@@ -25,7 +30,9 @@ public static class NetworkFiles
     /// recursively), other files, editors' lock files (<c>~$x.csv</c>, <c>.~lock.x.csv#</c>, <c>.#x.csv</c>), FIFOs,
     /// devices and sockets (reading them would block or never end), an auxiliary table in the wrong letter case,
     /// and a single-file network's companions (<c>lab.species.csv</c>), which a folder network does not read.
-    /// The curation file is read by the commands and is not listed.
+    /// The curation file is read by the commands and is not listed. Entries whose names match a line of
+    /// <see cref="IgnoreFileName"/> (globs with <c>*</c> and <c>?</c>, any letter case, like <c>*.csv</c>) are named
+    /// as skipped with the line that matched; the ignore file itself is read, not listed.
     /// </remarks>
     /// <param name="path">A file or a folder.</param>
     /// <param name="skipped">The entries of a folder that are not read; empty for a file.</param>
@@ -39,10 +46,21 @@ public static class NetworkFiles
 
         var files = new List<string>();
         var notRead = new List<SkippedEntry>();
+        IReadOnlyList<(string Pattern, int Line, Regex Glob)> ignored = ReadIgnoreList(Path.Combine(path, IgnoreFileName));
         foreach (string entry in Directory.EnumerateFileSystemEntries(path, "*", SearchOption.TopDirectoryOnly).Order(StringComparer.Ordinal))
         {
             string name = Path.GetFileName(entry);
-            if (Directory.Exists(entry))
+            (string Pattern, int Line, Regex Glob) match = ignored.FirstOrDefault(rule => rule.Glob.IsMatch(name));
+            if (name == IgnoreFileName && FileKinds.IsRegularFile(entry))
+            {
+                continue;
+            }
+
+            if (match.Glob is not null)
+            {
+                notRead.Add(new SkippedEntry(entry, $"matched by '{match.Pattern}' ({IgnoreFileName} line {match.Line})", $"remove that line from {IgnoreFileName} to have it read"));
+            }
+            else if (Directory.Exists(entry))
             {
                 notRead.Add(new SkippedEntry(entry, "a subfolder: a network folder is not read recursively", "move its CSV files into the network folder, or give the subfolder as a network of its own"));
             }
@@ -77,6 +95,32 @@ public static class NetworkFiles
 
         skipped = notRead;
         return files;
+    }
+
+    /// <summary>The globs of an ignore file, with their line numbers; none when the file is absent or not a regular file.</summary>
+    private static IReadOnlyList<(string Pattern, int Line, Regex Glob)> ReadIgnoreList(string file)
+    {
+        if (!File.Exists(file) || !FileKinds.IsRegularFile(file))
+        {
+            return [];
+        }
+
+        var rules = new List<(string Pattern, int Line, Regex Glob)>();
+        int line = 0;
+        foreach (string text in File.ReadLines(file))
+        {
+            line++;
+            string pattern = text.Trim();
+            if (pattern.Length == 0 || pattern.StartsWith('#'))
+            {
+                continue;
+            }
+
+            string expression = "^" + Regex.Escape(pattern).Replace(@"\*", ".*", StringComparison.Ordinal).Replace(@"\?", ".", StringComparison.Ordinal) + "$";
+            rules.Add((pattern, line, new Regex(expression, RegexOptions.IgnoreCase | RegexOptions.CultureInvariant)));
+        }
+
+        return rules;
     }
 
     /// <summary>Whether a file name is an editor's lock file: <c>~$x.csv</c> (Office), <c>.~lock.x.csv#</c> (LibreOffice), <c>.#x.csv</c> (Emacs).</summary>

@@ -110,6 +110,17 @@ public sealed class NetworkReadResult
     /// <remarks>Analysis commands show these even though they show no other warning: a row left out must never go unsaid.</remarks>
     public IEnumerable<Diagnostic> UnusedRows => _rowDiagnostics.Where(diagnostic => diagnostic.Code == NetworkReader.ConventionalOnlyCode);
 
+    /// <summary>Errors and warnings per file, files with errors first (most first), then by name; files without either are left out.</summary>
+    /// <remarks>Answers "which file is the problem in?" before the list: a stray CSV in a network folder shows as one line.</remarks>
+    public IReadOnlyList<FileProblemCount> ProblemsByFile =>
+        Diagnostics
+            .Where(diagnostic => diagnostic.Severity != Severity.Note)
+            .GroupBy(diagnostic => diagnostic.Location.File, StringComparer.Ordinal)
+            .Select(group => new FileProblemCount(group.Key, group.Count(diagnostic => diagnostic.Severity == Severity.Error), group.Count(diagnostic => diagnostic.Severity == Severity.Warning)))
+            .OrderByDescending(count => count.Errors)
+            .ThenBy(count => count.File, StringComparer.Ordinal)
+            .ToList();
+
     /// <summary>The warnings, in file and line order.</summary>
     public IEnumerable<Diagnostic> Warnings => Diagnostics.Where(diagnostic => diagnostic.Severity == Severity.Warning);
 

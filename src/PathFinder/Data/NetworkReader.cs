@@ -209,6 +209,11 @@ public static class NetworkReader
             if (measurement is not null && !duplicate)
             {
                 measurements.Add(measurement);
+                if (ValuePlausibility.Check(measurement, row.LocationOf(map.Value, "value")) is { } implausible)
+                {
+                    diagnostics.Add(implausible);
+                }
+
                 if (ThermoModel.MeasuresOnlyConventions(measurement))
                 {
                     diagnostics.Add(Diagnostic.Warning(ConventionalOnlyCode, measurement.Location, $"'{DiagnosticText.Excerpt(measurement.Id)}' involves only species whose contributions are zero by convention (elements in their reference states, H+(aq), e-): it only checks that convention and is not used by any analysis", "its value should be 0 within its uncertainty; drop the row, or check the equation"));
@@ -565,6 +570,7 @@ public static class NetworkReader
             }
         }
 
+        TypoWarnings.Add(measurements, catalog, uses.Keys.ToHashSet(), diagnostics);
         foreach ((Species species, List<Measurement> list) in uses)
         {
             if (list.Count == 1 && !ReferenceStates.HasZeroFormationProperties(species))

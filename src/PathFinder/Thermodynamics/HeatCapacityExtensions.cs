@@ -6,8 +6,8 @@ public static class HeatCapacityExtensions
     /// <summary>A warning when <paramref name="temperature"/> lies outside the model's valid range, otherwise <see langword="null"/>.</summary>
     /// <param name="model">The heat-capacity model.</param>
     /// <param name="temperature">Temperature in K.</param>
-    /// <param name="tolerance">Absolute tolerance in K; default <see cref="TemperatureRange.DefaultTolerance"/>.</param>
-    public static TemperatureRangeWarning? CheckTemperature(this IHeatCapacity model, double temperature, double tolerance = TemperatureRange.DefaultTolerance)
+    /// <param name="tolerance">Absolute tolerance in K; default <see cref="TemperatureRange.ExtrapolationTolerance"/> (10 K).</param>
+    public static TemperatureRangeWarning? CheckTemperature(this IHeatCapacity model, double temperature, double tolerance = TemperatureRange.ExtrapolationTolerance)
     {
         ArgumentNullException.ThrowIfNull(model);
         return model.ValidRange.Contains(temperature, tolerance)
@@ -19,8 +19,8 @@ public static class HeatCapacityExtensions
     /// <param name="model">The heat-capacity model.</param>
     /// <param name="first">One end of the interval in K.</param>
     /// <param name="second">The other end in K (either order).</param>
-    /// <param name="tolerance">Absolute tolerance in K; default <see cref="TemperatureRange.DefaultTolerance"/>.</param>
-    public static TemperatureRangeWarning? CheckInterval(this IHeatCapacity model, double first, double second, double tolerance = TemperatureRange.DefaultTolerance)
+    /// <param name="tolerance">Absolute tolerance in K; default <see cref="TemperatureRange.ExtrapolationTolerance"/> (10 K).</param>
+    public static TemperatureRangeWarning? CheckInterval(this IHeatCapacity model, double first, double second, double tolerance = TemperatureRange.ExtrapolationTolerance)
     {
         ArgumentNullException.ThrowIfNull(model);
         return model.ValidRange.ContainsInterval(first, second, tolerance)

@@ -70,8 +70,8 @@ public sealed class ReactionHeatCapacity<TKey>
     /// <summary>The species whose models do not cover the whole interval between the two temperatures.</summary>
     /// <param name="from">T1 in K.</param>
     /// <param name="to">T2 in K.</param>
-    /// <param name="tolerance">Absolute tolerance in K; default <see cref="TemperatureRange.DefaultTolerance"/>.</param>
-    public IReadOnlyList<SpeciesRangeWarning<TKey>> CheckInterval(double from, double to, double tolerance = TemperatureRange.DefaultTolerance)
+    /// <param name="tolerance">Absolute tolerance in K; default <see cref="TemperatureRange.ExtrapolationTolerance"/> (10 K).</param>
+    public IReadOnlyList<SpeciesRangeWarning<TKey>> CheckInterval(double from, double to, double tolerance = TemperatureRange.ExtrapolationTolerance)
     {
         var warnings = new List<SpeciesRangeWarning<TKey>>();
         foreach (ReactionSpecies<TKey> s in _species)
@@ -89,16 +89,16 @@ public sealed class ReactionHeatCapacity<TKey>
     /// <param name="enthalpy">ΔrH(T1) in J/mol.</param>
     /// <param name="from">T1 in K (&gt; 0).</param>
     /// <param name="to">T2 in K (&gt; 0).</param>
-    /// <param name="tolerance">Range tolerance in K; default <see cref="TemperatureRange.DefaultTolerance"/>.</param>
-    public KirchhoffShift<TKey> ShiftEnthalpy(double enthalpy, double from, double to, double tolerance = TemperatureRange.DefaultTolerance) =>
+    /// <param name="tolerance">Range tolerance in K; default <see cref="TemperatureRange.ExtrapolationTolerance"/> (10 K).</param>
+    public KirchhoffShift<TKey> ShiftEnthalpy(double enthalpy, double from, double to, double tolerance = TemperatureRange.ExtrapolationTolerance) =>
         new(from, to, enthalpy, IntegrateHeatCapacity(from, to), CheckInterval(from, to, tolerance), SpeciesWithoutData);
 
     /// <summary>Moves a reaction entropy from <paramref name="from"/> to <paramref name="to"/>: ΔrS(T2) = ΔrS(T1) + ∫ΔrCp/T dT.</summary>
     /// <param name="entropy">ΔrS(T1) in J/(mol·K).</param>
     /// <param name="from">T1 in K (&gt; 0).</param>
     /// <param name="to">T2 in K (&gt; 0).</param>
-    /// <param name="tolerance">Range tolerance in K; default <see cref="TemperatureRange.DefaultTolerance"/>.</param>
-    public KirchhoffShift<TKey> ShiftEntropy(double entropy, double from, double to, double tolerance = TemperatureRange.DefaultTolerance) =>
+    /// <param name="tolerance">Range tolerance in K; default <see cref="TemperatureRange.ExtrapolationTolerance"/> (10 K).</param>
+    public KirchhoffShift<TKey> ShiftEntropy(double entropy, double from, double to, double tolerance = TemperatureRange.ExtrapolationTolerance) =>
         new(from, to, entropy, IntegrateHeatCapacityOverTemperature(from, to), CheckInterval(from, to, tolerance), SpeciesWithoutData);
 
     private double Sum(Func<IHeatCapacity, double> term)

@@ -13,6 +13,16 @@ public readonly record struct TemperatureRange
     /// <summary>The default tolerance, in K, used when testing whether a temperature lies in a range: 0.01 K.</summary>
     public const double DefaultTolerance = 0.01;
 
+    /// <summary>How far, in K, a temperature may lie outside a heat-capacity model's range before its use is called an extrapolation: 10 K.</summary>
+    /// <remarks>
+    /// Many published polynomials start at 300 K (or end a few kelvin short of a round number) although they describe
+    /// the substance at 298.15 K just as well: a heat capacity changes by a fraction of a percent over 2 K, and
+    /// ∫Cp dT over 10 K at the edge of a range is tens of J/mol, far below the uncertainty of any ΔH. Without this,
+    /// every calculation at 298.15 K with such data would carry an extrapolation note. Common practice, no source:
+    /// tables are used a few kelvin beyond their stated limits without comment.
+    /// </remarks>
+    public const double ExtrapolationTolerance = 10.0;
+
     /// <summary>Creates a range; the bounds must satisfy 0 ≤ <paramref name="minimum"/> &lt; <paramref name="maximum"/>.</summary>
     /// <param name="minimum">Lower bound in K (finite, non-negative).</param>
     /// <param name="maximum">Upper bound in K (greater than the minimum; may be +∞).</param>

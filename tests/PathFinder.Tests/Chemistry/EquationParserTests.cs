@@ -102,6 +102,43 @@ public sealed class EquationParserTests
         Assert.Contains("spaces around the plus", failure.Hint, StringComparison.Ordinal);
     }
 
+    /// <summary>The exact cases of issue 16 whose messages pointed the wrong way: each now says what to change.</summary>
+    [Theory]
+    [InlineData("NH3(G)", 4, "bad-state", "lower case", "NH3(g)")]
+    [InlineData("NH3 (g)", 3, "bad-spacing", "remove the space", "NH3(g)")]
+    [InlineData("NO(g)+1/2 O2(g)->NO2(g)", 5, "bad-spacing", "put spaces around + and ->", "+")]
+    [InlineData("2 NH3 (g) -> N2(g) + 3 H2(g)", 5, "bad-spacing", "remove the space", "NH3(g)")]
+    public void Parse_PointsMistypedSpeciesAndSeparatorsTheRightWay(string text, int offset, string code, string fix, string named)
+    {
+        // When an equation with a capital state, a space before the state or a glued '+' is read
+        ParseFailure failure = EquationParser.Parse(text).Failure!;
+
+        // Then the message no longer blames an element symbol or a coefficient, and the hint says what to change
+        Assert.Equal(code, failure.Code);
+        Assert.Equal(offset, failure.Offset);
+        Assert.DoesNotContain("is not an element symbol", failure.Message, StringComparison.Ordinal);
+        Assert.DoesNotContain("is not a coefficient", failure.Message, StringComparison.Ordinal);
+        Assert.Contains(fix, failure.Message + " " + failure.Hint, StringComparison.Ordinal);
+        Assert.Contains(named, failure.Message + " " + failure.Hint, StringComparison.Ordinal);
+    }
+
+    [Theory]
+    [InlineData("NO(g) + ½ O2(g) → NO2(g)", "O2(g)", 1, 2)]
+    [InlineData("NO(g) + ½O2(g) ⇌ NO2(g)", "O2(g)", 1, 2)]
+    [InlineData("NO(g) + ½ O2(g) ⟶ NO2(g)", "O2(g)", 1, 2)]
+    [InlineData("NO(g) + ½ O2(g) = NO2(g)", "O2(g)", 1, 2)]
+    [InlineData("¼ N2(g) + ¾ H2(g) -> ½ NH3(g)", "N2(g)", 1, 4)]
+    [InlineData("⅓ N2(g) + H2(g) -> ⅔ NH3(g)", "N2(g)", 1, 3)]
+    public void Parse_ReadsTheArrowsAndFractionsTheDiagramsPrint(string text, string reactant, int numerator, int denominator)
+    {
+        // When an equation copied from a diagram is read
+        ChemicalEquation equation = EquationParser.Parse(text).Value;
+
+        // Then the reactant's coefficient is the exact fraction and the equation balances
+        Assert.Equal(new Fraction(-numerator, denominator), equation.CoefficientOf(Species.Parse(reactant)));
+        Assert.Empty(equation.FindImbalances());
+    }
+
     [Fact]
     public void Parse_UsesTheResolverForEverySpecies()
     {

@@ -15,6 +15,13 @@ public sealed class RationalTextTests
     [InlineData("-0.5", -1, 2)]
     [InlineData(" 7 ", 7, 1)]
     [InlineData(".5", 1, 2)]
+    [InlineData("½", 1, 2)]
+    [InlineData("¼", 1, 4)]
+    [InlineData("¾", 3, 4)]
+    [InlineData("⅓", 1, 3)]
+    [InlineData("⅔", 2, 3)]
+    [InlineData("⅙", 1, 6)]
+    [InlineData("⅚", 5, 6)]
     public void TryParse_ReadsExactly(string text, int numerator, int denominator)
     {
         Assert.True(RationalText.TryParse(text, out Fraction value));

@@ -23,6 +23,17 @@ public sealed class SpeciesTests
         Assert.Equal("CH3CH2OH(l)", species.ToString());
     }
 
+    [Theory]
+    [InlineData("NH3(gas)", "NH3(g)")]
+    [InlineData("H2O(liquid)", "H2O(l)")]
+    [InlineData("NaCl(s)", "NaCl(cr)")]
+    [InlineData("C(graphite)", "C(cr,graphite)")]
+    [InlineData("S(cr, Rhombic)", "S(cr,rhombic)")]
+    public void Name_KeepsTheFormulaAsWrittenAndShowsTheCanonicalState(string text, string name)
+    {
+        Assert.Equal(name, Species.Parse(text).Name);
+    }
+
     [Fact]
     public void Label_TellsIsomersApart()
     {

@@ -26,6 +26,25 @@ public sealed class NetworkFilesTests : IDisposable
     }
 
     [Fact]
+    public void MeasurementFiles_LeavesOutWhatThePathfinderignoreFileNames()
+    {
+        // Given a folder with a stray notes CSV and an ignore file with a comment, a blank line and two globs
+        _folder.Write("a.csv", "");
+        _folder.Write("Notes-2024.CSV", "");
+        _folder.Write("old1.csv", "");
+        _folder.Write(".pathfinderignore", "# not data\n\nnotes*.csv\nold?.csv\n");
+
+        // When the measurement files are listed
+        IReadOnlyList<string> files = NetworkFiles.MeasurementFiles(_folder.Path, out IReadOnlyList<SkippedEntry> skipped);
+
+        // Then the matching files (any letter case) are skipped with the line that matched, and the ignore file is not listed
+        Assert.Equal(["a.csv"], files.Select(Path.GetFileName));
+        Assert.Equal(["Notes-2024.CSV", "old1.csv"], skipped.Select(entry => Path.GetFileName(entry.Path)));
+        Assert.Contains("'notes*.csv' (.pathfinderignore line 3)", skipped[0].Reason, StringComparison.Ordinal);
+        Assert.Contains("'old?.csv' (.pathfinderignore line 4)", skipped[1].Reason, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void MeasurementFiles_OfAFileIsTheFile()
     {
         string file = _folder.Write("lab.csv", "");

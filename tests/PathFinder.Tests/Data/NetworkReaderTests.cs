@@ -807,6 +807,80 @@ public sealed class NetworkReaderTests : IDisposable
         Assert.Equal("EtOH", result.Network["m1"].Equation.Terms[0].Species.Label);
     }
 
+    // ---- typos that parse, values far outside their property's range (issue 16) ----
+
+    /// <summary>Rows that parse and balance but hold a likely typo; the second row, when given, uses the intended species.</summary>
+    [Theory]
+    [InlineData("m1,H20(g),dH,-241.8,0.1,kJ/mol,,lab", "m2,H2(g) + 1/2 O2(g) -> H2O(g),dH,-241.8,0.1,kJ/mol,,lab", "zero-for-oxygen", "0(g),dH", "did you mean H2O(g)?")]
+    [InlineData("m1,N02(g),S,240.1,0.2,J/(mol·K),,lab", "", "zero-for-oxygen", "02(g)", "did you mean NO2(g)?")]
+    [InlineData("m1,N02(g) + 2 O2(g) -> N2O4(g),dH,-57.2,0.5,kJ/mol,,lab", "m2,1/2 N2(g) + O2(g) -> NO2(g),dH,33.1,0.8,kJ/mol,,lab", "zero-for-oxygen", "02(g) +", "did you mean NO2(g)?")]
+    [InlineData("m1,NH3(g),dH,-45940,0.35,kJ/mol,,lab", "", "value-implausible", "-45940", "J/mol labelled kJ/mol")]
+    [InlineData("m1,1/2 N2(g) + 3/2 H2(g) -> NH3(g),dH,-45940,0.35,kJ/mol,,lab", "", "value-implausible", "-45940", "÷1000 gives -45.94 kJ/mol")]
+    [InlineData("m1,NH3(g),S,0.19277,0.0005,J/(mol·K),,lab", "", "value-implausible", "0.19277", "kJ/(mol·K) labelled J/(mol·K)")]
+    [InlineData("m1,NH3(g),S,-192.77,0.05,J/(mol·K),,lab", "", "value-implausible", "-192.77", "check the unit")]
+    [InlineData("m1,NH3(g),S,1927.7,0.5,J/(mol·K),,lab", "", "value-implausible", "1927.7", "check the unit")]
+    public void Read_WarnsAboutLikelyTyposThatParse(string row, string other, string code, string marker, string text)
+    {
+        // Given rows that are valid as written but hold a likely typo
+        string file = _folder.Write("lab.csv", Header + "\n" + row + "\n" + (other.Length > 0 ? other + "\n" : ""));
+
+        // When they are read
+        NetworkReadResult result = NetworkReader.Read(file);
+
+        // Then the rows are kept, and one warning with the code sits on line 2 at the digit or value, saying what was likely meant
+        Assert.False(result.HasErrors);
+        Diagnostic warning = Assert.Single(result.Warnings, diagnostic => diagnostic.Code == code);
+        Assert.Equal((2, ColumnOf(row, marker)), (warning.Location.Line, warning.Location.Column));
+        Assert.Contains(text, warning.Message + " " + warning.Hint, StringComparison.Ordinal);
+    }
+
+    /// <summary>Real values at the edges of the rules of thumb (NIST-JANAF 1998 and CODATA 1989 values, from memory) pass without that warning.</summary>
+    [Theory]
+    [InlineData("m1,Al2O3(cr),dH,-1675.7,1.3,kJ/mol,,lab")]
+    [InlineData("m1,W(g),dH,849.4,6.3,kJ/mol,,lab")]
+    [InlineData("m1,CaF2(cr),dH,-1228.0,2.0,kJ/mol,,lab")]
+    [InlineData("m1,C10H8(cr),dH,78.5,1.0,kJ/mol,,lab")]
+    [InlineData("m1,Al^3+(aq),S,-321.7,10.0,J/(mol·K),,lab")]
+    [InlineData("m1,H(g),S,114.717,0.002,J/(mol·K),,lab")]
+    [InlineData("m1,Rn(g),S,176.2,0.1,J/(mol·K),,lab")]
+    [InlineData("m1,\"C(cr,diamond)\",S,2.38,0.01,J/(mol·K),,lab")]
+    [InlineData("m1,Al(g) -> Al^3+(g) + 3 e-,dH,5139.1,1.0,kJ/mol,,lab")]
+    public void Read_RealValuesAtTheEdges_AreNotWarnedAbout(string row)
+    {
+        string file = _folder.Write("lab.csv", Header + "\n" + row + "\n");
+
+        NetworkReadResult result = NetworkReader.Read(file);
+
+        Assert.False(result.HasErrors);
+        Assert.DoesNotContain(result.Warnings, diagnostic => diagnostic.Code is "value-implausible" or "zero-for-oxygen");
+    }
+
+    [Fact]
+    public void Read_StrayCsvInAFolder_IsCountedFirstAndCanBeIgnored()
+    {
+        // Given a network folder with a good file and a stray notes CSV that is no measurement table
+        string folder = Path.Combine(_folder.Path, "net");
+        Directory.CreateDirectory(folder);
+        File.WriteAllText(Path.Combine(folder, "lab.csv"), Header + "\n" + GoodRow + "\n");
+        File.WriteAllText(Path.Combine(folder, "notes.csv"), "what,when\nweigh again,monday\n");
+
+        // When it is read
+        NetworkReadResult stray = NetworkReader.Read(folder);
+
+        // Then the per-file counts name the stray file first
+        Assert.True(stray.HasErrors);
+        FileProblemCount first = stray.ProblemsByFile[0];
+        Assert.Equal((Path.Combine(folder, "notes.csv"), 1), (first.File, first.Errors));
+
+        // And when .pathfinderignore names it, the network is valid and a note says the file was not read
+        File.WriteAllText(Path.Combine(folder, ".pathfinderignore"), "# scratch files\nnotes*.csv\n");
+        NetworkReadResult ignored = NetworkReader.Read(folder);
+        Assert.False(ignored.HasErrors);
+        Diagnostic note = Assert.Single(ignored.Notes);
+        Assert.Equal(("skipped-file", Path.Combine(folder, "notes.csv")), (note.Code, note.Location.File));
+        Assert.Contains(".pathfinderignore", note.Message, StringComparison.Ordinal);
+    }
+
     private static int ColumnOf(string line, string marker)
     {
         int index = line.IndexOf(marker, StringComparison.Ordinal);

@@ -26,6 +26,34 @@ public sealed class SpeciesCatalogTests : IDisposable
         Assert.Equal("C2H6O(g)[DME]", catalog.Declared[1].Key);
     }
 
+    [Theory]
+    [InlineData("NH3(gas)", "NH3(g)", "NH3(g)")]
+    [InlineData("H2O(liquid)", "H2O(l)", "H2O(l)")]
+    [InlineData("C(graphite)", "C(cr,graphite)", "C(cr,graphite)")]
+    [InlineData("NaCl(s)", "NaCl(cr)", "NaCl(cr)")]
+    public void Resolve_OneSpeciesWrittenTwoWays_IsShownWithTheCanonicalState(string first, string second, string shown)
+    {
+        // Given a species written first with a long or implied state, then in the short form
+        SpeciesCatalog catalog = ReadCatalog("key,formula,state\n", []);
+
+        // When both spellings are resolved
+        Species a = catalog.Resolve(first).Value;
+        Species b = catalog.Resolve(second).Value;
+
+        // Then both are one species with one label, whose state is the canonical short form
+        Assert.Equal(a, b);
+        Assert.Equal(shown, a.Name);
+        Assert.Equal(shown, b.Name);
+    }
+
+    [Fact]
+    public void Resolve_DeclaredSpecies_KeepsItsDeclaredName()
+    {
+        SpeciesCatalog catalog = ReadCatalog("key,formula,state\nDME(gas),CH3OCH3,gas\n", []);
+
+        Assert.Equal("DME(gas)", catalog.Resolve("DME(gas)").Value.Name);
+    }
+
     [Fact]
     public void Resolve_PrefersDeclaredKeys()
     {

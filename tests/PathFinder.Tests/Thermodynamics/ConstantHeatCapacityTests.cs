@@ -40,6 +40,25 @@ public class ConstantHeatCapacityTests
         var model = new ConstantHeatCapacity(30, new TemperatureRange(298.15, 600));
         Assert.Null(model.CheckInterval(298.145, 600));
         Assert.Null(model.CheckTemperature(450));
-        Assert.NotNull(model.CheckTemperature(298.0));
+        Assert.NotNull(model.CheckTemperature(288.0));
+    }
+
+    [Theory]
+    [InlineData(298.15, false)]
+    [InlineData(290.0, false)]
+    [InlineData(289.9, true)]
+    [InlineData(1009.9, false)]
+    [InlineData(1010.1, true)]
+    public void CheckTemperature_AllowsTenKelvinBeyondTheRange(double temperature, bool warned)
+    {
+        // Given a polynomial range that starts at 300 K, as many published ones do
+        var model = new ConstantHeatCapacity(30, new TemperatureRange(300, 1000));
+
+        // When checked at a temperature near either end
+        TemperatureRangeWarning? warning = model.CheckTemperature(temperature);
+
+        // Then only more than TemperatureRange.ExtrapolationTolerance (10 K) outside counts as an extrapolation
+        Assert.Equal(warned, warning is not null);
+        Assert.Equal(warned, model.CheckInterval(temperature, 500) is not null);
     }
 }
