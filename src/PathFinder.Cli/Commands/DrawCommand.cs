@@ -23,6 +23,7 @@ public sealed class DrawCommand
     private readonly Option<int> _maxSteps = new("--max-steps") { Description = "Longest route searched (default 6).", DefaultValueFactory = _ => 6 };
     private readonly Option<int> _maxNodes = new("--max-nodes") { Description = $"Refuse network diagrams with more nodes than this (default {NetworkDiagramOptions.DefaultMaxNodes}; larger layouts are slow and unreadable).", DefaultValueFactory = _ => NetworkDiagramOptions.DefaultMaxNodes };
     private readonly Option<string> _output = new("--output", "-o") { Description = "The SVG file to write.", Required = true };
+    private readonly Option<bool> _force = new("--force") { Description = OutputPaths.ForceDescription };
     private readonly Option<bool> _skipInvalid = CommonOptions.SkipInvalid();
 
     /// <summary>Builds the command bound to <paramref name="context"/>.</summary>
@@ -30,7 +31,7 @@ public sealed class DrawCommand
     {
         var command = new Command("draw", "Write an SVG diagram: the network around a target, a route, a cycle or a species; or the enthalpy-level ladder of a route or cycle.")
         {
-            _network, _kind, _target, _route, _cycle, _species, _depth, _property, _maxSteps, _maxNodes, _output, _skipInvalid,
+            _network, _kind, _target, _route, _cycle, _species, _depth, _property, _maxSteps, _maxNodes, _output, _force, _skipInvalid,
         };
         _kind.AcceptOnlyFromAmong("network", "levels", "closure");
         command.SetAction(parse => Run(
@@ -46,7 +47,10 @@ public sealed class DrawCommand
                 parse.GetValue(_maxSteps),
                 parse.GetValue(_maxNodes),
                 parse.GetValue(_output)!,
-                parse.GetValue(_skipInvalid)),
+                parse.GetValue(_skipInvalid))
+            {
+                Force = parse.GetValue(_force),
+            },
             context));
         return command;
     }
@@ -69,7 +73,7 @@ public sealed class DrawCommand
 
         OptionParsing.Positive(request.Depth, "--depth");
         OptionParsing.Positive(request.MaxNodes, "--max-nodes");
-        OutputPaths.Check(request.Output, "--output");
+        OutputPaths.Check(request.Output, "--output", request.Force);
 
         AnalysisSession? session = AnalysisSession.Open(request.Network, context, request.SkipInvalid, out int exitCode);
         if (session is null)
@@ -143,7 +147,7 @@ public sealed class DrawCommand
             return ExitCodes.InvalidInput;
         }
 
-        diagram.Save(request.Output);
+        diagram.Save(request.Output, request.Force);
         context.Out.WriteLine($"wrote {request.Output} ({diagram.Width:0} × {diagram.Height:0})");
         return ExitCodes.Success;
     }
@@ -180,4 +184,8 @@ public sealed class DrawCommand
 /// <param name="MaxNodes">Node limit of network diagrams.</param>
 /// <param name="Output">The SVG path.</param>
 /// <param name="SkipInvalid">Whether to skip invalid rows.</param>
-public sealed record DrawRequest(string Network, string Kind, string? Target, int Route, int? Cycle, string? Species, int Depth, string Property, int MaxSteps, int MaxNodes, string Output, bool SkipInvalid);
+public sealed record DrawRequest(string Network, string Kind, string? Target, int Route, int? Cycle, string? Species, int Depth, string Property, int MaxSteps, int MaxNodes, string Output, bool SkipInvalid)
+{
+    /// <summary>Whether a read-only output file may be replaced (<c>--force</c>).</summary>
+    public bool Force { get; init; }
+}
