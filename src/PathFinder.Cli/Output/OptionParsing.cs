@@ -1,3 +1,4 @@
+using System.Globalization;
 using PathFinder.Analysis;
 using PathFinder.Chemistry;
 using PathFinder.Diagnostics;
@@ -32,6 +33,18 @@ public static class OptionParsing
 
         return equation;
     }
+
+    /// <summary>Requires a whole number from <paramref name="min"/> to <paramref name="max"/>; the message gives the range and <paramref name="why"/> (what the upper bound protects).</summary>
+    public static int InRange(int value, int min, int max, string option, string why) =>
+        value >= min && value <= max
+            ? value
+            : throw new UserInputException(string.Create(CultureInfo.InvariantCulture, $"{option} must be a whole number from {min:N0} to {max:N0}, not {value:N0} ({why})"));
+
+    /// <summary>Requires a finite number in (<paramref name="above"/>, <paramref name="max"/>]: above the first, at most the second.</summary>
+    public static double InRange(double value, double above, double max, string option, string why) =>
+        double.IsFinite(value) && value > above && value <= max
+            ? value
+            : throw new UserInputException(string.Create(CultureInfo.InvariantCulture, $"{option} must be above {above:G} and at most {max:G}, not {value:G} ({why})"));
 
     /// <summary>Requires a positive whole number.</summary>
     public static int Positive(int value, string option) =>

@@ -214,6 +214,23 @@ public sealed class AtomicFileTests : IDisposable
     }
 
     [Fact]
+    public void RemoveStaleTemporaries_RemovesAStaleStagingFolderOfOurs()
+    {
+        // Given a staging folder a killed 'generate' left, old enough
+        string stage = Path.Combine(_folder.Path, ".net.0123456789abcdef0123456789abcdef.tmp");
+        Directory.CreateDirectory(stage);
+        File.WriteAllText(Path.Combine(stage, "measurements.csv"), "partial");
+        Directory.SetLastWriteTimeUtc(stage, DateTime.UtcNow - AtomicFile.StaleAfter - TimeSpan.FromMinutes(1));
+
+        // When the folder is cleaned
+        int removed = AtomicFile.RemoveStaleTemporaries(_folder.Path);
+
+        // Then it is gone
+        Assert.Equal(1, removed);
+        Assert.False(Directory.Exists(stage));
+    }
+
+    [Fact]
     public void Write_WhenTheWriterFails_LeavesTheTargetAndNoTemporaryFile()
     {
         // Given an existing file
