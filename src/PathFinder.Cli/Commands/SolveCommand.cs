@@ -11,10 +11,10 @@ public sealed class SolveCommand
     private readonly Argument<string> _network = CommonOptions.Network();
     private readonly Option<string> _property = new("--property", "-p") { Description = "dH (default: ΔfH° from ΔH and ΔU data), dG (ΔfG°) or dS (S° from ΔS and S° data).", DefaultValueFactory = _ => "dH" };
     private readonly Option<bool> _noAdjust = new("--no-adjust") { Description = "Solve the data as given, without the suspect procedure." };
-    private readonly Option<double> _threshold = new("--threshold") { Description = "|z| threshold of the suspect procedure (default 2).", DefaultValueFactory = _ => 2.0 };
+    private readonly Option<double> _threshold = new("--threshold") { Description = "|z| threshold of the suspect procedure, above 0 and at most 100 (default 2).", DefaultValueFactory = _ => 2.0 };
     private readonly Option<string> _format = new("--format", "-f") { Description = "table (default), csv, json or markdown.", DefaultValueFactory = _ => "table" };
     private readonly Option<bool> _json = new("--json") { Description = "Same as --format json." };
-    private readonly Option<double?> _temperature = new("--temperature") { Description = "Also give every species' value at this temperature in K, moved with the heat-capacity data (dH: ΔfH°, needs Cp of the species and its elements; dS: S°; dG: ΔfG° from ΔH and S° data)." };
+    private readonly Option<double?> _temperature = new("--temperature") { Description = "Also give every species' value at this temperature (1 to 10000 K), moved with the heat-capacity data (dH: ΔfH°, needs Cp of the species and its elements; dS: S°; dG: ΔfG° from ΔH and S° data)." };
     private readonly Option<string?> _covariance = new("--covariance") { Description = "Also write the covariance of the solved quantities to this CSV file (row,column,covariance; n² rows for n species)." };
     private readonly Option<bool> _force = new("--force") { Description = OutputPaths.ForceDescription };
     private readonly Option<bool> _skipInvalid = CommonOptions.SkipInvalid();
@@ -45,7 +45,7 @@ public sealed class SolveCommand
     {
         ArgumentNullException.ThrowIfNull(context);
         ThermoProperty property = OptionParsing.Property(propertyCode);
-        OptionParsing.Positive(threshold, "--threshold");
+        OptionParsing.AboveAndAtMost(threshold, 0, OptionRanges.MaxThreshold, "--threshold", "a |z| in standard uncertainties");
         if (temperature is { } t)
         {
             OptionParsing.Temperature(t);
