@@ -97,6 +97,32 @@ public sealed class GenerateCommandTests : IDisposable
         Assert.True(File.Exists(Path.Combine(_folder.Path, "notes.txt")));
     }
 
+    [Fact]
+    public void Generate_TooManySpecies_SaysHowManyCanBeMade()
+    {
+        // When more species are asked for than the generator has distinct formulas
+        (int exitCode, _, string error) = Invoke("generate", "--species", "3000", "--measurements", "10", "--out", Path.Combine(_folder.Path, "out"));
+
+        // Then exit 2 at once (it used to loop forever), naming the limit
+        Assert.Equal(ExitCodes.InvalidInput, exitCode);
+        Assert.Contains("from 3 to 2,446", error, StringComparison.Ordinal);
+    }
+
+    [UnixFact]
+    public void Generate_WithForceIntoAFolderWhoseDataFileIsAFifo_ExitsTwo()
+    {
+        // Given a folder whose measurements.csv is a FIFO
+        string fifo = SpecialFiles.Fifo(Path.Combine(_folder.Path, "measurements.csv"));
+
+        // When generating into it with --force
+        (int exitCode, _, string error) = Invoke("generate", "--species", "10", "--measurements", "20", "--out", _folder.Path, "--force");
+
+        // Then it is refused before any work and the FIFO stays
+        Assert.Equal(ExitCodes.InvalidInput, exitCode);
+        Assert.Contains("FIFO", error, StringComparison.Ordinal);
+        Assert.Equal(PathFinder.IO.FileEntryKind.Fifo, PathFinder.IO.AtomicFile.Inspect(fifo).Kind);
+    }
+
     [Theory]
     [InlineData("--species", "2", "--measurements", "10")]
     [InlineData("--species", "10", "--measurements", "0")]
@@ -107,6 +133,9 @@ public sealed class GenerateCommandTests : IDisposable
     [InlineData("--species", "10", "--measurements", "10", "--entropies", "1.2")]
     [InlineData("--species", "10", "--measurements", "10", "--gibbs", "5")]
     [InlineData("--species", "10", "--measurements", "10", "--entropies", "0.5", "--gibbs", "-1")]
+    [InlineData("--species", "2447", "--measurements", "10")]
+    [InlineData("--species", "10", "--measurements", "2147483647")]
+    [InlineData("--species", "10", "--measurements", "10", "--entropies", "0.5", "--gibbs", "2000001")]
     public void Generate_BadOptionsExitTwoAndWriteNothing(params string[] options)
     {
         // Given a destination folder

@@ -8,10 +8,10 @@ namespace PathFinder.Cli.Commands;
 public sealed class CheckCommand
 {
     private readonly Argument<string> _network = CommonOptions.Network();
-    private readonly Option<double> _threshold = new("--threshold") { Description = "|z| above which a cycle, source or measurement is flagged (default 2).", DefaultValueFactory = _ => 2.0 };
-    private readonly Option<double> _inflation = new("--inflation") { Description = "Factor by which the suspect procedure enlarges an offending uncertainty per step (default 2).", DefaultValueFactory = _ => 2.0 };
-    private readonly Option<int> _maxCycle = new("--max-cycle") { Description = "Largest cycle enumerated, in measurements (default 6).", DefaultValueFactory = _ => 6 };
-    private readonly Option<int> _showCycles = new("--show-cycles") { Description = "How many cycles to list, worst first (default 10).", DefaultValueFactory = _ => 10 };
+    private readonly Option<double> _threshold = new("--threshold") { Description = "|z| above which a cycle, source or measurement is flagged, above 0 and at most 100 (default 2).", DefaultValueFactory = _ => 2.0 };
+    private readonly Option<double> _inflation = new("--inflation") { Description = "Factor by which the suspect procedure enlarges an offending uncertainty per step, above 1 and at most 100 (default 2).", DefaultValueFactory = _ => 2.0 };
+    private readonly Option<int> _maxCycle = new("--max-cycle") { Description = "Largest cycle enumerated, 1 to 64 measurements (default 6).", DefaultValueFactory = _ => 6 };
+    private readonly Option<int> _showCycles = new("--show-cycles") { Description = "How many cycles to list, worst first, 0 to 100000 (default 10).", DefaultValueFactory = _ => 10 };
     private readonly Option<bool> _json = CommonOptions.Json();
     private readonly Option<bool> _skipInvalid = CommonOptions.SkipInvalid();
 
@@ -38,13 +38,10 @@ public sealed class CheckCommand
     public static int Run(string path, double threshold, double inflation, int maxCycle, int showCycles, bool json, bool skipInvalid, CommandContext context)
     {
         ArgumentNullException.ThrowIfNull(context);
-        OptionParsing.Positive(threshold, "--threshold");
-        if (!(inflation > 1.0) || !double.IsFinite(inflation))
-        {
-            throw new UserInputException("--inflation must be a number above 1");
-        }
-
-        OptionParsing.Positive(maxCycle, "--max-cycle");
+        OptionParsing.AboveAndAtMost(threshold, 0, OptionRanges.MaxThreshold, "--threshold", "a |z| in standard uncertainties");
+        OptionParsing.AboveAndAtMost(inflation, 1, OptionRanges.MaxInflation, "--inflation", "the factor that enlarges an uncertainty per step");
+        OptionParsing.InRange(maxCycle, 1, OptionRanges.MaxCycle, "--max-cycle", "measurements per cycle");
+        OptionParsing.InRange(showCycles, 0, OptionRanges.MaxListed, "--show-cycles", "cycles listed");
         AnalysisSession? session = AnalysisSession.Open(path, context, skipInvalid, out int exitCode);
         if (session is null)
         {

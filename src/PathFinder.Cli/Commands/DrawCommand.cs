@@ -16,13 +16,14 @@ public sealed class DrawCommand
     private readonly Option<string> _kind = new("--kind", "-k") { Description = "network (species and measurements), levels (enthalpy ladder of a route) or closure (ladder of a cycle).", DefaultValueFactory = _ => "network" };
     private readonly Option<string?> _target = new("--target", "-t") { Description = "Focus on the routes to this target (equation or species)." };
     private readonly Option<int> _route = new("--route", "-r") { Description = "Which route to draw, 1 = best (default 1; 0 with --kind network draws all listed routes).", DefaultValueFactory = _ => 1 };
-    private readonly Option<int?> _cycle = new("--cycle", "-c") { Description = "Focus on this cycle from 'pathfinder check' (1 = worst)." };
+    private readonly Option<int?> _cycle = new("--cycle", "-c") { Description = "Focus on this cycle from 'pathfinder check' (1 = worst), 1 to 100000." };
     private readonly Option<string?> _species = new("--species", "-s") { Description = "Focus on the neighbourhood of this species." };
-    private readonly Option<int> _depth = new("--depth", "-d") { Description = "Neighbourhood depth in measurement steps (default 1).", DefaultValueFactory = _ => 1 };
+    private readonly Option<int> _depth = new("--depth", "-d") { Description = "Neighbourhood depth, 1 to 100 measurement steps (default 1).", DefaultValueFactory = _ => 1 };
     private readonly Option<string> _property = CommonOptions.Property();
-    private readonly Option<int> _maxSteps = new("--max-steps") { Description = "Longest route searched (default 6).", DefaultValueFactory = _ => 6 };
-    private readonly Option<int> _maxNodes = new("--max-nodes") { Description = $"Refuse network diagrams with more nodes than this (default {NetworkDiagramOptions.DefaultMaxNodes}; larger layouts are slow and unreadable).", DefaultValueFactory = _ => NetworkDiagramOptions.DefaultMaxNodes };
+    private readonly Option<int> _maxSteps = new("--max-steps") { Description = "Longest route searched, 1 to 64 measurements (default 6).", DefaultValueFactory = _ => 6 };
+    private readonly Option<int> _maxNodes = new("--max-nodes") { Description = $"Refuse network diagrams with more nodes than this, 1 to 10000 (default {NetworkDiagramOptions.DefaultMaxNodes}; larger layouts are slow and unreadable).", DefaultValueFactory = _ => NetworkDiagramOptions.DefaultMaxNodes };
     private readonly Option<string> _output = new("--output", "-o") { Description = "The SVG file to write.", Required = true };
+    private readonly Option<bool> _force = new("--force") { Description = OutputPaths.ForceDescription };
     private readonly Option<bool> _skipInvalid = CommonOptions.SkipInvalid();
 
     /// <summary>Builds the command bound to <paramref name="context"/>.</summary>
@@ -30,7 +31,7 @@ public sealed class DrawCommand
     {
         var command = new Command("draw", "Write an SVG diagram: the network around a target, a route, a cycle or a species; or the enthalpy-level ladder of a route or cycle.")
         {
-            _network, _kind, _target, _route, _cycle, _species, _depth, _property, _maxSteps, _maxNodes, _output, _skipInvalid,
+            _network, _kind, _target, _route, _cycle, _species, _depth, _property, _maxSteps, _maxNodes, _output, _force, _skipInvalid,
         };
         _kind.AcceptOnlyFromAmong("network", "levels", "closure");
         command.SetAction(parse => Run(
@@ -46,7 +47,10 @@ public sealed class DrawCommand
                 parse.GetValue(_maxSteps),
                 parse.GetValue(_maxNodes),
                 parse.GetValue(_output)!,
-                parse.GetValue(_skipInvalid)),
+                parse.GetValue(_skipInvalid))
+            {
+                Force = parse.GetValue(_force),
+            },
             context));
         return command;
     }
@@ -67,9 +71,15 @@ public sealed class DrawCommand
             throw new UserInputException(request.Kind == "levels" ? "--kind levels draws a route: give --target (and --route)" : "--kind closure draws a cycle: give --cycle");
         }
 
-        OptionParsing.Positive(request.Depth, "--depth");
-        OptionParsing.Positive(request.MaxNodes, "--max-nodes");
-        OutputPaths.Check(request.Output, "--output");
+        OptionParsing.InRange(request.Depth, 1, OptionRanges.MaxDepth, "--depth", "measurement steps");
+        OptionParsing.InRange(request.MaxNodes, 1, OptionRanges.MaxNodes, "--max-nodes", "larger layouts are slow and unreadable");
+        OptionParsing.InRange(request.MaxSteps, 1, OptionRanges.MaxSteps, "--max-steps", "measurements per route");
+        OptionParsing.InRange(request.Route, 0, OptionRanges.MaxListed, "--route", "1 = best; 0 draws all listed routes");
+        if (request.Cycle is { } cycleNumber)
+        {
+            OptionParsing.InRange(cycleNumber, 1, OptionRanges.MaxListed, "--cycle", "1 = worst, as 'pathfinder check' lists them");
+        }
+        OutputPaths.Check(request.Output, "--output", request.Force);
 
         AnalysisSession? session = AnalysisSession.Open(request.Network, context, request.SkipInvalid, out int exitCode);
         if (session is null)
@@ -143,7 +153,7 @@ public sealed class DrawCommand
             return ExitCodes.InvalidInput;
         }
 
-        diagram.Save(request.Output);
+        diagram.Save(request.Output, request.Force);
         context.Out.WriteLine($"wrote {request.Output} ({diagram.Width:0} × {diagram.Height:0})");
         return ExitCodes.Success;
     }
@@ -180,4 +190,8 @@ public sealed class DrawCommand
 /// <param name="MaxNodes">Node limit of network diagrams.</param>
 /// <param name="Output">The SVG path.</param>
 /// <param name="SkipInvalid">Whether to skip invalid rows.</param>
-public sealed record DrawRequest(string Network, string Kind, string? Target, int Route, int? Cycle, string? Species, int Depth, string Property, int MaxSteps, int MaxNodes, string Output, bool SkipInvalid);
+public sealed record DrawRequest(string Network, string Kind, string? Target, int Route, int? Cycle, string? Species, int Depth, string Property, int MaxSteps, int MaxNodes, string Output, bool SkipInvalid)
+{
+    /// <summary>Whether a read-only output file may be replaced (<c>--force</c>).</summary>
+    public bool Force { get; init; }
+}

@@ -12,13 +12,13 @@ public sealed class PlanCommand
     private readonly Argument<string> _network = CommonOptions.Network();
     private readonly Option<string> _target = CommonOptions.Target();
     private readonly Option<string> _property = CommonOptions.Property();
-    private readonly Option<double> _factor = new("--factor") { Description = "A re-measurement's uncertainty as a multiple of the current one (default 0.5).", DefaultValueFactory = _ => 0.5 };
-    private readonly Option<double?> _uncertainty = new("--uncertainty") { Description = "An absolute uncertainty for every re-measurement, in the property's unit (instead of --factor)." };
+    private readonly Option<double> _factor = new("--factor") { Description = "A re-measurement's uncertainty as a multiple of the current one, 0.001 to 1 (default 0.5).", DefaultValueFactory = _ => 0.5 };
+    private readonly Option<double?> _uncertainty = new("--uncertainty") { Description = "An absolute uncertainty for every re-measurement, in the property's unit, 1e-6 to 1e5 (instead of --factor)." };
     private readonly Option<string[]> _candidate = new("--candidate", "-c") { Description = "A new reaction you could measure (repeatable); ranked with the generated ones.", AllowMultipleArgumentsPerToken = false };
-    private readonly Option<double?> _candidateUncertainty = new("--candidate-uncertainty") { Description = "The uncertainty assumed for a new measurement, in the property's unit (default: the median of the data's)." };
+    private readonly Option<double?> _candidateUncertainty = new("--candidate-uncertainty") { Description = "The uncertainty assumed for a new measurement, in the property's unit, 1e-6 to 1e5 (default: the median of the data's)." };
     private readonly Option<bool> _noGenerate = new("--no-generate") { Description = "Rank only the --candidate reactions; generate none near the target." };
-    private readonly Option<int> _depth = new("--depth") { Description = "How many measurement steps from the target's species count as near, for generated candidates (default 2).", DefaultValueFactory = _ => 2 };
-    private readonly Option<int> _top = new("--top") { Description = "How many options of each kind to list (default 10).", DefaultValueFactory = _ => 10 };
+    private readonly Option<int> _depth = new("--depth") { Description = "How many measurement steps from the target's species count as near, for generated candidates, 0 to 100 (default 2).", DefaultValueFactory = _ => 2 };
+    private readonly Option<int> _top = new("--top") { Description = "How many options of each kind to list, 1 to 100000 (default 10).", DefaultValueFactory = _ => 10 };
     private readonly Option<bool> _noAdjust = new("--no-adjust") { Description = "Plan on the solve of the data as given, without the suspect procedure." };
     private readonly Option<bool> _json = CommonOptions.Json();
     private readonly Option<bool> _skipInvalid = CommonOptions.SkipInvalid();
@@ -55,22 +55,19 @@ public sealed class PlanCommand
         ArgumentNullException.ThrowIfNull(settings);
         ArgumentNullException.ThrowIfNull(context);
         ThermoProperty property = OptionParsing.Property(settings.Property);
-        OptionParsing.Positive(settings.Factor, "--factor");
-        OptionParsing.Positive(settings.Top, "--top");
+        OptionParsing.InRange(settings.Factor, OptionRanges.MinFactor, 1, "--factor", "a multiple of the current uncertainty; a re-measurement is no worse");
+        OptionParsing.InRange(settings.Top, 1, OptionRanges.MaxListed, "--top", "options listed");
         if (settings.Uncertainty is { } absolute)
         {
-            OptionParsing.Positive(absolute, "--uncertainty");
+            OptionParsing.InRange(absolute, OptionRanges.MinUncertainty, OptionRanges.MaxUncertainty, "--uncertainty", "the range accepted for data");
         }
 
         if (settings.CandidateUncertainty is { } candidateUncertainty)
         {
-            OptionParsing.Positive(candidateUncertainty, "--candidate-uncertainty");
+            OptionParsing.InRange(candidateUncertainty, OptionRanges.MinUncertainty, OptionRanges.MaxUncertainty, "--candidate-uncertainty", "the range accepted for data");
         }
 
-        if (settings.Depth < 0)
-        {
-            throw new UserInputException("--depth must be 0 or more");
-        }
+        OptionParsing.InRange(settings.Depth, 0, OptionRanges.MaxDepth, "--depth", "measurement steps");
 
         AnalysisSession? session = AnalysisSession.Open(path, context, settings.SkipInvalid, out int exitCode);
         if (session is null)

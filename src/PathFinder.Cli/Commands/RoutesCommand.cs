@@ -13,11 +13,11 @@ public sealed class RoutesCommand
     private readonly Argument<string> _network = CommonOptions.Network();
     private readonly Option<string> _target = CommonOptions.Target();
     private readonly Option<string> _property = CommonOptions.Property();
-    private readonly Option<int> _maxSteps = new("--max-steps") { Description = "Longest route searched, in measurements (default 6).", DefaultValueFactory = _ => 6 };
-    private readonly Option<int> _top = new("--top") { Description = "How many routes to list, best first (default 10).", DefaultValueFactory = _ => 10 };
-    private readonly Option<int> _explain = new("--explain") { Description = "How many of the listed routes to spell out step by step (default 3).", DefaultValueFactory = _ => 3 };
-    private readonly Option<double> _timeBudget = new("--time-budget") { Description = "Seconds the search may take before it reports what it found as incomplete (default 20).", DefaultValueFactory = _ => 20.0 };
-    private readonly Option<double?> _temperature = new("--temperature") { Description = "Also report ΔrH, ΔrS, ΔrG and K of the target at this temperature in K (needs ΔS or S° data, and heat capacities)." };
+    private readonly Option<int> _maxSteps = new("--max-steps") { Description = "Longest route searched, 1 to 64 measurements (default 6).", DefaultValueFactory = _ => 6 };
+    private readonly Option<int> _top = new("--top") { Description = "How many routes to list, best first, 1 to 100000 (default 10).", DefaultValueFactory = _ => 10 };
+    private readonly Option<int> _explain = new("--explain") { Description = "How many of the listed routes to spell out step by step, 0 to 1000 (default 3).", DefaultValueFactory = _ => 3 };
+    private readonly Option<double> _timeBudget = new("--time-budget") { Description = "Seconds the search may take before it reports what it found as incomplete, above 0 and at most 86400 (default 20).", DefaultValueFactory = _ => 20.0 };
+    private readonly Option<double?> _temperature = new("--temperature") { Description = "Also report ΔrH, ΔrS, ΔrG and K of the target at this temperature, 1 to 10000 K (needs ΔS or S° data, and heat capacities)." };
     private readonly Option<bool> _json = CommonOptions.Json();
     private readonly Option<bool> _skipInvalid = CommonOptions.SkipInvalid();
     private readonly Option<bool> _noAdjust = new("--no-adjust") { Description = "Take the network estimate from the data as given, without the suspect procedure (faster on large networks; no suspect marks)." };
@@ -50,9 +50,10 @@ public sealed class RoutesCommand
     {
         ArgumentNullException.ThrowIfNull(context);
         ThermoProperty property = OptionParsing.Property(propertyCode);
-        OptionParsing.Positive(maxSteps, "--max-steps");
-        OptionParsing.Positive(top, "--top");
-        OptionParsing.Positive(timeBudget, "--time-budget");
+        OptionParsing.InRange(maxSteps, 1, OptionRanges.MaxSteps, "--max-steps", "measurements per route");
+        OptionParsing.InRange(top, 1, OptionRanges.MaxListed, "--top", "routes listed");
+        OptionParsing.InRange(explain, 0, OptionRanges.MaxExplained, "--explain", "routes spelled out");
+        OptionParsing.AboveAndAtMost(timeBudget, 0, OptionRanges.MaxTimeBudgetSeconds, "--time-budget", "seconds; at most one day");
         if (temperature is { } t)
         {
             OptionParsing.Temperature(t);

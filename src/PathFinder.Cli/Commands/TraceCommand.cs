@@ -12,7 +12,7 @@ public sealed class TraceCommand
     private readonly Argument<string> _network = CommonOptions.Network();
     private readonly Option<string> _target = CommonOptions.Target();
     private readonly Option<string> _property = CommonOptions.Property();
-    private readonly Option<int> _top = new("--top") { Description = "How many measurements to list, largest share first (default 10).", DefaultValueFactory = _ => 10 };
+    private readonly Option<int> _top = new("--top") { Description = "How many measurements to list, largest share first, 1 to 100000 (default 10).", DefaultValueFactory = _ => 10 };
     private readonly Option<bool> _noAdjust = new("--no-adjust") { Description = "Trace the solve of the data as given, without the suspect procedure." };
     private readonly Option<bool> _json = CommonOptions.Json();
     private readonly Option<bool> _skipInvalid = CommonOptions.SkipInvalid();
@@ -41,7 +41,7 @@ public sealed class TraceCommand
     {
         ArgumentNullException.ThrowIfNull(context);
         ThermoProperty property = OptionParsing.Property(propertyCode);
-        OptionParsing.Positive(top, "--top");
+        OptionParsing.InRange(top, 1, OptionRanges.MaxListed, "--top", "measurements listed");
         AnalysisSession? session = AnalysisSession.Open(path, context, skipInvalid, out int exitCode);
         if (session is null)
         {

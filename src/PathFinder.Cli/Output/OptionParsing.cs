@@ -1,3 +1,4 @@
+using System.Globalization;
 using PathFinder.Analysis;
 using PathFinder.Chemistry;
 using PathFinder.Diagnostics;
@@ -33,6 +34,24 @@ public static class OptionParsing
         return equation;
     }
 
+    /// <summary>Requires a whole number from <paramref name="min"/> to <paramref name="max"/>; the message gives the range and <paramref name="why"/> (what the upper bound protects).</summary>
+    public static int InRange(int value, int min, int max, string option, string why) =>
+        value >= min && value <= max
+            ? value
+            : throw new UserInputException(string.Create(CultureInfo.InvariantCulture, $"{option} must be a whole number from {min:N0} to {max:N0}, not {value:N0} ({why})"));
+
+    /// <summary>Requires a finite number from <paramref name="min"/> to <paramref name="max"/> (both included).</summary>
+    public static double InRange(double value, double min, double max, string option, string why) =>
+        double.IsFinite(value) && value >= min && value <= max
+            ? value
+            : throw new UserInputException(string.Create(CultureInfo.InvariantCulture, $"{option} must be a number from {min:G} to {max:G}, not {value:G} ({why})"));
+
+    /// <summary>Requires a finite number above <paramref name="above"/> and at most <paramref name="max"/>.</summary>
+    public static double AboveAndAtMost(double value, double above, double max, string option, string why) =>
+        double.IsFinite(value) && value > above && value <= max
+            ? value
+            : throw new UserInputException(string.Create(CultureInfo.InvariantCulture, $"{option} must be a number above {above:G} and at most {max:G}, not {value:G} ({why})"));
+
     /// <summary>Requires a positive whole number.</summary>
     public static int Positive(int value, string option) =>
         value > 0 ? value : throw new UserInputException($"{option} must be a positive whole number, not {value}");
@@ -41,7 +60,7 @@ public static class OptionParsing
     public static double Positive(double value, string option) =>
         double.IsFinite(value) && value > 0 ? value : throw new UserInputException($"{option} must be a positive number");
 
-    /// <summary>Requires a temperature in kelvin above 0 and at most 10000.</summary>
+    /// <summary>Requires a temperature in kelvin within the range accepted for data (1 to 10000 K, <see cref="AcceptedRanges"/>).</summary>
     public static double Temperature(double kelvin, string option = "--temperature") =>
-        double.IsFinite(kelvin) && kelvin > 0 && kelvin <= 10000 ? kelvin : throw new UserInputException($"{option} must be in kelvin, above 0 and at most 10000");
+        InRange(kelvin, AcceptedRanges.MinTemperature, AcceptedRanges.MaxTemperature, option, "in kelvin, the range accepted for data");
 }

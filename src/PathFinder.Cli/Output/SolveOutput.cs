@@ -99,7 +99,10 @@ public static class SolveOutput
     }
 
     /// <summary>Writes the covariance of the view's determined quantities to <paramref name="path"/> as CSV (<c>row,column,covariance</c>), atomically.</summary>
-    public static void WriteCovariance(string path, SolveReport report)
+    /// <param name="path">The output file.</param>
+    /// <param name="report">The solution.</param>
+    /// <param name="force">Whether a read-only file may be replaced.</param>
+    public static void WriteCovariance(string path, SolveReport report, bool force = false)
     {
         ArgumentNullException.ThrowIfNull(report);
         AtomicFile.Write(path, stream =>
@@ -111,7 +114,8 @@ public static class SolveOutput
                 writer.Write(CsvCell.Line([CsvCell.Text(entry.Row), CsvCell.Text(entry.Column), CsvCell.Number(entry.Covariance)]));
                 writer.Write('\n');
             }
-        });
+        },
+        force);
     }
 
     /// <summary>What the quantity is made of in the joint model, in one line.</summary>

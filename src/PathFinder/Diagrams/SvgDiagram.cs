@@ -11,4 +11,7 @@ public sealed record SvgDiagram(string Svg, double Width, double Height)
 {
     /// <summary>Writes the SVG to <paramref name="path"/> atomically (readers never see a partial file).</summary>
     public void Save(string path) => AtomicFile.WriteAllText(path, Svg);
+
+    /// <summary>Writes the SVG to <paramref name="path"/> atomically; <paramref name="replaceReadOnly"/> allows replacing a read-only file (see <see cref="AtomicFile"/>).</summary>
+    public void Save(string path, bool replaceReadOnly) => AtomicFile.WriteAllText(path, Svg, replaceReadOnly);
 }

@@ -22,13 +22,24 @@ namespace PathFinder.Synthetic;
 /// </remarks>
 public static class SyntheticNetworkGenerator
 {
+    private const int MaxCarbon = 12;
+    private const int MaxNitrogen = 2;
+    private const int MaxOxygen = 3;
+
+    /// <summary>The most species a network can have: the number of distinct C/H/N/O formulas the generator draws from (2,446).</summary>
+    public static int MaxSpeciesCount { get; } = CountDistinctFormulas();
+
+    /// <summary>The most ΔH measurements, and separately the most Gibbs-energy data, one network may have (2,000,000).</summary>
+    /// <remarks>A bound on memory: generating a million measurements peaks at about 1.6 GB (measured on the 2-core VM).</remarks>
+    public const int MaxMeasurementCount = 2_000_000;
+
     /// <summary>Generates a network.</summary>
     public static SyntheticNetwork Generate(SyntheticNetworkOptions options)
     {
         ArgumentNullException.ThrowIfNull(options);
-        if (options.SpeciesCount < 3 || options.MeasurementCount < 1)
+        if (options.SpeciesCount < 3 || options.MeasurementCount < 1 || options.SpeciesCount > MaxSpeciesCount || options.MeasurementCount > MaxMeasurementCount || options.GibbsCount > MaxMeasurementCount)
         {
-            throw new ArgumentOutOfRangeException(nameof(options), "need at least 3 species and 1 measurement");
+            throw new ArgumentOutOfRangeException(nameof(options), $"need 3 to {MaxSpeciesCount} species, and 1 to {MaxMeasurementCount} measurements and at most as many Gibbs-energy data");
         }
 
         if (!double.IsFinite(options.EntropyFraction) || options.EntropyFraction < 0.0 || options.EntropyFraction > 1.0)
@@ -123,13 +134,31 @@ public static class SyntheticNetworkGenerator
         return new SyntheticNetwork(new ReactionNetwork($"synthetic-{options.Seed}", measurements), truth, outliers) { TrueEntropy = entropy };
     }
 
-    /// <summary>Writes the network as a CSV file <c>measurements.csv</c> and its ground truth <c>truth.txt</c> (CSV text) into a folder.</summary>
-    /// <remarks>The truth file is not named <c>.csv</c> so that reading the folder as a network does not take it for data.
-    /// Fields are quoted where needed: reference states such as <c>C(cr,graphite)</c> contain a comma.</remarks>
-    public static void Write(SyntheticNetwork network, string folder)
+    /// <summary>Writes the network as a CSV file <c>measurements.csv</c> and its ground truth <c>truth.txt</c> (CSV text) into a folder, as one unit.</summary>
+    /// <remarks>
+    /// <para>The truth file is not named <c>.csv</c> so that reading the folder as a network does not take it for data.
+    /// Fields are quoted where needed: reference states such as <c>C(cr,graphite)</c> contain a comma.</para>
+    /// <para>The two files belong together, so a kill must never leave a new <c>measurements.csv</c> beside an old
+    /// <c>truth.txt</c>. A missing or empty folder is built complete as a hidden sibling (<c>.name.&lt;guid&gt;.tmp</c>)
+    /// and renamed into place in one step: all or nothing. A manifest written last was the other choice, but every
+    /// reader would have to learn to check it, and the folder rename needs none. A folder that already holds files
+    /// (written into with <c>--force</c>) cannot be swapped whole without moving the user's other files, so there both
+    /// files are first written completely as temporary files, then the old <c>truth.txt</c> is removed, the new
+    /// <c>measurements.csv</c> renamed into place, and the new <c>truth.txt</c> last: a kill between these renames
+    /// leaves at worst a folder without <c>truth.txt</c>, which says "incomplete" plainly, never a truth that belongs to
+    /// other data. Each file is written as <see cref="AtomicFile"/> writes (links followed, special files refused).</para>
+    /// </remarks>
+    /// <param name="network">The network and its truth.</param>
+    /// <param name="folder">The destination folder; created when missing.</param>
+    /// <param name="replaceReadOnly">Whether read-only <c>measurements.csv</c> or <c>truth.txt</c> files may be replaced.</param>
+    public static void Write(SyntheticNetwork network, string folder, bool replaceReadOnly = false) =>
+        Write(network, folder, replaceReadOnly, afterFirstFile: null);
+
+    /// <summary>As <see cref="Write(SyntheticNetwork, string, bool)"/>, calling <paramref name="afterFirstFile"/> between the two files (tests inject a failure there).</summary>
+    internal static void Write(SyntheticNetwork network, string folder, bool replaceReadOnly, Action? afterFirstFile)
     {
         ArgumentNullException.ThrowIfNull(network);
-        Directory.CreateDirectory(folder);
+        ArgumentNullException.ThrowIfNull(folder);
         var data = new StringBuilder();
         data.AppendLine("# Synthetic network made by 'pathfinder generate': invented values, not for design.");
         data.AppendLine("id,equation,property,value,uncertainty,unit,temperature,source");
@@ -160,8 +189,67 @@ public static class SyntheticNetworkGenerator
             truth.AppendLine($"outlier,{id},");
         }
 
-        AtomicFile.WriteAllText(Path.Combine(folder, "measurements.csv"), data.ToString());
-        AtomicFile.WriteAllText(Path.Combine(folder, "truth.txt"), truth.ToString());
+        string full = Path.TrimEndingDirectorySeparator(Path.GetFullPath(folder));
+        bool fresh = !Directory.Exists(full) || (new DirectoryInfo(full).LinkTarget is null && !Directory.EnumerateFileSystemEntries(full).Any());
+        if (fresh)
+        {
+            WriteNewFolder(full, data.ToString(), truth.ToString(), afterFirstFile);
+        }
+        else
+        {
+            ReplaceInFolder(full, data.ToString(), truth.ToString(), replaceReadOnly, afterFirstFile);
+        }
+    }
+
+    /// <summary>The name of the data file <see cref="Write(SyntheticNetwork, string, bool)"/> writes.</summary>
+    public const string MeasurementsFileName = "measurements.csv";
+
+    /// <summary>The name of the ground-truth file <see cref="Write(SyntheticNetwork, string, bool)"/> writes.</summary>
+    public const string TruthFileName = "truth.txt";
+
+    /// <summary>Builds the folder complete beside its place and renames it there (an empty folder at the place is removed first).</summary>
+    private static void WriteNewFolder(string folder, string data, string truth, Action? afterFirstFile)
+    {
+        string parent = Path.GetDirectoryName(folder) ?? ".";
+        Directory.CreateDirectory(parent);
+        AtomicFile.RemoveStaleTemporaries(parent);
+        string stage = Path.Combine(parent, $".{Path.GetFileName(folder)}.{Guid.NewGuid():N}.tmp");
+        Directory.CreateDirectory(stage);
+        try
+        {
+            AtomicFile.WriteAllText(Path.Combine(stage, MeasurementsFileName), data);
+            afterFirstFile?.Invoke();
+            AtomicFile.WriteAllText(Path.Combine(stage, TruthFileName), truth);
+            if (Directory.Exists(folder))
+            {
+                // Not recursive: should anything have appeared in it meanwhile, this fails and nothing is lost.
+                Directory.Delete(folder);
+            }
+
+            Directory.Move(stage, folder);
+        }
+        finally
+        {
+            if (Directory.Exists(stage))
+            {
+                Directory.Delete(stage, recursive: true);
+            }
+        }
+    }
+
+    /// <summary>Writes both files as temporaries, then removes the old truth and renames data first, truth last (see <see cref="Write(SyntheticNetwork, string, bool)"/>).</summary>
+    private static void ReplaceInFolder(string folder, string data, string truth, bool replaceReadOnly, Action? afterFirstFile)
+    {
+        using PendingFile dataFile = AtomicFile.Prepare(Path.Combine(folder, MeasurementsFileName), stream => stream.Write(Encoding.UTF8.GetBytes(data)), replaceReadOnly);
+        using PendingFile truthFile = AtomicFile.Prepare(Path.Combine(folder, TruthFileName), stream => stream.Write(Encoding.UTF8.GetBytes(truth)), replaceReadOnly);
+        if (truthFile.Target.Exists)
+        {
+            File.Delete(truthFile.Target.FinalPath);
+        }
+
+        dataFile.Commit();
+        afterFirstFile?.Invoke();
+        truthFile.Commit();
     }
 
     /// <summary>What the S° and Gibbs-energy draws share with the ΔH rows: the stream, the options, the sources and the lists they add to.</summary>
@@ -273,16 +361,40 @@ public static class SyntheticNetworkGenerator
         }
     }
 
+    /// <summary>Distinct formulas <see cref="MakeSpecies"/> can draw: C1–12, N0–2, H0 to 2C+2+N, O0–3, less C and CO2.</summary>
+    private static int CountDistinctFormulas()
+    {
+        int count = 0;
+        for (int carbon = 1; carbon <= MaxCarbon; carbon++)
+        {
+            for (int nitrogen = 0; nitrogen <= MaxNitrogen; nitrogen++)
+            {
+                count += HydrogenChoices(carbon, nitrogen) * (MaxOxygen + 1);
+            }
+        }
+
+        return count - 2;
+    }
+
+    private static int HydrogenChoices(int carbon, int nitrogen) => (2 * carbon) + 3 + nitrogen;
+
     private static List<Species> MakeSpecies(int count, Random random)
     {
+        // Every formula has a positive chance, so the loop ends whenever count is at most the number of distinct formulas
+        // (the rarest has a chance of about 4e-5 per draw, so even all of them take well under a second).
+        if (count > MaxSpeciesCount)
+        {
+            throw new ArgumentOutOfRangeException(nameof(count), count, $"at most {MaxSpeciesCount} distinct species can be made");
+        }
+
         var seen = new HashSet<string>(StringComparer.Ordinal);
         var list = new List<Species>(count);
         while (list.Count < count)
         {
-            int carbon = 1 + random.Next(12);
-            int nitrogen = random.NextDouble() < 0.2 ? 1 + random.Next(2) : 0;
-            int hydrogen = random.Next((2 * carbon) + 3 + nitrogen);
-            int oxygen = random.NextDouble() < 0.5 ? random.Next(4) : 0;
+            int carbon = 1 + random.Next(MaxCarbon);
+            int nitrogen = random.NextDouble() < 0.2 ? 1 + random.Next(MaxNitrogen) : 0;
+            int hydrogen = random.Next(HydrogenChoices(carbon, nitrogen));
+            int oxygen = random.NextDouble() < 0.5 ? random.Next(MaxOxygen + 1) : 0;
             var text = new StringBuilder();
             text.Append('C');
             if (carbon > 1)

@@ -6,6 +6,7 @@ using PathFinder.Chemistry;
 using PathFinder.Data;
 using PathFinder.Quantities;
 using PathFinder.Synthetic;
+using PathFinder.Tests.TestSupport;
 
 namespace PathFinder.Tests.Synthetic;
 
@@ -105,6 +106,69 @@ public sealed class SyntheticNetworkGeneratorTests
             Assert.InRange(estimate.Value, network.TrueFormationEnthalpy[estimate.Species] - (5 * estimate.Uncertainty), network.TrueFormationEnthalpy[estimate.Species] + (5 * estimate.Uncertainty)));
         Assert.InRange(report.Solution.BirgeRatio, 0.8, 1.2);
         Assert.Equal(-393.51, network.TrueFormationEnthalpy[Species.Parse("CO2(g)")], 1e-12);
+    }
+
+    [Fact]
+    public void Generate_MaxSpeciesCount_MakesThatManyDistinctSpecies()
+    {
+        // Given the largest species count the generator accepts (2,446 distinct C/H/N/O formulas)
+        // When a network that large is generated
+        SyntheticNetwork network = SyntheticNetworkGenerator.Generate(new SyntheticNetworkOptions { SpeciesCount = SyntheticNetworkGenerator.MaxSpeciesCount, MeasurementCount = 10 });
+
+        // Then it ends, and every formula made is distinct
+        Assert.Equal(2446, SyntheticNetworkGenerator.MaxSpeciesCount);
+        Assert.True(network.TrueFormationEnthalpy.Count >= SyntheticNetworkGenerator.MaxSpeciesCount);
+    }
+
+    [Fact]
+    public void Generate_MoreSpeciesThanDistinctFormulas_IsRefusedInsteadOfLoopingForever()
+    {
+        var options = new SyntheticNetworkOptions { SpeciesCount = SyntheticNetworkGenerator.MaxSpeciesCount + 1, MeasurementCount = 10 };
+
+        ArgumentOutOfRangeException refused = Assert.Throws<ArgumentOutOfRangeException>(() => SyntheticNetworkGenerator.Generate(options));
+
+        Assert.Contains("2446", refused.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Write_KilledBetweenTheTwoFiles_IntoANewFolder_LeavesNothing()
+    {
+        // Given a network and a destination that does not exist yet
+        using var temp = new TempFolder();
+        SyntheticNetwork network = SyntheticNetworkGenerator.Generate(new SyntheticNetworkOptions { Seed = 4, SpeciesCount = 10, MeasurementCount = 20 });
+        string folder = Path.Combine(temp.Path, "net");
+
+        // When the write fails after the first file
+        Assert.Throws<IOException>(() => SyntheticNetworkGenerator.Write(network, folder, replaceReadOnly: false, afterFirstFile: () => throw new IOException("killed")));
+
+        // Then no destination folder and no staging folder remain; a second write completes
+        Assert.False(Directory.Exists(folder));
+        Assert.Empty(Directory.EnumerateFileSystemEntries(temp.Path));
+        SyntheticNetworkGenerator.Write(network, folder);
+        Assert.True(File.Exists(Path.Combine(folder, SyntheticNetworkGenerator.MeasurementsFileName)));
+        Assert.True(File.Exists(Path.Combine(folder, SyntheticNetworkGenerator.TruthFileName)));
+        Assert.Empty(Directory.EnumerateFileSystemEntries(temp.Path, ".*"));
+    }
+
+    [Fact]
+    public void Write_KilledBetweenTheTwoFiles_IntoAFullFolder_NeverLeavesTheOldTruthBesideNewData()
+    {
+        // Given a folder holding an older network (another seed) and a note of the user's
+        using var temp = new TempFolder();
+        SyntheticNetwork older = SyntheticNetworkGenerator.Generate(new SyntheticNetworkOptions { Seed = 1, SpeciesCount = 10, MeasurementCount = 20 });
+        SyntheticNetwork newer = SyntheticNetworkGenerator.Generate(new SyntheticNetworkOptions { Seed = 2, SpeciesCount = 10, MeasurementCount = 20 });
+        SyntheticNetworkGenerator.Write(older, temp.Path);
+        string oldData = File.ReadAllText(Path.Combine(temp.Path, SyntheticNetworkGenerator.MeasurementsFileName));
+        temp.Write("notes.txt", "keep me");
+
+        // When the newer network's write fails between the two files
+        Assert.Throws<IOException>(() => SyntheticNetworkGenerator.Write(newer, temp.Path, replaceReadOnly: false, afterFirstFile: () => throw new IOException("killed")));
+
+        // Then the data are new and the old truth is gone (an incomplete folder says so), the note stays, no temporary file is left
+        Assert.NotEqual(oldData, File.ReadAllText(Path.Combine(temp.Path, SyntheticNetworkGenerator.MeasurementsFileName)));
+        Assert.False(File.Exists(Path.Combine(temp.Path, SyntheticNetworkGenerator.TruthFileName)));
+        Assert.Equal("keep me", File.ReadAllText(Path.Combine(temp.Path, "notes.txt")));
+        Assert.Empty(Directory.EnumerateFiles(temp.Path, "*.tmp"));
     }
 
     [Fact]
