@@ -56,8 +56,8 @@ public sealed class RouteSearch
         long found = 0, order = 0;
         TimeSpan? first = null;
         int maxRoutes = _options.MaxRoutes;
-        var engine = new CircuitEngine(_network, _options.MaxSteps, targetSpecies.Length, budget);
-        engine.Run(targetSpecies, targetModular, 0, (classes, relation) =>
+        var engine = new CircuitEngine(_network, budget);
+        engine.Run(targetSpecies, targetModular, 0, _options.MaxSteps, onlyLongest: false, (classes, relation) =>
         {
             first ??= budget.Clock.Elapsed;
             long count = ClassCircuit.SaturatingProduct(_network, classes.ToArray());
@@ -86,6 +86,10 @@ public sealed class RouteSearch
 
             return _options.StopAfter is not { } stop || found < stop;
         });
+        if (engine.CutByStepBound)
+        {
+            budget.Mark(SearchCut.StepBound);
+        }
 
         List<Route> routes = Expand([.. kept.UnorderedItems.Select(x => x.Element)], maxRoutes);
         (List<Route> marked, int rank) = MarkIndependent(routes);

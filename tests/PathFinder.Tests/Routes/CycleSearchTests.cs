@@ -106,4 +106,26 @@ public class CycleSearchTests
         (RouteNetwork network, _) = RandomNetworks.Create(1);
         Assert.Throws<ArgumentOutOfRangeException>(() => new CycleSearch(network, new CycleSearchOptions { WorkBudget = -1 }));
     }
+
+    [Fact]
+    public void Memory_DoesNotGrowWithTheSizeBound()
+    {
+        // Given a small random network
+        (RouteNetwork network, _) = RandomNetworks.Create(7);
+        var small = new CycleSearchOptions { MaxSize = 20 };
+        new CycleSearch(network, small).Run();
+
+        // When the cycles are searched with a size bound of 20 and of 20,000
+        long before = GC.GetAllocatedBytesForCurrentThread();
+        CycleSearchResult bounded = new CycleSearch(network, small).Run();
+        long boundedBytes = GC.GetAllocatedBytesForCurrentThread() - before;
+        before = GC.GetAllocatedBytesForCurrentThread();
+        CycleSearchResult huge = new CycleSearch(network, small with { MaxSize = 20_000 }).Run();
+        long hugeBytes = GC.GetAllocatedBytesForCurrentThread() - before;
+
+        // Then the results agree and the allocation does not depend on the bound
+        Assert.True(bounded.CyclesFound > 0);
+        Assert.Equal(bounded.CyclesFound, huge.CyclesFound);
+        Assert.True(hugeBytes < boundedBytes + 1_000_000, $"{hugeBytes:N0} bytes with 20,000, {boundedBytes:N0} with 20");
+    }
 }

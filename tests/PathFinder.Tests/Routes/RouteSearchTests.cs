@@ -162,4 +162,31 @@ public class RouteSearchTests
         Assert.Equal(SearchCut.StoppedEarly, result.Cut);
         Assert.False(result.Complete);
     }
+
+    [Fact]
+    public void Memory_DoesNotGrowWithTheStepBound_BeyondWhatTheSearchReaches()
+    {
+        // Given a chain A0 → A1 → … → A12 (the route to A0 → A12 has 12 steps) plus a few shortcuts
+        var vectors = Enumerable.Range(0, 12).Select(i => SparseVector.Create((i, -1), (i + 1, 1))).ToList();
+        vectors.Add(SparseVector.Create((0, -1), (6, 1)));
+        vectors.Add(SparseVector.Create((6, -1), (12, 1)));
+        var network = RouteNetwork.Create(vectors, [.. vectors.Select(_ => 1.0)], [.. vectors.Select(_ => 0.5)]);
+        SparseVector target = SparseVector.Create((0, -1), (12, 1));
+        var small = new RouteSearchOptions { MaxSteps = 20, MaxRoutes = int.MaxValue };
+        FindRoutes.To(network, target, small); // JIT and first-use allocations are not charged below
+
+        // When searched with a bound of 20 and with a bound of 20,000 (which once allocated gigabytes)
+        long before = GC.GetAllocatedBytesForCurrentThread();
+        RouteSearchResult bounded = FindRoutes.To(network, target, small);
+        long boundedBytes = GC.GetAllocatedBytesForCurrentThread() - before;
+        before = GC.GetAllocatedBytesForCurrentThread();
+        RouteSearchResult huge = FindRoutes.To(network, target, small with { MaxSteps = 20_000 });
+        long hugeBytes = GC.GetAllocatedBytesForCurrentThread() - before;
+
+        // Then both find the same four routes, completely, and allocate about the same (well under a megabyte more)
+        Assert.True(bounded.Complete && huge.Complete);
+        Assert.Equal(4, bounded.RoutesFound);
+        Assert.Equal(bounded.RoutesFound, huge.RoutesFound);
+        Assert.True(hugeBytes < boundedBytes + 1_000_000, $"{hugeBytes:N0} bytes with 20,000 steps, {boundedBytes:N0} with 20");
+    }
 }
