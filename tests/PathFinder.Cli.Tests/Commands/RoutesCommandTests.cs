@@ -156,10 +156,14 @@ public sealed class RoutesCommandTests : IDisposable
         using JsonDocument cutJson = JsonDocument.Parse(cut.Out);
         Assert.False(cutJson.RootElement.GetProperty("complete").GetBoolean());
         Assert.Contains("--max-steps", cutJson.RootElement.GetProperty("incompleteReason").GetString(), StringComparison.Ordinal);
+        Assert.Equal(["stepBound"], cutJson.RootElement.GetProperty("searchCut").EnumerateArray().Select(name => name.GetString()));
+        Assert.Equal(1, cutJson.RootElement.GetProperty("completeUpToSteps").GetInt32());
         Assert.Contains("no route found", cut.Error, StringComparison.Ordinal);
         Assert.Equal(ExitCodes.Success, full.ExitCode);
         using JsonDocument fullJson = JsonDocument.Parse(full.Out);
         Assert.True(fullJson.RootElement.GetProperty("complete").GetBoolean());
+        Assert.Equal(0, fullJson.RootElement.GetProperty("searchCut").GetArrayLength());
+        Assert.Equal(2, fullJson.RootElement.GetProperty("completeUpToSteps").GetInt32());
     }
 
     [Fact]

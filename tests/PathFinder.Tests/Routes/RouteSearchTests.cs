@@ -189,4 +189,97 @@ public class RouteSearchTests
         Assert.Equal(bounded.RoutesFound, huge.RoutesFound);
         Assert.True(hugeBytes < boundedBytes + 1_000_000, $"{hugeBytes:N0} bytes with 20,000 steps, {boundedBytes:N0} with 20");
     }
+
+    [Theory]
+    [InlineData(0.3)]
+    [InlineData(1.0)]
+    [InlineData(3.0)]
+    public void MoreSteps_NeverFindFewerRoutes_WithinTheSameWorkBudget(double budgetOverFourStepSearch)
+    {
+        // Given a complete-ish network of 16 species (about 2,000 routes of at most 4 steps, far more of 5 and 6), and a
+        // work budget that is a fraction or a multiple of what the complete 4-step search takes
+        (RouteNetwork network, SparseVector target) = RandomNetworks.CompleteIsh(16, seed: 13);
+        var four = new RouteSearchOptions { MaxSteps = 4, MaxRoutes = int.MaxValue };
+        long stepsOfFour = FindRoutes.To(network, target, four).SearchSteps;
+        four = four with { WorkBudget = (long)(budgetOverFourStepSearch * stepsOfFour) };
+
+        // When searched up to 4 and up to 6 steps with that budget
+        RouteSearchResult shallow = FindRoutes.To(network, target, four);
+        RouteSearchResult deep = FindRoutes.To(network, target, four with { MaxSteps = 6 });
+
+        // Then every route of the 4-step search is among the 6-step search's, which was cut by the budget
+        var deepKeys = deep.Routes.Select(r => RandomNetworks.Key(r.Measurements, r.Factors)).ToHashSet(StringComparer.Ordinal);
+        Assert.All(shallow.Routes, r => Assert.Contains(RandomNetworks.Key(r.Measurements, r.Factors), deepKeys));
+        Assert.True(shallow.RoutesFound > 100, $"{shallow.RoutesFound} routes");
+        Assert.True(deep.RoutesFound >= shallow.RoutesFound);
+        Assert.Equal(SearchCut.WorkBudget, deep.Cut);
+        Assert.True(deep.CompleteUpToSteps >= shallow.CompleteUpToSteps);
+
+        // and each says what cut it: the budget before all 4-step routes were found, else the 4-step bound
+        if (budgetOverFourStepSearch < 1)
+        {
+            Assert.Equal(SearchCut.WorkBudget, shallow.Cut);
+            Assert.True(shallow.CompleteUpToSteps < 4);
+            Assert.Equal(shallow.RoutesFound, deep.RoutesFound);
+        }
+        else
+        {
+            Assert.Equal(SearchCut.StepBound, shallow.Cut);
+            Assert.Equal(4, shallow.CompleteUpToSteps);
+            Assert.Equal(4, deep.CompleteUpToSteps);
+        }
+
+        if (budgetOverFourStepSearch > 1)
+        {
+            Assert.True(deep.RoutesFound > shallow.RoutesFound);
+            Assert.Contains(deep.Routes, r => r.Steps == 5);
+        }
+    }
+
+    [Fact]
+    public void WorkBudget_CutsAtTheSamePointOnEveryRun_AndEveryShorterRouteIsFound()
+    {
+        // Given a complete-ish network and every route of at most 3 steps (a complete search)
+        (RouteNetwork network, SparseVector target) = RandomNetworks.CompleteIsh(12, seed: 5);
+        RouteSearchResult three = FindRoutes.To(network, target, new RouteSearchOptions { MaxSteps = 3, MaxRoutes = int.MaxValue });
+
+        // When a 6-step search runs twice with a budget that ends during the longer routes
+        var options = new RouteSearchOptions { MaxSteps = 6, MaxRoutes = int.MaxValue, WorkBudget = three.SearchSteps + 2_000 };
+        RouteSearchResult first = FindRoutes.To(network, target, options);
+        RouteSearchResult second = FindRoutes.To(network, target, options);
+
+        // Then both runs agree route for route, the cut is the work budget, and the 3-step routes are all there
+        Assert.Equal(SearchCut.StepBound, three.Cut);
+        Assert.Equal(SearchCut.WorkBudget, first.Cut);
+        Assert.False(first.Complete);
+        Assert.Equal(first.RoutesFound, second.RoutesFound);
+        Assert.Equal(first.Routes.Select(r => RandomNetworks.Key(r.Measurements, r.Factors)), second.Routes.Select(r => RandomNetworks.Key(r.Measurements, r.Factors)));
+        Assert.Equal(options.WorkBudget + 1, first.SearchSteps);
+        Assert.True(first.CompleteUpToSteps >= 3);
+        var keys = first.Routes.Select(r => RandomNetworks.Key(r.Measurements, r.Factors)).ToHashSet(StringComparer.Ordinal);
+        Assert.All(three.Routes, r => Assert.Contains(RandomNetworks.Key(r.Measurements, r.Factors), keys));
+    }
+
+    [Fact]
+    public void FirstRouteFound_IsAShortestRoute()
+    {
+        for (int seed = 0; seed < Networks; seed++)
+        {
+            // Given a random network whose shortest route has n steps
+            (RouteNetwork network, SparseVector target) = RandomNetworks.Create(seed);
+            var all = RandomNetworks.BruteForceRoutes(network, target);
+            if (all.Count == 0)
+            {
+                continue;
+            }
+
+            // When the search stops after its first route
+            RouteSearchResult result = FindRoutes.To(network, target, new RouteSearchOptions { MaxSteps = 10, StopAfter = 1 });
+
+            // Then that route has n steps and every shorter size is reported complete
+            int shortest = all.Min(e => e.Members.Length);
+            Assert.Equal(shortest, result.Routes[0].Steps);
+            Assert.True(result.CompleteUpToSteps >= shortest - 1, $"seed {seed}");
+        }
+    }
 }
