@@ -10,10 +10,16 @@ namespace PathFinder.Cli.Commands;
 /// <summary><c>pathfinder routes &lt;network&gt; --target "…"</c>: every minimal Hess's-law route to a target, best first.</summary>
 public sealed class RoutesCommand
 {
+    /// <summary>Largest <c>--max-steps</c> accepted (1,000).</summary>
+    /// <remarks>The search's memory follows the depth it reaches, not the bound, but its walk is recursive, one frame per
+    /// step: a bound of a thousand keeps the stack far inside its limit on any network (a test walks a 999-step chain),
+    /// and no Hess's-law route of interest is that long.</remarks>
+    public const int MaxStepsLimit = 1000;
+
     private readonly Argument<string> _network = CommonOptions.Network();
     private readonly Option<string> _target = CommonOptions.Target();
     private readonly Option<string> _property = CommonOptions.Property();
-    private readonly Option<int> _maxSteps = new("--max-steps") { Description = "Longest route searched, in measurements (default 6).", DefaultValueFactory = _ => 6 };
+    private readonly Option<int> _maxSteps = new("--max-steps") { Description = "Longest route searched, in measurements (default 6, at most 1000).", DefaultValueFactory = _ => 6 };
     private readonly Option<int> _top = new("--top") { Description = "How many routes to list, best first (default 10).", DefaultValueFactory = _ => 10 };
     private readonly Option<int> _explain = new("--explain") { Description = "How many of the listed routes to spell out step by step (default 3).", DefaultValueFactory = _ => 3 };
     private readonly Option<double> _timeBudget = new("--time-budget") { Description = "Seconds the search may take before it reports what it found as incomplete (default 20).", DefaultValueFactory = _ => 20.0 };
@@ -51,6 +57,10 @@ public sealed class RoutesCommand
         ArgumentNullException.ThrowIfNull(context);
         ThermoProperty property = OptionParsing.Property(propertyCode);
         OptionParsing.Positive(maxSteps, "--max-steps");
+        if (maxSteps > MaxStepsLimit)
+        {
+            throw new UserInputException($"--max-steps must be at most {MaxStepsLimit}, not {maxSteps}");
+        }
         OptionParsing.Positive(top, "--top");
         OptionParsing.Positive(timeBudget, "--time-budget");
         if (temperature is { } t)

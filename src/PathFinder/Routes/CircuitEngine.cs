@@ -44,7 +44,7 @@ internal sealed class CircuitEngine
     private int _memberCount;
     private int _minClass;
     private int _maxSteps;
-    private bool _onlyLongest;
+    private int _minSteps;
     private CircuitFound _onFound = (_, _) => true;
     private int[] _targetSpecies = [];
 
@@ -68,15 +68,15 @@ internal sealed class CircuitEngine
     /// <param name="targetValues">Target coefficients modulo p, nonzero.</param>
     /// <param name="minClass">Smallest class number allowed in S.</param>
     /// <param name="maxSteps">Largest |S|.</param>
-    /// <param name="onlyLongest">Report only circuits with |S| = <paramref name="maxSteps"/> (one round of iterative deepening).</param>
+    /// <param name="minSteps">Report only circuits with |S| ≥ this (one round of iterative deepening; 1 reports all).</param>
     /// <param name="onFound">Receives each circuit.</param>
     /// <remarks>The walk, and so the number of budget steps it takes, depends on <paramref name="maxSteps"/> only, not on
-    /// <paramref name="onlyLongest"/>.</remarks>
-    public void Run(int[] targetSpecies, ulong[] targetValues, int minClass, int maxSteps, bool onlyLongest, CircuitFound onFound)
+    /// <paramref name="minSteps"/>.</remarks>
+    public void Run(int[] targetSpecies, ulong[] targetValues, int minClass, int maxSteps, int minSteps, CircuitFound onFound)
     {
         _minClass = minClass;
         _maxSteps = maxSteps;
-        _onlyLongest = onlyLongest;
+        _minSteps = minSteps;
         CutByStepBound = false;
         _onFound = onFound;
         _targetSpecies = targetSpecies;
@@ -136,7 +136,7 @@ internal sealed class CircuitEngine
                 {
                     Node(depth + 1);
                 }
-                else if (targetInvolved && (!_onlyLongest || lastStep) && AllNonzero())
+                else if (targetInvolved && depth + 1 >= _minSteps && AllNonzero())
                 {
                     if (!_onFound(_members.AsSpan(1, _memberCount - 1), _workCombination.AsSpan(0, _memberCount)))
                     {

@@ -94,7 +94,7 @@ public sealed class CycleSearch
             for (int i = 0; i < _network.ClassCount && !budget.Stopped; i++)
             {
                 NetworkClass target = _network.Classes[i];
-                engine.Run(target.Species, target.Modular, i + 1, _options.MaxSize - 1, onlyLongest: false, (classes, relation) =>
+                engine.Run(target.Species, target.Modular, i + 1, _options.MaxSize - 1, minSteps: 1, (classes, relation) =>
                 {
                     Fraction[] k = ClassCircuit.FactorsOf(_network, classes, relation, target.Primitive);
                     int[] cls = [i, .. classes];

@@ -96,15 +96,17 @@ public sealed class RouteSearch
         }
 
         // Iterative deepening by route size: round n walks the tree to depth n and reports the routes of exactly n
-        // steps. Rounds 1..n do the same work whatever the step bound, so a larger bound never finds fewer routes
-        // within the same work budget (the depth-first walk to the full bound could spend a budget on long routes
-        // before reaching short ones). The rounds before the last cost a fraction of it, as the tree widens with
-        // depth. The search stops early once a round reaches no branch cut by its bound: no longer route exists.
+        // steps. Rounds 1..n take the same steps whatever the step bound, so a larger bound never finds fewer routes
+        // within the same work budget (the depth-first walk to the full bound could spend a budget on long routes before
+        // reaching short ones). On a branching network the rounds before the last cost a fraction of it, as the tree
+        // widens with depth; on a long chain (a route of d steps and nothing else) the rounds add up to O(d³) work, the
+        // price of that guarantee (larger increments would break it for bounds between two rounds). The search stops
+        // early once a round reaches no branch cut by its bound: no longer route exists.
         var engine = new CircuitEngine(_network, budget);
         int completeUpTo = 0;
         for (int size = 1; size <= _options.MaxSteps; size++)
         {
-            engine.Run(targetSpecies, targetModular, 0, size, onlyLongest: true, Offer);
+            engine.Run(targetSpecies, targetModular, 0, size, completeUpTo + 1, Offer);
             if (budget.Stopped)
             {
                 break;

@@ -166,6 +166,30 @@ public sealed class RoutesCommandTests : IDisposable
         Assert.Equal(2, fullJson.RootElement.GetProperty("completeUpToSteps").GetInt32());
     }
 
+    [Theory]
+    [InlineData("1001")]
+    [InlineData("30000")]
+    [InlineData("0")]
+    public void Routes_MaxStepsOutsideOneToAThousand_IsRefusedWithExitTwo(string maxSteps)
+    {
+        CliRun run = CliRun.Of("routes", Handbook(), "--target", "CO(g)", "--max-steps", maxSteps);
+
+        Assert.Equal(ExitCodes.InvalidInput, run.ExitCode);
+        Assert.Contains("--max-steps", run.Error, StringComparison.Ordinal);
+        Assert.DoesNotContain("   at ", run.Error, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Routes_MaxStepsAtTheLimit_IsAccepted()
+    {
+        CliRun run = CliRun.Of("routes", Handbook(), "--target", "CO(g)", "--max-steps", "1000", "--json");
+
+        Assert.Equal(ExitCodes.Success, run.ExitCode);
+        using JsonDocument json = JsonDocument.Parse(run.Out);
+        Assert.True(json.RootElement.GetProperty("complete").GetBoolean());
+        Assert.Equal(1000, json.RootElement.GetProperty("maxSteps").GetInt32());
+    }
+
     [Fact]
     public void Routes_UnreachableSpecies_IsNamed_AndExitsOne()
     {

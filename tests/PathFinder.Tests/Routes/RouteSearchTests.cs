@@ -282,4 +282,23 @@ public class RouteSearchTests
             Assert.True(result.CompleteUpToSteps >= shortest - 1, $"seed {seed}");
         }
     }
+
+    [Fact]
+    public void ChainRoute_OfTwoHundredSteps_IsFound_WithABoundOfAThousand()
+    {
+        // Given a chain A0 → A1 → … → A200
+        var vectors = Enumerable.Range(0, 200).Select(i => SparseVector.Create((i, -1), (i + 1, 1))).ToList();
+        var network = RouteNetwork.Create(vectors, [.. vectors.Select(_ => 1.0)], [.. vectors.Select(_ => 0.1)]);
+
+        // When A0 → A200 is searched with a bound of 1,000 (the CLI's largest)
+        RouteSearchResult result = FindRoutes.To(network, SparseVector.Create((0, -1), (200, 1)), new RouteSearchOptions { MaxSteps = 1000 });
+
+        // Then its one route is found with every factor 1, and the search is complete: it never went past 200 steps
+        Route route = Assert.Single(result.Routes);
+        Assert.Equal(200, route.Steps);
+        Assert.All(route.Factors, f => Assert.Equal(Fraction.One, f));
+        Assert.Equal(200.0, route.Value, 9);
+        Assert.True(result.Complete);
+        Assert.Equal(1000, result.CompleteUpToSteps);
+    }
 }
