@@ -46,9 +46,33 @@ public static class RouteSearchBenchmark
             }
         }
 
+        CompleteGraph(output, 200, 1_000_000);
+
         Process process = Process.GetCurrentProcess();
         process.Refresh();
         Line(output, $"peak working set: {process.PeakWorkingSet64 / (1024.0 * 1024.0):F0} MB; GC heap now {GC.GetTotalMemory(false) / (1024.0 * 1024.0):F0} MB");
+    }
+
+    /// <summary>Issue 13: on a complete graph (every pair of species joined), a larger step bound must not find fewer routes within the same work budget.</summary>
+    private static void CompleteGraph(TextWriter output, int species, long workBudget)
+    {
+        var random = new Random(7);
+        var vectors = new List<SparseVector>();
+        for (int a = 0; a < species; a++)
+        {
+            for (int b = a + 1; b < species; b++)
+            {
+                vectors.Add(SparseVector.Create((a, -1), (b, 1)));
+            }
+        }
+
+        RouteNetwork network = RouteNetwork.Create(vectors, [.. vectors.Select(_ => (random.NextDouble() * 200) - 100)], [.. vectors.Select(_ => 0.1 + random.NextDouble())]);
+        SparseVector target = SparseVector.Create((0, -1), (1, 1));
+        foreach (int steps in new[] { 4, 6 })
+        {
+            RouteSearchResult result = FindRoutes.To(network, target, new RouteSearchOptions { MaxSteps = steps, MaxRoutes = 20, WorkBudget = workBudget });
+            Line(output, $"complete graph of {species} species ({vectors.Count} measurements), max steps {steps}, work budget {workBudget}: {result.RoutesFound} routes in {result.Elapsed.TotalMilliseconds:F0} ms, complete up to {result.CompleteUpToSteps} steps, cut = {result.Cut}");
+        }
     }
 
     private static string Ms(TimeSpan? t) => t is { } v ? v.TotalMilliseconds.ToString("F1", CultureInfo.InvariantCulture) : "none";

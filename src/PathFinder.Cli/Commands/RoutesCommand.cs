@@ -10,6 +10,12 @@ namespace PathFinder.Cli.Commands;
 /// <summary><c>pathfinder routes &lt;network&gt; --target "…"</c>: every minimal Hess's-law route to a target, best first.</summary>
 public sealed class RoutesCommand
 {
+    /// <summary>Largest <c>--max-steps</c> accepted (1,000).</summary>
+    /// <remarks>The search's memory follows the depth it reaches, not the bound, but its walk is recursive, one frame per
+    /// step: a bound of a thousand keeps the stack far inside its limit on any network (a test walks a 999-step chain),
+    /// and no Hess's-law route of interest is that long.</remarks>
+    public const int MaxStepsLimit = OptionRanges.MaxSteps;
+
     private readonly Argument<string> _network = CommonOptions.Network();
     private readonly Option<string> _target = CommonOptions.Target();
     private readonly Option<string> _property = CommonOptions.Property();

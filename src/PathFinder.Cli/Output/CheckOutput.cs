@@ -285,6 +285,6 @@ public static class CheckOutput
     }
 
     /// <summary>The reasons that cut a search, as JSON names ("stepBound", "workBudget", ...).</summary>
-    private static string[] CutNames(SearchCut cut) =>
+    internal static string[] CutNames(SearchCut cut) =>
         [.. Enum.GetValues<SearchCut>().Where(flag => flag != SearchCut.None && cut.HasFlag(flag)).Select(flag => JsonNamingPolicy.CamelCase.ConvertName(flag.ToString()))];
 }

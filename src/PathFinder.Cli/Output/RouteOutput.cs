@@ -30,7 +30,9 @@ public static class RouteOutput
                 temperature = model.ReferenceTemperature,
                 complete = report.Complete,
                 incompleteReason = report.IncompleteReason,
+                searchCut = CheckOutput.CutNames(report.Cut),
                 maxSteps = report.MaxSteps,
+                completeUpToSteps = report.CompleteUpToSteps,
                 routesFound = report.RoutesFound,
                 independentRoutes = report.IndependentRoutes,
                 networkEstimate = report.NetworkEstimate is { } estimate

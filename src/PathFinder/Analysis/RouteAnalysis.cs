@@ -24,13 +24,13 @@ public static class RouteAnalysis
         if (missing.Count > 0 || vector.IsZero)
         {
             // A species no measurement mentions cannot be reached; a target of reference states only is zero by definition.
-            return new RouteReport(target, model.Family, [], 0, SearchCut.None, 0, missing, estimate, options.MaxSteps);
+            return new RouteReport(target, model.Family, [], 0, SearchCut.None, 0, missing, estimate, options.MaxSteps, options.MaxSteps);
         }
 
         RouteSearchResult result = FindRoutes.To(model.ToRouteNetwork(), vector, options);
         var routes = result.Routes.Select((route, position) => Explain(model, target, route, position + 1)).ToArray();
         Species[] unreachable = result.UnreachableSpecies.Select(index => model.Unknowns[index]).ToArray();
-        return new RouteReport(target, model.Family, routes, result.RoutesFound, result.Cut, result.IndependentRouteCount, unreachable, estimate, options.MaxSteps);
+        return new RouteReport(target, model.Family, routes, result.RoutesFound, result.Cut, result.IndependentRouteCount, unreachable, estimate, options.MaxSteps, result.CompleteUpToSteps);
     }
 
     /// <summary>Spells out one route: each step transformed, the intermediates that cancel, and the sum.</summary>

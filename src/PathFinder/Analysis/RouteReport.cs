@@ -14,6 +14,7 @@ namespace PathFinder.Analysis;
 /// <param name="UnreachableSpecies">Species of the target that no measurement contains.</param>
 /// <param name="NetworkEstimate">The least-squares estimate of the target from the whole network, when it was computed and is estimable.</param>
 /// <param name="MaxSteps">The step bound used.</param>
+/// <param name="CompleteUpToSteps">Every route of at most this many steps was found (<see cref="RouteSearchResult.CompleteUpToSteps"/>).</param>
 public sealed record RouteReport(
     ChemicalEquation Target,
     PropertyFamily Family,
@@ -23,25 +24,38 @@ public sealed record RouteReport(
     int IndependentRoutes,
     IReadOnlyList<Species> UnreachableSpecies,
     DerivedEstimate? NetworkEstimate,
-    int MaxSteps)
+    int MaxSteps,
+    int CompleteUpToSteps)
 {
     /// <summary>Whether the enumeration is complete within its bound (nothing was cut).</summary>
     public bool Complete => Cut == SearchCut.None;
 
     /// <summary>Why the enumeration is incomplete, in words; empty when complete.</summary>
+    /// <remarks>Routes are searched by increasing size, so a budget or a stop is reported with the size it reached:
+    /// "all routes up to 3 steps were found; the time budget ran out while searching 4-step routes".</remarks>
     public string IncompleteReason
     {
         get
         {
-            var reasons = new List<string>();
-            if (Cut.HasFlag(SearchCut.StepBound))
+            if (Cut == SearchCut.None)
             {
-                reasons.Add($"longer routes than {MaxSteps} steps may exist (raise --max-steps)");
+                return "";
             }
 
+            if (Cut == SearchCut.StepBound)
+            {
+                return $"longer routes than {MaxSteps} steps may exist (raise --max-steps)";
+            }
+
+            var reasons = new List<string>();
             if (Cut.HasFlag(SearchCut.TimeBudget))
             {
                 reasons.Add("the time budget ran out");
+            }
+
+            if (Cut.HasFlag(SearchCut.WorkBudget))
+            {
+                reasons.Add("the work budget ran out");
             }
 
             if (Cut.HasFlag(SearchCut.Cancelled))
@@ -54,7 +68,11 @@ public sealed record RouteReport(
                 reasons.Add("the search stopped after the requested number of routes");
             }
 
-            return string.Join("; ", reasons);
+            string what = string.Join(" and ", reasons);
+            int next = CompleteUpToSteps + 1;
+            return CompleteUpToSteps > 0
+                ? $"all routes up to {CompleteUpToSteps} step{(CompleteUpToSteps == 1 ? "" : "s")} were found; {what} while searching {next}-step routes"
+                : $"{what} while searching {next}-step routes";
         }
     }
 }

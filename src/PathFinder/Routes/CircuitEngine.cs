@@ -21,62 +21,63 @@ internal sealed class CircuitEngine
 
     private readonly RouteNetwork _network;
     private readonly SearchBudget _budget;
-    private readonly int _maxSteps;
     private readonly bool[] _inSet;
     private readonly int[] _excluded;
     private readonly int[] _stamp;
     private readonly int[] _speciesCount;
     private readonly int[] _localColumn;
     private readonly List<int> _speciesList = [];
-    private readonly int[] _members;
-    private readonly int[] _newSpeciesOfMember;
-    private readonly ulong[][] _rows;
-    private readonly ulong[][] _combinations;
-    private readonly int[] _pivot;
-    private readonly int[] _rowExtent;
-    private readonly ulong[] _work;
-    private readonly ulong[] _workCombination;
-    private readonly List<int>[] _candidateBuffers;
+    private readonly List<ulong[]> _rows = [];
+    private readonly List<ulong[]> _combinations = [];
+    private readonly List<List<int>> _candidateBuffers = [];
     private readonly List<int> _unmatched = [];
+
+    // Per-member storage grows with the depth the search actually reaches (at most rank + 1 members) and the species
+    // it actually meets, never with the step bound: a bound of 10,000 on a small network costs what a bound of 10 does.
+    private int[] _members = new int[8];
+    private int[] _newSpeciesOfMember = new int[8];
+    private int[] _pivot = new int[8];
+    private int[] _rowExtent = new int[8];
+    private ulong[] _work = new ulong[16];
+    private ulong[] _workCombination = new ulong[8];
     private int _stampValue;
     private int _memberCount;
     private int _minClass;
+    private int _maxSteps;
+    private int _minSteps;
     private CircuitFound _onFound = (_, _) => true;
     private int[] _targetSpecies = [];
 
-    public CircuitEngine(RouteNetwork network, int maxSteps, int maxTargetSpecies, SearchBudget budget)
+    public CircuitEngine(RouteNetwork network, SearchBudget budget)
     {
         _network = network;
         _budget = budget;
-        _maxSteps = maxSteps;
         int classes = network.ClassCount;
         _inSet = new bool[classes];
         _excluded = new int[classes];
         _stamp = new int[classes];
         _speciesCount = new int[network.SpeciesIds.Length];
         _localColumn = new int[network.SpeciesIds.Length];
-        int maxSupport = network.Classes.Length == 0 ? 0 : network.Classes.Max(c => c.Species.Length);
-        int members = maxSteps + 2;
-        int maxCols = maxTargetSpecies + ((maxSteps + 1) * maxSupport) + 1;
-        _members = new int[members];
-        _newSpeciesOfMember = new int[members];
-        _rows = [.. Enumerable.Range(0, members).Select(_ => new ulong[maxCols])];
-        _combinations = [.. Enumerable.Range(0, members).Select(_ => new ulong[members])];
-        _pivot = new int[members];
-        _rowExtent = new int[members];
-        _work = new ulong[maxCols];
-        _workCombination = new ulong[members];
-        _candidateBuffers = [.. Enumerable.Range(0, members).Select(_ => new List<int>())];
     }
 
-    /// <summary>Enumerates circuits {t} ∪ S with S among classes ≥ <paramref name="minClass"/> and |S| ≤ max steps.</summary>
+    /// <summary>True when the last <see cref="Run"/> stopped a branch that could still grow at the step bound (longer circuits may exist).</summary>
+    public bool CutByStepBound { get; private set; }
+
+    /// <summary>Enumerates circuits {t} ∪ S with S among classes ≥ <paramref name="minClass"/> and |S| ≤ <paramref name="maxSteps"/>.</summary>
     /// <param name="targetSpecies">Internal species indices of the target, ascending.</param>
     /// <param name="targetValues">Target coefficients modulo p, nonzero.</param>
     /// <param name="minClass">Smallest class number allowed in S.</param>
+    /// <param name="maxSteps">Largest |S|.</param>
+    /// <param name="minSteps">Report only circuits with |S| ≥ this (one round of iterative deepening; 1 reports all).</param>
     /// <param name="onFound">Receives each circuit.</param>
-    public void Run(int[] targetSpecies, ulong[] targetValues, int minClass, CircuitFound onFound)
+    /// <remarks>The walk, and so the number of budget steps it takes, depends on <paramref name="maxSteps"/> only, not on
+    /// <paramref name="minSteps"/>.</remarks>
+    public void Run(int[] targetSpecies, ulong[] targetValues, int minClass, int maxSteps, int minSteps, CircuitFound onFound)
     {
         _minClass = minClass;
+        _maxSteps = maxSteps;
+        _minSteps = minSteps;
+        CutByStepBound = false;
         _onFound = onFound;
         _targetSpecies = targetSpecies;
         _memberCount = 0;
@@ -94,6 +95,11 @@ internal sealed class CircuitEngine
             return;
         }
 
+        if (depth == _candidateBuffers.Count)
+        {
+            _candidateBuffers.Add([]);
+        }
+
         List<int> candidates = _candidateBuffers[depth];
         candidates.Clear();
         if (!CollectCandidates(candidates))
@@ -103,7 +109,7 @@ internal sealed class CircuitEngine
 
         if (depth == _maxSteps)
         {
-            _budget.Mark(SearchCut.StepBound);
+            CutByStepBound = true;
             return;
         }
 
@@ -120,7 +126,7 @@ internal sealed class CircuitEngine
             if (lastStep && IntroducesSpecies(cls, c))
             {
                 // Adding c brings a species no other member can cancel within the bound: needs more steps.
-                _budget.Mark(SearchCut.StepBound);
+                CutByStepBound = true;
             }
             else
             {
@@ -130,7 +136,7 @@ internal sealed class CircuitEngine
                 {
                     Node(depth + 1);
                 }
-                else if (targetInvolved && AllNonzero())
+                else if (targetInvolved && depth + 1 >= _minSteps && AllNonzero())
                 {
                     if (!_onFound(_members.AsSpan(1, _memberCount - 1), _workCombination.AsSpan(0, _memberCount)))
                     {
@@ -268,6 +274,7 @@ internal sealed class CircuitEngine
     private bool AddMember(int classNumber, int[] species, ulong[] values, out bool targetInvolved)
     {
         int index = _memberCount++;
+        EnsureMemberCapacity(index + 1);
         _members[index] = classNumber;
         int newSpecies = 0;
         foreach (int s in species)
@@ -282,6 +289,11 @@ internal sealed class CircuitEngine
 
         _newSpeciesOfMember[index] = newSpecies;
         int cols = _speciesList.Count;
+        if (_work.Length < cols)
+        {
+            _work = new ulong[Math.Max(cols, 2 * _work.Length)];
+        }
+
         ulong[] w = _work;
         Array.Clear(w, 0, cols);
         for (int k = 0; k < species.Length; k++)
@@ -339,6 +351,16 @@ internal sealed class CircuitEngine
         }
 
         ulong inverse = Mersenne61.Inverse(w[pivot]);
+        if (index == _rows.Count)
+        {
+            _rows.Add(new ulong[Math.Max(cols, 16)]);
+            _combinations.Add(new ulong[index + 1]);
+        }
+        else if (_rows[index].Length < cols)
+        {
+            _rows[index] = new ulong[Math.Max(cols, 2 * _rows[index].Length)];
+        }
+
         ulong[] newRow = _rows[index];
         for (int k = 0; k < cols; k++)
         {
@@ -355,6 +377,21 @@ internal sealed class CircuitEngine
         _rowExtent[index] = cols;
         targetInvolved = false;
         return true;
+    }
+
+    private void EnsureMemberCapacity(int count)
+    {
+        if (_members.Length >= count)
+        {
+            return;
+        }
+
+        int size = Math.Max(count, 2 * _members.Length);
+        Array.Resize(ref _members, size);
+        Array.Resize(ref _newSpeciesOfMember, size);
+        Array.Resize(ref _pivot, size);
+        Array.Resize(ref _rowExtent, size);
+        Array.Resize(ref _workCombination, size);
     }
 
     // Rows are a stack indexed by member position, so only the species bookkeeping needs undoing.

@@ -90,12 +90,11 @@ public sealed class CycleSearch
         {
             double[] norms = [.. _network.Classes.Select(c => c.Norm).OrderByDescending(n => n).Take(_options.MaxSize)];
             certified = norms.Aggregate(1.0, (p, n) => p * n) < Mersenne61.Prime;
-            int maxSupport = _network.Classes.Max(c => c.Species.Length);
-            var engine = new CircuitEngine(_network, _options.MaxSize - 1, maxSupport, budget);
+            var engine = new CircuitEngine(_network, budget);
             for (int i = 0; i < _network.ClassCount && !budget.Stopped; i++)
             {
                 NetworkClass target = _network.Classes[i];
-                engine.Run(target.Species, target.Modular, i + 1, (classes, relation) =>
+                engine.Run(target.Species, target.Modular, i + 1, _options.MaxSize - 1, minSteps: 1, (classes, relation) =>
                 {
                     Fraction[] k = ClassCircuit.FactorsOf(_network, classes, relation, target.Primitive);
                     int[] cls = [i, .. classes];
@@ -103,6 +102,10 @@ public sealed class CycleSearch
                     ExpandAll(cls, alpha, Offer, budget);
                     return true;
                 });
+                if (engine.CutByStepBound)
+                {
+                    budget.Mark(SearchCut.StepBound);
+                }
             }
         }
 

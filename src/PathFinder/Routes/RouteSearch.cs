@@ -12,6 +12,10 @@ namespace PathFinder.Routes;
 /// Only the <see cref="RouteSearchOptions.MaxRoutes"/> class routes with the smallest such best uncertainty are kept,
 /// which provably contain the best routes over measurements; those are expanded best first. The order is exact once
 /// the search is complete; with a cut, it is the order among the routes found.</para>
+/// <para>Routes are searched by increasing size (iterative deepening): every route of n steps is found before any of
+/// n + 1, so a budget that cuts the search leaves every route up to <see cref="RouteSearchResult.CompleteUpToSteps"/>
+/// steps found, and raising <see cref="RouteSearchOptions.MaxSteps"/> never finds fewer routes within the same work
+/// budget.</para>
 /// </remarks>
 public sealed class RouteSearch
 {
@@ -26,6 +30,10 @@ public sealed class RouteSearch
         _options = options ?? new RouteSearchOptions();
         ArgumentOutOfRangeException.ThrowIfLessThan(_options.MaxSteps, 1);
         ArgumentOutOfRangeException.ThrowIfLessThan(_options.MaxRoutes, 0);
+        if (_options.WorkBudget is < 0)
+        {
+            throw new ArgumentOutOfRangeException(nameof(options), _options.WorkBudget, "The work budget must not be negative.");
+        }
     }
 
     /// <summary>Runs the search for <paramref name="target"/> (a nonzero vector over species).</summary>
@@ -37,7 +45,7 @@ public sealed class RouteSearch
             throw new ArgumentException("The target must be a nonzero vector; use the cycle search for closures.", nameof(target));
         }
 
-        var budget = new SearchBudget(_options.TimeBudget, _options.CancellationToken);
+        var budget = new SearchBudget(_options.TimeBudget, _options.CancellationToken, _options.WorkBudget);
         int[] unreachable = [.. target.Indices.ToArray().Where(s => !_network.SpeciesIndex.ContainsKey(s))];
         if (unreachable.Length > 0)
         {
@@ -56,8 +64,8 @@ public sealed class RouteSearch
         long found = 0, order = 0;
         TimeSpan? first = null;
         int maxRoutes = _options.MaxRoutes;
-        var engine = new CircuitEngine(_network, _options.MaxSteps, targetSpecies.Length, budget);
-        engine.Run(targetSpecies, targetModular, 0, (classes, relation) =>
+
+        bool Offer(ReadOnlySpan<int> classes, ReadOnlySpan<ulong> relation)
         {
             first ??= budget.Clock.Elapsed;
             long count = ClassCircuit.SaturatingProduct(_network, classes.ToArray());
@@ -85,7 +93,37 @@ public sealed class RouteSearch
             }
 
             return _options.StopAfter is not { } stop || found < stop;
-        });
+        }
+
+        // Iterative deepening by route size: round n walks the tree to depth n and reports the routes of exactly n
+        // steps. Rounds 1..n take the same steps whatever the step bound, so a larger bound never finds fewer routes
+        // within the same work budget (the depth-first walk to the full bound could spend a budget on long routes before
+        // reaching short ones). On a branching network the rounds before the last cost a fraction of it, as the tree
+        // widens with depth; on a long chain (a route of d steps and nothing else) the rounds add up to O(d³) work, the
+        // price of that guarantee (larger increments would break it for bounds between two rounds). The search stops
+        // early once a round reaches no branch cut by its bound: no longer route exists.
+        var engine = new CircuitEngine(_network, budget);
+        int completeUpTo = 0;
+        for (int size = 1; size <= _options.MaxSteps; size++)
+        {
+            engine.Run(targetSpecies, targetModular, 0, size, completeUpTo + 1, Offer);
+            if (budget.Stopped)
+            {
+                break;
+            }
+
+            if (!engine.CutByStepBound)
+            {
+                completeUpTo = _options.MaxSteps;
+                break;
+            }
+
+            completeUpTo = size;
+            if (size == _options.MaxSteps)
+            {
+                budget.Mark(SearchCut.StepBound);
+            }
+        }
 
         List<Route> routes = Expand([.. kept.UnorderedItems.Select(x => x.Element)], maxRoutes);
         (List<Route> marked, int rank) = MarkIndependent(routes);
@@ -99,6 +137,8 @@ public sealed class RouteSearch
             ExactnessCertified = certified,
             Elapsed = budget.Clock.Elapsed,
             FirstRouteElapsed = first,
+            CompleteUpToSteps = completeUpTo,
+            SearchSteps = budget.Steps,
         };
     }
 
@@ -124,6 +164,8 @@ public sealed class RouteSearch
         ExactnessCertified = certified,
         Elapsed = budget.Clock.Elapsed,
         FirstRouteElapsed = null,
+        CompleteUpToSteps = _options.MaxSteps,
+        SearchSteps = budget.Steps,
     };
 
     // Best-first expansion of class routes into measurement routes: each class route's member choices are enumerated

@@ -15,6 +15,14 @@ public sealed record RouteSearchResult
     /// <summary>True when every route within the step bound was found (no branch cut by the bound, budget, cancellation or stop).</summary>
     public bool Complete => Cut == SearchCut.None;
 
+    /// <summary>Every route of at most this many steps was found (0 when none is certain to be); equals the step bound when nothing but the bound cut the search.</summary>
+    /// <remarks>Routes are searched by increasing size, so a budget or a stop cuts the search while it looks at routes of
+    /// <see cref="CompleteUpToSteps"/> + 1 steps; some of those may already have been found.</remarks>
+    public required int CompleteUpToSteps { get; init; }
+
+    /// <summary>Search steps taken (see <see cref="RouteSearchOptions.WorkBudget"/>).</summary>
+    public long SearchSteps { get; init; }
+
     /// <summary>Rank of the factor vectors (over all measurements) of the returned routes.</summary>
     public required int IndependentRouteCount { get; init; }
 

@@ -156,10 +156,38 @@ public sealed class RoutesCommandTests : IDisposable
         using JsonDocument cutJson = JsonDocument.Parse(cut.Out);
         Assert.False(cutJson.RootElement.GetProperty("complete").GetBoolean());
         Assert.Contains("--max-steps", cutJson.RootElement.GetProperty("incompleteReason").GetString(), StringComparison.Ordinal);
+        Assert.Equal(["stepBound"], cutJson.RootElement.GetProperty("searchCut").EnumerateArray().Select(name => name.GetString()));
+        Assert.Equal(1, cutJson.RootElement.GetProperty("completeUpToSteps").GetInt32());
         Assert.Contains("no route found", cut.Error, StringComparison.Ordinal);
         Assert.Equal(ExitCodes.Success, full.ExitCode);
         using JsonDocument fullJson = JsonDocument.Parse(full.Out);
         Assert.True(fullJson.RootElement.GetProperty("complete").GetBoolean());
+        Assert.Equal(0, fullJson.RootElement.GetProperty("searchCut").GetArrayLength());
+        Assert.Equal(2, fullJson.RootElement.GetProperty("completeUpToSteps").GetInt32());
+    }
+
+    [Theory]
+    [InlineData("1001")]
+    [InlineData("30000")]
+    [InlineData("0")]
+    public void Routes_MaxStepsOutsideOneToAThousand_IsRefusedWithExitTwo(string maxSteps)
+    {
+        CliRun run = CliRun.Of("routes", Handbook(), "--target", "CO(g)", "--max-steps", maxSteps);
+
+        Assert.Equal(ExitCodes.InvalidInput, run.ExitCode);
+        Assert.Contains("--max-steps", run.Error, StringComparison.Ordinal);
+        Assert.DoesNotContain("   at ", run.Error, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Routes_MaxStepsAtTheLimit_IsAccepted()
+    {
+        CliRun run = CliRun.Of("routes", Handbook(), "--target", "CO(g)", "--max-steps", "1000", "--json");
+
+        Assert.Equal(ExitCodes.Success, run.ExitCode);
+        using JsonDocument json = JsonDocument.Parse(run.Out);
+        Assert.True(json.RootElement.GetProperty("complete").GetBoolean());
+        Assert.Equal(1000, json.RootElement.GetProperty("maxSteps").GetInt32());
     }
 
     [Fact]

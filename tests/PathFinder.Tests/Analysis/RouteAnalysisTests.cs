@@ -140,6 +140,41 @@ public sealed class RouteAnalysisTests : IDisposable
         Assert.Single(full.Routes);
     }
 
+    [Theory]
+    [InlineData(SearchCut.WorkBudget, 3, "all routes up to 3 steps were found; the work budget ran out while searching 4-step routes")]
+    [InlineData(SearchCut.TimeBudget, 1, "all routes up to 1 step were found; the time budget ran out while searching 2-step routes")]
+    [InlineData(SearchCut.StoppedEarly, 0, "the search stopped after the requested number of routes while searching 1-step routes")]
+    [InlineData(SearchCut.StepBound, 6, "longer routes than 6 steps may exist (raise --max-steps)")]
+    [InlineData(SearchCut.None, 6, "")]
+    public void IncompleteReason_SaysWhatCutTheSearch_AndUpToWhichSizeItIsComplete(SearchCut cut, int completeUpTo, string expected)
+    {
+        // Given a report of a 6-step search cut as stated
+        var report = new RouteReport(ChemicalEquation.FromTerms([]), PropertyFamily.Enthalpy, [], 0, cut, 0, [], null, 6, completeUpTo);
+
+        // Then the reason names the cut and the size up to which every route was found
+        Assert.Equal(expected, report.IncompleteReason);
+    }
+
+    [Fact]
+    public void Find_WithAWorkBudget_ReportsTheBudgetAndTheSizeReached()
+    {
+        // Given the graphite and CO combustions (one route of two steps)
+        ReactionNetwork network = HandbookData.ReadRows(
+            _folder,
+            "G1,C(graphite) + O2(g) -> CO2(g),dH,-393.51,0.13,kJ/mol,,bomb",
+            "G2,CO(g) + 1/2 O2(g) -> CO2(g),dH,-282.98,0.20,kJ/mol,,bomb");
+        PropertyModel model = PropertyModel.Build(network, PropertyFamily.Enthalpy);
+        ChemicalEquation target = TargetReaction.Parse("CO(g)", network).Value;
+
+        // When the search may take a single step of work
+        RouteReport report = RouteAnalysis.Find(model, target, new RouteSearchOptions { WorkBudget = 1 });
+
+        // Then it is cut by the work budget before any route, and says so
+        Assert.Equal(SearchCut.WorkBudget, report.Cut);
+        Assert.Empty(report.Routes);
+        Assert.Contains("the work budget ran out", report.IncompleteReason, StringComparison.Ordinal);
+    }
+
     [Fact]
     public void Find_SpeciesNoMeasurementContains_IsReportedUnreachable()
     {

@@ -106,4 +106,44 @@ public class CycleSearchTests
         (RouteNetwork network, _) = RandomNetworks.Create(1);
         Assert.Throws<ArgumentOutOfRangeException>(() => new CycleSearch(network, new CycleSearchOptions { WorkBudget = -1 }));
     }
+
+    [Fact]
+    public void Memory_DoesNotGrowWithTheSizeBound()
+    {
+        // Given a small random network
+        (RouteNetwork network, _) = RandomNetworks.Create(7);
+        var small = new CycleSearchOptions { MaxSize = 20 };
+        new CycleSearch(network, small).Run();
+
+        // When the cycles are searched with a size bound of 20 and of 20,000
+        long before = GC.GetAllocatedBytesForCurrentThread();
+        CycleSearchResult bounded = new CycleSearch(network, small).Run();
+        long boundedBytes = GC.GetAllocatedBytesForCurrentThread() - before;
+        before = GC.GetAllocatedBytesForCurrentThread();
+        CycleSearchResult huge = new CycleSearch(network, small with { MaxSize = 20_000 }).Run();
+        long hugeBytes = GC.GetAllocatedBytesForCurrentThread() - before;
+
+        // Then the results agree and the allocation does not depend on the bound
+        Assert.True(bounded.CyclesFound > 0);
+        Assert.Equal(bounded.CyclesFound, huge.CyclesFound);
+        Assert.True(hugeBytes < boundedBytes + 1_000_000, $"{hugeBytes:N0} bytes with 20,000, {boundedBytes:N0} with 20");
+    }
+
+    [Fact]
+    public void CycleOfAThousandMeasurements_IsFound_ThroughAWalkAThousandDeep()
+    {
+        // Given a chain A0 → … → A999 closed by A0 → A999: one cycle of 1,000 measurements, which the recursive walk
+        // (shared with route search) reaches 999 levels deep; the routes CLI accepts bounds up to 1,000 for this reason
+        var vectors = Enumerable.Range(0, 999).Select(i => SparseVector.Create((i, -1), (i + 1, 1))).ToList();
+        vectors.Add(SparseVector.Create((0, -1), (999, 1)));
+        var network = RouteNetwork.Create(vectors, [.. vectors.Select(_ => 1.0)], [.. vectors.Select(_ => 0.1)]);
+
+        // When the cycles are searched with a size bound of 1,000 on a test thread (a smaller stack than the main thread's)
+        CycleSearchResult result = new CycleSearch(network, new CycleSearchOptions { MaxSize = 1000 }).Run();
+
+        // Then the one cycle is found, completely
+        Cycle cycle = Assert.Single(result.Cycles);
+        Assert.Equal(1000, cycle.Size);
+        Assert.True(result.Complete);
+    }
 }

@@ -39,6 +39,34 @@ internal static class RandomNetworks
         return (RouteNetwork.Create(vectors, values, uncertainties), target);
     }
 
+    /// <summary>A complete-ish graph: each pair of <paramref name="species"/> species is joined by A → B with probability 0.8, a fifth of the edges measured twice (once doubled); the target is species 0 → species 1.</summary>
+    /// <remarks>Minimal routes are the simple paths from 0 to 1, so their number grows about (species − 2) times per step:
+    /// the shape on which a depth-first search to the full step bound once spent its whole budget on long routes.</remarks>
+    public static (RouteNetwork Network, SparseVector Target) CompleteIsh(int species, int seed)
+    {
+        var random = new Random(seed);
+        var vectors = new List<SparseVector>();
+        for (int a = 0; a < species; a++)
+        {
+            for (int b = a + 1; b < species; b++)
+            {
+                if (random.NextDouble() < 0.8)
+                {
+                    SparseVector edge = SparseVector.Create((a, -1), (b, 1));
+                    vectors.Add(edge);
+                    if (random.NextDouble() < 0.2)
+                    {
+                        vectors.Add(edge.Scale(new Fraction(2)));
+                    }
+                }
+            }
+        }
+
+        double[] values = [.. vectors.Select(_ => Math.Round((random.NextDouble() * 200) - 100, 1))];
+        double[] uncertainties = [.. vectors.Select(_ => Math.Round(0.1 + (random.NextDouble() * 2), 2))];
+        return (RouteNetwork.Create(vectors, values, uncertainties), SparseVector.Create((0, -1), (1, 1)));
+    }
+
     private static SparseVector RandomVector(Random random, int species, int count)
     {
         var entries = new List<(int, Fraction)>();

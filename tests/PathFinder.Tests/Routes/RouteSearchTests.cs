@@ -162,4 +162,143 @@ public class RouteSearchTests
         Assert.Equal(SearchCut.StoppedEarly, result.Cut);
         Assert.False(result.Complete);
     }
+
+    [Fact]
+    public void Memory_DoesNotGrowWithTheStepBound_BeyondWhatTheSearchReaches()
+    {
+        // Given a chain A0 → A1 → … → A12 (the route to A0 → A12 has 12 steps) plus a few shortcuts
+        var vectors = Enumerable.Range(0, 12).Select(i => SparseVector.Create((i, -1), (i + 1, 1))).ToList();
+        vectors.Add(SparseVector.Create((0, -1), (6, 1)));
+        vectors.Add(SparseVector.Create((6, -1), (12, 1)));
+        var network = RouteNetwork.Create(vectors, [.. vectors.Select(_ => 1.0)], [.. vectors.Select(_ => 0.5)]);
+        SparseVector target = SparseVector.Create((0, -1), (12, 1));
+        var small = new RouteSearchOptions { MaxSteps = 20, MaxRoutes = int.MaxValue };
+        FindRoutes.To(network, target, small); // JIT and first-use allocations are not charged below
+
+        // When searched with a bound of 20 and with a bound of 20,000 (which once allocated gigabytes)
+        long before = GC.GetAllocatedBytesForCurrentThread();
+        RouteSearchResult bounded = FindRoutes.To(network, target, small);
+        long boundedBytes = GC.GetAllocatedBytesForCurrentThread() - before;
+        before = GC.GetAllocatedBytesForCurrentThread();
+        RouteSearchResult huge = FindRoutes.To(network, target, small with { MaxSteps = 20_000 });
+        long hugeBytes = GC.GetAllocatedBytesForCurrentThread() - before;
+
+        // Then both find the same four routes, completely, and allocate about the same (well under a megabyte more)
+        Assert.True(bounded.Complete && huge.Complete);
+        Assert.Equal(4, bounded.RoutesFound);
+        Assert.Equal(bounded.RoutesFound, huge.RoutesFound);
+        Assert.True(hugeBytes < boundedBytes + 1_000_000, $"{hugeBytes:N0} bytes with 20,000 steps, {boundedBytes:N0} with 20");
+    }
+
+    [Theory]
+    [InlineData(0.3)]
+    [InlineData(1.0)]
+    [InlineData(3.0)]
+    public void MoreSteps_NeverFindFewerRoutes_WithinTheSameWorkBudget(double budgetOverFourStepSearch)
+    {
+        // Given a complete-ish network of 16 species (about 2,000 routes of at most 4 steps, far more of 5 and 6), and a
+        // work budget that is a fraction or a multiple of what the complete 4-step search takes
+        (RouteNetwork network, SparseVector target) = RandomNetworks.CompleteIsh(16, seed: 13);
+        var four = new RouteSearchOptions { MaxSteps = 4, MaxRoutes = int.MaxValue };
+        long stepsOfFour = FindRoutes.To(network, target, four).SearchSteps;
+        four = four with { WorkBudget = (long)(budgetOverFourStepSearch * stepsOfFour) };
+
+        // When searched up to 4 and up to 6 steps with that budget
+        RouteSearchResult shallow = FindRoutes.To(network, target, four);
+        RouteSearchResult deep = FindRoutes.To(network, target, four with { MaxSteps = 6 });
+
+        // Then every route of the 4-step search is among the 6-step search's, which was cut by the budget
+        var deepKeys = deep.Routes.Select(r => RandomNetworks.Key(r.Measurements, r.Factors)).ToHashSet(StringComparer.Ordinal);
+        Assert.All(shallow.Routes, r => Assert.Contains(RandomNetworks.Key(r.Measurements, r.Factors), deepKeys));
+        Assert.True(shallow.RoutesFound > 100, $"{shallow.RoutesFound} routes");
+        Assert.True(deep.RoutesFound >= shallow.RoutesFound);
+        Assert.Equal(SearchCut.WorkBudget, deep.Cut);
+        Assert.True(deep.CompleteUpToSteps >= shallow.CompleteUpToSteps);
+
+        // and each says what cut it: the budget before all 4-step routes were found, else the 4-step bound
+        if (budgetOverFourStepSearch < 1)
+        {
+            Assert.Equal(SearchCut.WorkBudget, shallow.Cut);
+            Assert.True(shallow.CompleteUpToSteps < 4);
+            Assert.Equal(shallow.RoutesFound, deep.RoutesFound);
+        }
+        else
+        {
+            Assert.Equal(SearchCut.StepBound, shallow.Cut);
+            Assert.Equal(4, shallow.CompleteUpToSteps);
+            Assert.Equal(4, deep.CompleteUpToSteps);
+        }
+
+        if (budgetOverFourStepSearch > 1)
+        {
+            Assert.True(deep.RoutesFound > shallow.RoutesFound);
+            Assert.Contains(deep.Routes, r => r.Steps == 5);
+        }
+    }
+
+    [Fact]
+    public void WorkBudget_CutsAtTheSamePointOnEveryRun_AndEveryShorterRouteIsFound()
+    {
+        // Given a complete-ish network and every route of at most 3 steps (a complete search)
+        (RouteNetwork network, SparseVector target) = RandomNetworks.CompleteIsh(12, seed: 5);
+        RouteSearchResult three = FindRoutes.To(network, target, new RouteSearchOptions { MaxSteps = 3, MaxRoutes = int.MaxValue });
+
+        // When a 6-step search runs twice with a budget that ends during the longer routes
+        var options = new RouteSearchOptions { MaxSteps = 6, MaxRoutes = int.MaxValue, WorkBudget = three.SearchSteps + 2_000 };
+        RouteSearchResult first = FindRoutes.To(network, target, options);
+        RouteSearchResult second = FindRoutes.To(network, target, options);
+
+        // Then both runs agree route for route, the cut is the work budget, and the 3-step routes are all there
+        Assert.Equal(SearchCut.StepBound, three.Cut);
+        Assert.Equal(SearchCut.WorkBudget, first.Cut);
+        Assert.False(first.Complete);
+        Assert.Equal(first.RoutesFound, second.RoutesFound);
+        Assert.Equal(first.Routes.Select(r => RandomNetworks.Key(r.Measurements, r.Factors)), second.Routes.Select(r => RandomNetworks.Key(r.Measurements, r.Factors)));
+        Assert.Equal(options.WorkBudget + 1, first.SearchSteps);
+        Assert.True(first.CompleteUpToSteps >= 3);
+        var keys = first.Routes.Select(r => RandomNetworks.Key(r.Measurements, r.Factors)).ToHashSet(StringComparer.Ordinal);
+        Assert.All(three.Routes, r => Assert.Contains(RandomNetworks.Key(r.Measurements, r.Factors), keys));
+    }
+
+    [Fact]
+    public void FirstRouteFound_IsAShortestRoute()
+    {
+        for (int seed = 0; seed < Networks; seed++)
+        {
+            // Given a random network whose shortest route has n steps
+            (RouteNetwork network, SparseVector target) = RandomNetworks.Create(seed);
+            var all = RandomNetworks.BruteForceRoutes(network, target);
+            if (all.Count == 0)
+            {
+                continue;
+            }
+
+            // When the search stops after its first route
+            RouteSearchResult result = FindRoutes.To(network, target, new RouteSearchOptions { MaxSteps = 10, StopAfter = 1 });
+
+            // Then that route has n steps and every shorter size is reported complete
+            int shortest = all.Min(e => e.Members.Length);
+            Assert.Equal(shortest, result.Routes[0].Steps);
+            Assert.True(result.CompleteUpToSteps >= shortest - 1, $"seed {seed}");
+        }
+    }
+
+    [Fact]
+    public void ChainRoute_OfTwoHundredSteps_IsFound_WithABoundOfAThousand()
+    {
+        // Given a chain A0 → A1 → … → A200
+        var vectors = Enumerable.Range(0, 200).Select(i => SparseVector.Create((i, -1), (i + 1, 1))).ToList();
+        var network = RouteNetwork.Create(vectors, [.. vectors.Select(_ => 1.0)], [.. vectors.Select(_ => 0.1)]);
+
+        // When A0 → A200 is searched with a bound of 1,000 (the CLI's largest)
+        RouteSearchResult result = FindRoutes.To(network, SparseVector.Create((0, -1), (200, 1)), new RouteSearchOptions { MaxSteps = 1000 });
+
+        // Then its one route is found with every factor 1, and the search is complete: it never went past 200 steps
+        Route route = Assert.Single(result.Routes);
+        Assert.Equal(200, route.Steps);
+        Assert.All(route.Factors, f => Assert.Equal(Fraction.One, f));
+        Assert.Equal(200.0, route.Value, 9);
+        Assert.True(result.Complete);
+        Assert.Equal(1000, result.CompleteUpToSteps);
+    }
 }
