@@ -167,7 +167,7 @@ public sealed class RoutesCommandTests : IDisposable
     }
 
     [Theory]
-    [InlineData("1001")]
+    [InlineData("65")]
     [InlineData("30000")]
     [InlineData("0")]
     public void Routes_MaxStepsOutsideOneToAThousand_IsRefusedWithExitTwo(string maxSteps)
@@ -182,12 +182,12 @@ public sealed class RoutesCommandTests : IDisposable
     [Fact]
     public void Routes_MaxStepsAtTheLimit_IsAccepted()
     {
-        CliRun run = CliRun.Of("routes", Handbook(), "--target", "CO(g)", "--max-steps", "1000", "--json");
+        CliRun run = CliRun.Of("routes", Handbook(), "--target", "CO(g)", "--max-steps", PathFinder.Cli.Commands.RoutesCommand.MaxStepsLimit.ToString(System.Globalization.CultureInfo.InvariantCulture), "--json");
 
         Assert.Equal(ExitCodes.Success, run.ExitCode);
         using JsonDocument json = JsonDocument.Parse(run.Out);
         Assert.True(json.RootElement.GetProperty("complete").GetBoolean());
-        Assert.Equal(1000, json.RootElement.GetProperty("maxSteps").GetInt32());
+        Assert.Equal(PathFinder.Cli.Commands.RoutesCommand.MaxStepsLimit, json.RootElement.GetProperty("maxSteps").GetInt32());
     }
 
     [Fact]
