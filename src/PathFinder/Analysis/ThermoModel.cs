@@ -282,12 +282,14 @@ public sealed class ThermoModel
     }
 
     /// <summary>The heat capacity of a reaction from the model's Cp data (the electron carries none).</summary>
-    public ReactionHeatCapacity<Species> HeatCapacityOf(ChemicalEquation equation)
+    public ReactionHeatCapacity<Species> HeatCapacityOf(ChemicalEquation equation) => HeatCapacityOf(equation, _heatCapacities);
+
+    private static ReactionHeatCapacity<Species> HeatCapacityOf(ChemicalEquation equation, IReadOnlyDictionary<Species, IHeatCapacity> heatCapacities)
     {
         ArgumentNullException.ThrowIfNull(equation);
         return new ReactionHeatCapacity<Species>(equation.Terms
             .Where(term => !term.Species.Formula.IsElectron)
-            .Select(term => new ReactionSpecies<Species>(term.Species, term.Coefficient.ToDouble(), _heatCapacities.GetValueOrDefault(term.Species))));
+            .Select(term => new ReactionSpecies<Species>(term.Species, term.Coefficient.ToDouble(), heatCapacities.GetValueOrDefault(term.Species))));
     }
 
     /// <summary>(∫ΔrCp dT − T·∫ΔrCp/T dT)/1000 from <paramref name="from"/> to <paramref name="to"/>, in kJ/mol: what heat capacities add to ΔrG°(T) beyond ΔrH°(from) − T·ΔrS°(from).</summary>
@@ -409,9 +411,7 @@ public sealed class ThermoModel
         // ΔrG°(T) = ΔrH°(298.15) − T·ΔrS°(298.15) + (∫ΔrCp dT − T·∫ΔrCp/T dT): the row carries the first two terms, the value
         // loses the third. Without heat capacities the third is taken as 0 (ΔrCp = 0), which the output says.
         string at = temperature.ToString("0.##", CultureInfo.InvariantCulture);
-        var reaction = new ReactionHeatCapacity<Species>(measurement.Equation.Terms
-            .Where(term => !term.Species.Formula.IsElectron)
-            .Select(term => new ReactionSpecies<Species>(term.Species, term.Coefficient.ToDouble(), heatCapacities.GetValueOrDefault(term.Species))));
+        ReactionHeatCapacity<Species> reaction = HeatCapacityOf(measurement.Equation, heatCapacities);
         var adjustments = prepared.Adjustments.ToList();
         if (!reaction.IsComplete)
         {
